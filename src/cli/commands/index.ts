@@ -1,0 +1,7 @@
+/** Every command of the command line, in the order `gradus --help` lists them. */
+import type { CommandSpec } from '../command.js';
+import { demoCommand } from './demo.js';
+import { qseriesCommand } from './qseries.js';
+import { versionCommand } from './version.js';
+
+export const COMMANDS: readonly CommandSpec[] = [qseriesCommand, demoCommand, versionCommand];

@@ -1,0 +1,70 @@
+/**
+ * Entry of the command line: dispatches to a command, turns user errors into one line
+ * on stderr with exit code 2, and internal errors into exit code 1.
+ */
+import { isUserError } from '../core/errors.js';
+import { unknownNameMessage } from '../core/suggest.js';
+import { VERSION } from '../version.js';
+import type { CommandIO } from './command.js';
+import { COMMANDS } from './commands/index.js';
+import { commandHelp, mainHelp } from './help.js';
+import { parseArgs } from './parse-args.js';
+import { stderrProgress } from './progress.js';
+
+export function defaultIO(): CommandIO {
+  return {
+    out: (s) => process.stdout.write(s + '\n'),
+    err: (s) => process.stderr.write(s + '\n'),
+    progress: stderrProgress((s) => process.stderr.write(s), Boolean(process.stderr.isTTY)),
+    env: process.env,
+    cwd: process.cwd(),
+  };
+}
+
+/** Run the command line on argv (without node and script); resolves to the exit code. */
+export async function main(argv: readonly string[], io: CommandIO = defaultIO()): Promise<number> {
+  const [name, ...rest] = argv;
+  try {
+    if (name === undefined) {
+      // No command: the terminal app on its demo session, or the text demo without it.
+      const start = COMMANDS.find((c) => c.name === 'app') ?? COMMANDS.find((c) => c.name === 'demo');
+      if (!start) {
+        io.out(mainHelp(COMMANDS, VERSION));
+        return 0;
+      }
+      await start.run({ positionals: [], options: {} }, io);
+      return 0;
+    }
+    if (name === '--help' || name === '-h' || name === 'help') {
+      const target = rest[0] ? COMMANDS.find((c) => c.name === rest[0]) : undefined;
+      io.out(target ? commandHelp(target) : mainHelp(COMMANDS, VERSION));
+      return 0;
+    }
+    if (name === '--version') {
+      io.out(VERSION);
+      return 0;
+    }
+    const spec = COMMANDS.find((c) => c.name === name);
+    if (!spec) {
+      io.err(`gradus: ${unknownNameMessage('command', name, COMMANDS.map((c) => c.name))}; see gradus --help`);
+      return 2;
+    }
+    if (rest.includes('--help') || rest.includes('-h')) {
+      io.out(commandHelp(spec));
+      return 0;
+    }
+    const args = parseArgs(spec, rest);
+    await spec.run(args, io);
+    return 0;
+  } catch (e) {
+    io.progress.finish();
+    if (isUserError(e)) {
+      io.err(`gradus: ${e.message.split('\n')[0]}`);
+      return 2;
+    }
+    const msg = e instanceof Error ? e.message : String(e);
+    io.err(`gradus: internal error (a bug in gradus, please report it): ${msg.split('\n')[0]}`);
+    if (io.env['GRADUS_DEBUG'] && e instanceof Error && e.stack) io.err(e.stack);
+    return 1;
+  }
+}

@@ -1,0 +1,6 @@
+/** The tool's version, read once from package.json (carried in every result's provenance). */
+import { readFileSync } from 'node:fs';
+
+export const VERSION: string = (
+  JSON.parse(readFileSync(new URL('../package.json', import.meta.url), 'utf8')) as { version: string }
+).version;

@@ -1,0 +1,58 @@
+/** The command line as users meet it: a child process. */
+import { describe, expect, it } from 'vitest';
+import { runCli } from '../helpers/cli.js';
+
+describe('gradus command line (child process)', () => {
+  it('--help lists the commands', () => {
+    const r = runCli(['--help']);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('qseries');
+    expect(r.stdout).toContain('usage: gradus <command>');
+  });
+  it('<cmd> --help shows the options of a command', () => {
+    const r = runCli(['qseries', '--help']);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('--n N');
+    expect(r.stdout).toContain('ordered-stirling');
+  });
+  it('version prints the package version', () => {
+    const r = runCli(['version']);
+    expect(r.code).toBe(0);
+    expect(r.stdout.trim()).toMatch(/^\d+\.\d+\.\d+$/);
+  });
+  it('qseries --json prints exactly one JSON document (q-Stirling, checked by the recurrence by hand)', () => {
+    const r = runCli(['qseries', 'stirling', '--n', '4', '--k', '2', '--json']);
+    expect(r.code).toBe(0);
+    const doc = JSON.parse(r.stdout);
+    // Stir_q(4,2) = 3 + 3q + q^2 (MATH.md §1 recurrence, worked by hand)
+    expect(doc.series).toEqual([3, 3, 1]);
+    expect(doc.atOne).toBe(7);
+  });
+  it('qseries factorial prints text', () => {
+    const r = runCli(['qseries', 'factorial', '--n', '3']);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('[3]_q! = q^3 + 2*q^2 + 2*q + 1');
+  });
+  it('bad input exits 2 with one line on stderr and no stack trace', () => {
+    for (const args of [
+      ['qseries', 'factorial', '--n', '-3'],
+      ['qseries', 'nosuch', '--n', '3'],
+      ['qseries', 'stirling', '--n', '3'],
+      ['frobnicate'],
+      ['qseries', 'factorial', '--nn', '3'],
+    ]) {
+      const r = runCli(args);
+      expect(r.code, args.join(' ')).toBe(2);
+      expect(r.stderr.trim().split('\n')).toHaveLength(1);
+      expect(r.stderr).not.toMatch(/\s+at\s/);
+      expect(r.stdout).toBe('');
+    }
+    expect(runCli(['qseries', 'factorial', '--n', '-3']).stderr).toContain('--n must be an integer from 0 to 200');
+  });
+  it('integers beyond 2^53 are strings in JSON', () => {
+    const r = runCli(['qseries', 'factorial', '--n', '30', '--json']);
+    const doc = JSON.parse(r.stdout);
+    expect(typeof doc.atOne).toBe('string');
+    expect(doc.atOne).toBe('265252859812191058636308480000000');
+  });
+});
