@@ -1,0 +1,64 @@
+/**
+ * The plug-in shapes every family, statistic and transform follows (DESIGN.md).
+ * Registries (objects/index.ts, statistics/index.ts) list them; contract tests run
+ * every entry through the same checks.
+ */
+import type { Partition } from '../core/partitions.js';
+
+/** A parameter of a family: an integer (n, k, …) or an integer list (a shape, a content). */
+export interface ParamSpec {
+  readonly name: string;
+  readonly kind: 'int' | 'partition' | 'list';
+  readonly description: string;
+  readonly min?: number;
+  readonly max?: number;
+  readonly optional?: boolean;
+}
+
+export type ParamValue = number | readonly number[];
+export type Params = Readonly<Record<string, ParamValue | undefined>>;
+
+export interface Family<T> {
+  readonly id: string;
+  readonly description: string;
+  readonly source: string;
+  readonly params: readonly ParamSpec[];
+  /** Throws InputError naming the parameter when params are out of range. */
+  validate(params: Params): void;
+  /** Streams every object exactly once (no array of all objects). */
+  generate(params: Params): Iterable<T>;
+  /** The exact count, by formula or recurrence (checked against generate in tests). */
+  count(params: Params): bigint;
+  /** Text drawing (may be several lines). */
+  render(obj: T): string;
+  /** A uniformly (or at least fairly) random object, for property tests. */
+  sample(params: Params, random: () => number): T;
+  /** A canonical one-line key (distinct objects have distinct keys). */
+  key(obj: T): string;
+  /** A word whose (inverse) descent set gives a quasisymmetric F for Frobenius-level sums. */
+  readingWord?(obj: T): readonly number[];
+  /** A shape, for Σ q^stat s_shape sums. */
+  shape?(obj: T): Partition;
+  /** Small parameter sets the contract tests use. */
+  readonly testParams: readonly Params[];
+}
+
+export interface Statistic<T> {
+  readonly id: string;
+  readonly family: string;
+  readonly description: string;
+  readonly source: string;
+  /** Worked examples [object, value] checked by the contract tests. */
+  readonly examples: readonly (readonly [T, number])[];
+  compute(obj: T): number;
+}
+
+export interface Transform<A, B> {
+  readonly id: string;
+  readonly from: string; // family id
+  readonly to: string; // family id
+  readonly description: string;
+  readonly source: string;
+  readonly examples: readonly (readonly [A, B])[];
+  apply(obj: A): B;
+}
