@@ -1,0 +1,73 @@
+/**
+ * A one-line text field: typing inserts at the cursor, ←/→ Home/End move, Backspace
+ * deletes, Enter submits, Esc leaves. Drawn with a visible cursor mark so it reads the
+ * same with and without colour.
+ */
+import { Text, useInput } from 'ink';
+import { useState } from 'react';
+import { useTheme } from '../ThemeContext.js';
+
+export interface LineInputProps {
+  readonly label: string;
+  readonly value: string;
+  readonly active: boolean;
+  readonly width: number;
+  onChange(value: string): void;
+  onSubmit(value: string): void;
+  onLeave(): void;
+}
+
+export function LineInput(props: LineInputProps) {
+  const theme = useTheme();
+  const [cursor, setCursor] = useState(props.value.length);
+  const pos = Math.min(cursor, props.value.length);
+  useInput(
+    (input, key) => {
+      const v = props.value;
+      if (key.return) return props.onSubmit(v);
+      if (key.escape) return props.onLeave();
+      if (key.tab) return;
+      if (key.leftArrow) return setCursor(Math.max(0, pos - 1));
+      if (key.rightArrow) return setCursor(Math.min(v.length, pos + 1));
+      if (key.home || (key.ctrl && input === 'a')) return setCursor(0);
+      if (key.end || (key.ctrl && input === 'e')) return setCursor(v.length);
+      if (key.ctrl && input === 'u') {
+        setCursor(0);
+        return props.onChange('');
+      }
+      if (key.backspace || key.delete) {
+        if (pos === 0) return;
+        setCursor(pos - 1);
+        return props.onChange(v.slice(0, pos - 1) + v.slice(pos));
+      }
+      if (key.ctrl || key.meta || key.upArrow || key.downArrow || key.pageUp || key.pageDown) return;
+      // Printable text (a paste arrives as one string); control characters are dropped.
+      const clean = input.replace(/[\u0000-\u001f\u007f]/g, '');
+      if (clean === '') return;
+      setCursor(pos + clean.length);
+      props.onChange(v.slice(0, pos) + clean + v.slice(pos));
+    },
+    { isActive: props.active },
+  );
+  const room = Math.max(8, props.width - props.label.length - 3);
+  // Keep the cursor in view when the text is longer than the field.
+  const start = Math.max(0, pos - room + 1);
+  const shown = props.value.slice(start, start + room);
+  const at = pos - start;
+  if (!props.active) {
+    return (
+      <Text wrap="truncate">
+        <Text {...theme.style('dim')}>{props.label} </Text>
+        {shown}
+      </Text>
+    );
+  }
+  return (
+    <Text wrap="truncate">
+      <Text {...theme.style('key')}>{props.label}&gt;</Text>
+      {shown.slice(0, at)}
+      <Text inverse={theme.color}>{theme.color ? (shown[at] ?? ' ') : '▏'}</Text>
+      {theme.color ? shown.slice(at + 1) : shown.slice(at)}
+    </Text>
+  );
+}

@@ -1,0 +1,28 @@
+/**
+ * Runs the app in the terminal: switches to the alternate screen (so the shell's text is
+ * back after quitting), keeps console output from breaking the frame, and resolves when
+ * the user quits (q or Ctrl+C).
+ */
+import { render } from 'ink';
+import { App } from './App.js';
+import type { ScreenId } from './screens.js';
+
+export async function runApp(options: { readonly initialScreen?: ScreenId; readonly cwd: string; readonly env: Readonly<Record<string, string | undefined>> }): Promise<void> {
+  const out = process.stdout;
+  const alt = Boolean(out.isTTY);
+  // React reports errors caught by a screen's boundary on console.error with a stack;
+  // the boundary already shows the message, so keep the trace off the terminal.
+  const consoleError = console.error;
+  console.error = () => {};
+  if (alt) out.write('\x1b[?1049h\x1b[H');
+  try {
+    const instance = render(<App env={options.env} cwd={options.cwd} initialScreen={options.initialScreen} />, {
+      exitOnCtrlC: true,
+      patchConsole: true,
+    });
+    await instance.waitUntilExit();
+  } finally {
+    if (alt) out.write('\x1b[?1049l');
+    console.error = consoleError;
+  }
+}

@@ -1,0 +1,124 @@
+/** The screens of the app, in tab order, with their jump keys and help-line keys. */
+
+export type ScreenId = 'tour' | 'families' | 'statistics' | 'modules' | 'symfun' | 'search' | 'export' | 'help';
+
+export interface KeyHelp {
+  readonly keys: string;
+  readonly action: string;
+}
+
+export interface ScreenInfo {
+  readonly id: ScreenId;
+  readonly jump: string;
+  readonly tab: string;
+  readonly title: string;
+  readonly keys: readonly KeyHelp[];
+}
+
+export const SCREENS: readonly ScreenInfo[] = [
+  {
+    id: 'tour',
+    jump: '1',
+    tab: 'Tour',
+    title: 'Demo session: a seed of our own, its module, a search, an export',
+    keys: [
+      { keys: 'Enter', action: 'run the next step' },
+      { keys: 'r', action: 'start over' },
+    ],
+  },
+  {
+    id: 'families',
+    jump: '2',
+    tab: 'Families',
+    title: 'Families of objects with statistics',
+    keys: [
+      { keys: '←/→', action: 'family' },
+      { keys: '↑/↓ PgUp/PgDn', action: 'scroll' },
+      { keys: 'p', action: 'edit parameters' },
+      { keys: 's', action: 'add/cycle statistic' },
+      { keys: 'd', action: 'drop statistic' },
+    ],
+  },
+  {
+    id: 'statistics',
+    jump: '3',
+    tab: 'Statistics',
+    title: 'Distribution of a statistic, or the joint table of two',
+    keys: [
+      { keys: '←/→', action: 'family' },
+      { keys: '↑/↓', action: 'first statistic' },
+      { keys: 'j', action: 'second statistic (joint table)' },
+      { keys: '+/-', action: 'size' },
+      { keys: 'p', action: 'edit parameters' },
+      { keys: 'g', action: 'send to search' },
+    ],
+  },
+  {
+    id: 'modules',
+    jump: '4',
+    tab: 'Modules',
+    title: 'Closure of a seed under operators: Hilbert and Frobenius series',
+    keys: [
+      { keys: 'e', action: 'edit seed/n/k/operators' },
+      { keys: 'Enter', action: 'compute' },
+      { keys: 'x', action: 'cancel' },
+      { keys: 'arrows', action: 'select cell' },
+      { keys: 'g', action: 'send series to search' },
+    ],
+  },
+  {
+    id: 'symfun',
+    jump: '5',
+    tab: 'SymFun',
+    title: 'Symmetric functions: evaluate an expression',
+    keys: [
+      { keys: 'e', action: 'edit expression' },
+      { keys: 'Enter', action: 'evaluate' },
+      { keys: '↑/↓', action: 'scroll' },
+      { keys: 'g', action: 'send to search' },
+    ],
+  },
+  {
+    id: 'search',
+    jump: '6',
+    tab: 'Search',
+    title: 'Search the catalogue for a series',
+    keys: [
+      { keys: 'e', action: 'type a series' },
+      { keys: 'Enter', action: 'search' },
+      { keys: 'x', action: 'cancel' },
+      { keys: '↑/↓', action: 'browse candidates' },
+    ],
+  },
+  {
+    id: 'export',
+    jump: '7',
+    tab: 'Export',
+    title: 'Write a result to a file',
+    keys: [
+      { keys: '↑/↓', action: 'result' },
+      { keys: '←/→', action: 'format' },
+      { keys: 'e', action: 'edit file name' },
+      { keys: 'Enter', action: 'write' },
+    ],
+  },
+  {
+    id: 'help',
+    jump: '?',
+    tab: 'Help',
+    title: 'Every key of every screen',
+    keys: [{ keys: '↑/↓', action: 'scroll' }],
+  },
+];
+
+export const GLOBAL_KEYS: readonly KeyHelp[] = [
+  { keys: 'Tab / Shift+Tab', action: 'next / previous screen' },
+  { keys: '1–7', action: 'jump to a screen (when no field is being edited)' },
+  { keys: '?', action: 'this help' },
+  { keys: 'Esc', action: 'leave the field being edited' },
+  { keys: 'q or Ctrl+C', action: 'quit (Ctrl+C also while editing)' },
+];
+
+export function screenInfo(id: ScreenId): ScreenInfo {
+  return SCREENS.find((s) => s.id === id) ?? SCREENS[0]!;
+}

@@ -1,0 +1,38 @@
+/**
+ * What the screens share: the results computed so far (each may carry a series to search
+ * and an engine result to export) and which of them is "current" for the search.
+ */
+import type { Series } from '../series/series.js';
+
+export type ItemOrigin = 'module' | 'symfun' | 'statistics' | 'typed' | 'search' | 'family';
+
+export interface SessionItem {
+  readonly id: number;
+  readonly title: string;
+  readonly origin: ItemOrigin;
+  /** A series the search can take. */
+  readonly series?: Series;
+  /** The engine's own result, kept whole for export. */
+  readonly payload?: unknown;
+}
+
+export interface Session {
+  readonly items: readonly SessionItem[];
+  /** Id of the item the search screen starts from. */
+  readonly current: number | undefined;
+}
+
+export const EMPTY_SESSION: Session = { items: [], current: undefined };
+
+export type NewItem = Omit<SessionItem, 'id'>;
+
+/** Add an item (the newest first in lists); an item with a series becomes current. */
+export function addItem(s: Session, item: NewItem): [Session, number] {
+  const id = s.items.reduce((m, x) => Math.max(m, x.id), 0) + 1;
+  const items = [...s.items, { ...item, id }];
+  return [{ items, current: item.series ? id : s.current }, id];
+}
+
+export function currentItem(s: Session): SessionItem | undefined {
+  return s.items.find((x) => x.id === s.current);
+}
