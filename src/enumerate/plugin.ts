@@ -41,6 +41,18 @@ export interface Family<T> {
   shape?(obj: T): Partition;
   /** Small parameter sets the contract tests use. */
   readonly testParams: readonly Params[];
+  /**
+   * Optional fast path: calls f once per object, passing a buffer that is REUSED between
+   * calls (valid only during the call; copy it to keep it). With a shard {index, count}
+   * only that shard's objects are visited; the shards 0..count−1 partition the family.
+   */
+  visit?(params: Params, f: (obj: T) => void, shard?: Shard): void;
+}
+
+/** One part of a family split for parallel work (index in 0..count−1). */
+export interface Shard {
+  readonly index: number;
+  readonly count: number;
 }
 
 export interface Statistic<T> {
