@@ -35,8 +35,9 @@ export const SCREENS: readonly ScreenInfo[] = [
       { keys: '←/→', action: 'family' },
       { keys: '↑/↓ PgUp/PgDn', action: 'scroll' },
       { keys: 'p', action: 'edit parameters' },
-      { keys: 's', action: 'add/cycle statistic' },
-      { keys: 'd', action: 'drop statistic' },
+      { keys: 'a', action: 'add statistic' },
+      { keys: 's', action: 'change last statistic' },
+      { keys: 'd', action: 'drop last statistic' },
     ],
   },
   {
@@ -63,7 +64,8 @@ export const SCREENS: readonly ScreenInfo[] = [
       { keys: 'Enter', action: 'compute' },
       { keys: 'x', action: 'cancel' },
       { keys: 'arrows', action: 'select cell' },
-      { keys: 'g', action: 'send series to search' },
+      { keys: 'g', action: 'search the selected row' },
+      { keys: 'G', action: 'search the whole table (q,t)' },
     ],
   },
   {

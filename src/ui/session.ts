@@ -2,7 +2,7 @@
  * What the screens share: the results computed so far (each may carry a series to search
  * and an engine result to export) and which of them is "current" for the search.
  */
-import type { Series } from '../series/series.js';
+import type { Target } from '../series/target.js';
 
 export type ItemOrigin = 'module' | 'symfun' | 'statistics' | 'typed' | 'search' | 'family';
 
@@ -10,8 +10,8 @@ export interface SessionItem {
   readonly id: number;
   readonly title: string;
   readonly origin: ItemOrigin;
-  /** A series the search can take. */
-  readonly series?: Series;
+  /** A target (series over n, k) the search can take. */
+  readonly target?: Target;
   /** The engine's own result, kept whole for export. */
   readonly payload?: unknown;
 }
@@ -30,7 +30,7 @@ export type NewItem = Omit<SessionItem, 'id'>;
 export function addItem(s: Session, item: NewItem): [Session, number] {
   const id = s.items.reduce((m, x) => Math.max(m, x.id), 0) + 1;
   const items = [...s.items, { ...item, id }];
-  return [{ items, current: item.series ? id : s.current }, id];
+  return [{ items, current: item.target ? id : s.current }, id];
 }
 
 export function currentItem(s: Session): SessionItem | undefined {

@@ -1,6 +1,159 @@
-import { Unavailable } from '../components/Unavailable.js';
+/**
+ * Modules: a request in the command line's own words (seed, n, k, operators), computed in
+ * a worker with a progress bar, an estimate of the time left and a key to cancel; the
+ * Hilbert table as a shaded grid, the Frobenius series of the selected cell, and the
+ * findings.
+ */
+import { Box, Text, useInput } from 'ink';
+import { useState } from 'react';
+import { Poly } from '../../core/poly.js';
+import { qSeries, qtSeries, type Series } from '../../series/series.js';
+import { makeTarget } from '../../series/target.js';
+import { LineInput } from '../components/LineInput.js';
+import { ProgressBar } from '../components/ProgressBar.js';
+import { ShadedGrid } from '../components/ShadedGrid.js';
+import { DEFAULT_MODULE_REQUEST, MODULE_ENGINE_AVAILABLE, startModule } from '../engines/modules.js';
+import { cellsAt, tableOf, type ModuleOutcome } from '../engines/moduleTypes.js';
+import { useTicker } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
+import { useTheme } from '../ThemeContext.js';
+import { useEditField } from '../useEditField.js';
+import { useJob } from '../useJob.js';
+import { ModuleFindings } from './ModuleFindings.js';
 
-export function ModulesScreen(_props: ScreenProps) {
-  return <Unavailable what="Modules" engine="pending" />;
+export function ModulesScreen(props: ScreenProps) {
+  const theme = useTheme();
+  const [request, setRequest] = useState(DEFAULT_MODULE_REQUEST);
+  const [draft, setDraft] = useState(request);
+  const [field, setField] = useEditField<'request'>(props.active, props.setEditing);
+  const job = useJob<ModuleOutcome>();
+  const [sel, setSel] = useState<[number, number]>([0, 0]);
+  const now = useTicker(job.state.status === 'running');
+  const outcome = job.state.result;
+  const table = outcome ? tableOf(outcome) : undefined;
+
+  const compute = (line: string) => {
+    job.run(
+      (onProgress) => startModule(line, onProgress),
+      (r) => {
+        props.addItem({ title: `module ${r.title}`, origin: 'module', payload: r });
+        props.notify(`computed: ${r.title}, dimension ${r.dimension}`);
+        setSel([0, 0]);
+      },
+    );
+  };
+
+  const sendToSearch = (wholeTable: boolean) => {
+    if (!outcome || !table) return props.notify('compute a module first (Enter)', 'error');
+    const rowAxis = outcome.axes[1] ?? '';
+    let title: string;
+    let series: Series;
+    if (wholeTable && outcome.axes.length > 1) {
+      title = `Hilbert table (q=${outcome.axes[0]}, t=${rowAxis}) of ${outcome.title}`;
+      series = qtSeries(Poly.fromQTTable(table[0]!.map((_, j) => table.map((r) => r[j] ?? 0n))));
+    } else {
+      const what = outcome.axes.length > 1 ? `row ${rowAxis}=${sel[0]}` : 'Hilbert series';
+      title = `${what} (q=${outcome.axes[0]}) of ${outcome.title}`;
+      series = qSeries(Poly.fromQCoeffs(table[sel[0]] ?? []));
+    }
+    const entry = { n: outcome.n, ...(outcome.k !== undefined ? { k: outcome.k } : {}), series };
+    props.addItem({ title, origin: 'module', target: makeTarget(title, [entry]) });
+    props.go('search');
+  };
+
+  useInput(
+    (input, key) => {
+      if (key.return) return compute(request);
+      if (input === 'e') {
+        setDraft(request);
+        return setField('request');
+      }
+      if (input === 'x') {
+        if (job.state.status === 'running') {
+          job.cancel();
+          props.notify('computation cancelled');
+        }
+        return;
+      }
+      if (input === 'g') return sendToSearch(false);
+      if (input === 'G') return sendToSearch(true);
+      if (!table) return;
+      const rows = table.length;
+      const cols = table[0]?.length ?? 1;
+      if (key.upArrow) setSel(([r, c]) => [Math.max(0, r - 1), c]);
+      if (key.downArrow) setSel(([r, c]) => [Math.min(rows - 1, r + 1), c]);
+      if (key.leftArrow) setSel(([r, c]) => [r, Math.max(0, c - 1)]);
+      if (key.rightArrow) setSel(([r, c]) => [r, Math.min(cols - 1, c + 1)]);
+    },
+    { isActive: props.active && field === undefined },
+  );
+
+  const st = job.state;
+  const w = props.width;
+  const selCells = outcome ? cellsAt(outcome, sel[0], sel[1]) : [];
+  const frob = selCells.map((c) => c.frobenius).filter((f) => f !== '').join(' + ') || '0';
+  const findingsH = outcome ? Math.min(outcome.findings.length, 4) : 0;
+  const gridH = Math.max(3, props.height - 6 - findingsH);
+  return (
+    <Box flexDirection="column">
+      {field === 'request' ? (
+        <LineInput
+          label="module"
+          value={draft}
+          active
+          width={w}
+          onChange={setDraft}
+          onSubmit={(v) => {
+            setRequest(v);
+            setField(undefined);
+            compute(v);
+          }}
+          onLeave={() => setField(undefined)}
+        />
+      ) : (
+        <Text wrap="truncate">
+          <Text {...theme.style('dim')}>module </Text>
+          {request}
+        </Text>
+      )}
+      {!MODULE_ENGINE_AVAILABLE ? (
+        <Text wrap="wrap" {...theme.style('warn')}>
+          The module engine (src/modules) is not available in this build; nothing can be computed here.
+        </Text>
+      ) : st.status === 'running' ? (
+        <ProgressBar state={{ label: st.progress?.label ?? 'starting', done: st.progress?.done ?? 0, total: st.progress?.total, elapsedMs: now - st.startedAt }} width={w} />
+      ) : st.status === 'error' ? (
+        <Text wrap="truncate" {...theme.style('error')}>
+          ✗ {st.error}
+        </Text>
+      ) : st.status === 'cancelled' ? (
+        <Text wrap="truncate" {...theme.style('warn')}>
+          Cancelled after {((st.finishedAt - st.startedAt) / 1000).toFixed(1)}s. Enter computes again, e edits the request.
+        </Text>
+      ) : outcome ? (
+        <Text wrap="truncate" {...theme.style('ok')}>
+          {outcome.title}: dimension {outcome.dimension} in {(outcome.elapsedMs / 1000).toFixed(2)}s; {outcome.exactness}
+        </Text>
+      ) : (
+        <Text wrap="truncate" {...theme.style('dim')}>
+          Enter computes this module; e edits the request (the options of `gradus module`).
+        </Text>
+      )}
+      {outcome && table ? (
+        <>
+          <Text wrap="truncate" {...theme.style('dim')}>
+            Hilbert table: columns {outcome.axes[0]}-degree{outcome.axes.length > 1 ? `, rows ${outcome.axes[1]}-degree` : ''}
+            {outcome.axes.length > 2 ? ` (summed over ${outcome.axes.slice(2).join(', ')})` : ''}
+          </Text>
+          <ShadedGrid table={table} rowLabel={outcome.axes[1] ?? ''} colLabel={outcome.axes[0] ?? 'x'} selected={sel} width={w} height={gridH} />
+          <Text wrap="truncate">
+            <Text {...theme.style('accent')}>Frob</Text>
+            <Text {...theme.style('dim')}>({outcome.axes.length > 1 ? `${outcome.axes[1]}${sel[0]} ` : ''}{outcome.axes[0]}{sel[1]}) </Text>
+            {frob}
+          </Text>
+          <ModuleFindings findings={outcome.findings.slice(0, 4)} width={w} />
+        </>
+      ) : null}
+    </Box>
+  );
 }
