@@ -1,0 +1,103 @@
+/**
+ * Sums Σ_i N_i / D_i of polynomials over denominators that are products of binomials
+ * q^a − t^b, brought to one common denominator and divided exactly at the end.
+ * Each binomial is split into the factors Ψ_d(q^{a/g}, t^{b/g}) for d | g = gcd(a, b),
+ * Ψ_d(x, y) = y^{φ(d)} Φ_d(x/y) (so x^g − y^g = Π_{d|g} Ψ_d), and the common denominator
+ * takes each factor to its largest multiplicity: a much smaller multiple than the product.
+ */
+import { ArithmeticError } from '../core/errors.js';
+import { Poly } from '../core/poly.js';
+
+const cyclotomicCache = new Map<number, Poly>();
+
+/** Φ_d(q) (univariate). */
+export function cyclotomic(d: number): Poly {
+  let hit = cyclotomicCache.get(d);
+  if (hit) return hit;
+  let p = Poly.monomial(1n, d).sub(Poly.one);
+  for (let e = 1; e < d; e++) if (d % e === 0) p = p.divExact(cyclotomic(e));
+  hit = p;
+  cyclotomicCache.set(d, hit);
+  return hit;
+}
+
+function gcdNum(a: number, b: number): number {
+  while (b) [a, b] = [b, a % b];
+  return a;
+}
+
+/** Key "α,β,d" of the factor Ψ_d(q^α, t^β). */
+function splitBinomial(a: number, b: number): string[] {
+  const g = gcdNum(a, b);
+  const out: string[] = [];
+  for (let d = 1; d <= g; d++) if (g % d === 0) out.push(`${a / g},${b / g},${d}`);
+  return out;
+}
+
+const factorCache = new Map<string, Poly>();
+
+function factorPoly(key: string): Poly {
+  let hit = factorCache.get(key);
+  if (hit) return hit;
+  const [al, be, d] = key.split(',').map(Number) as [number, number, number];
+  const phi = cyclotomic(d);
+  const deg = phi.degQ();
+  hit = Poly.fromTerms([...phi.terms()].map(([i, , c]) => [al * i, be * (deg - i), c] as const));
+  factorCache.set(key, hit);
+  return hit;
+}
+
+export interface BinomialDenominator {
+  /** pairs [a, b] meaning q^a − t^b */
+  readonly factors: readonly (readonly [number, number])[];
+  /** overall sign ±1 */
+  readonly sign: bigint;
+}
+
+function multiset(d: BinomialDenominator): Map<string, number> {
+  const m = new Map<string, number>();
+  for (const [a, b] of d.factors) for (const k of splitBinomial(a, b)) m.set(k, (m.get(k) ?? 0) + 1);
+  return m;
+}
+
+/**
+ * Σ_i Σ_j numerators[i] · vectors[i][j] / den_i for each position j, as polynomials.
+ * Throws ArithmeticError when a component is not a polynomial.
+ */
+export function sumOverCommonDenominator(
+  terms: readonly { readonly numerator: Poly; readonly vector: readonly Poly[]; readonly den: BinomialDenominator }[],
+  length: number,
+): Poly[] {
+  const sets = terms.map((t) => multiset(t.den));
+  const common = new Map<string, number>();
+  for (const s of sets) for (const [k, m] of s) common.set(k, Math.max(common.get(k) ?? 0, m));
+  const acc: Poly[] = new Array<Poly>(length).fill(Poly.zero);
+  terms.forEach((t, i) => {
+    if (t.numerator.isZero()) return;
+    let cof = Poly.constant(t.den.sign).mul(t.numerator);
+    for (const [k, m] of common) {
+      const extra = m - (sets[i]!.get(k) ?? 0);
+      if (extra > 0) cof = cof.mul(factorPoly(k).pow(extra));
+    }
+    t.vector.forEach((v, j) => {
+      if (!v.isZero()) acc[j] = acc[j]!.add(cof.mul(v));
+    });
+  });
+  // divide by the smallest factors first (cheaper quotients later)
+  const order = [...common.entries()].sort((x, y) => factorPoly(x[0]).termCount - factorPoly(y[0]).termCount);
+  return acc.map((p) => {
+    let r = p;
+    for (const [k, m] of order) {
+      const f = factorPoly(k);
+      for (let i = 0; i < m; i++) {
+        try {
+          r = r.divExact(f);
+        } catch (e) {
+          if (e instanceof ArithmeticError) throw new ArithmeticError(`the result is not a polynomial (not divisible by ${f.toString()})`);
+          throw e;
+        }
+      }
+    }
+    return r;
+  });
+}
