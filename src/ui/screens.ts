@@ -47,10 +47,11 @@ export const SCREENS: readonly ScreenInfo[] = [
     title: 'Distribution of a statistic, or the joint table of two',
     keys: [
       { keys: '←/→', action: 'family' },
-      { keys: '↑/↓', action: 'first statistic' },
+      { keys: '↑/↓', action: 'statistic' },
       { keys: 'j', action: 'second statistic (joint table)' },
-      { keys: '+/-', action: 'size' },
+      { keys: '+/-', action: 'size n' },
       { keys: 'p', action: 'edit parameters' },
+      { keys: '[/]', action: 'scroll the chart' },
       { keys: 'g', action: 'send to search' },
     ],
   },
@@ -76,6 +77,7 @@ export const SCREENS: readonly ScreenInfo[] = [
     keys: [
       { keys: 'e', action: 'edit expression' },
       { keys: 'Enter', action: 'evaluate' },
+      { keys: 'x', action: 'cancel' },
       { keys: '↑/↓', action: 'scroll' },
       { keys: 'g', action: 'send to search' },
     ],
@@ -86,7 +88,8 @@ export const SCREENS: readonly ScreenInfo[] = [
     tab: 'Search',
     title: 'Search the catalogue for a series',
     keys: [
-      { keys: 'e', action: 'type a series' },
+      { keys: '[/]', action: 'choose the series' },
+      { keys: 'e', action: 'type coefficients' },
       { keys: 'Enter', action: 'search' },
       { keys: 'x', action: 'cancel' },
       { keys: '↑/↓', action: 'browse candidates' },
@@ -102,6 +105,7 @@ export const SCREENS: readonly ScreenInfo[] = [
       { keys: '←/→', action: 'format' },
       { keys: 'e', action: 'edit file name' },
       { keys: 'Enter', action: 'write' },
+      { keys: 'f', action: 'overwrite an existing file' },
     ],
   },
   {

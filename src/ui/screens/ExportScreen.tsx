@@ -1,6 +1,113 @@
-import { Unavailable } from '../components/Unavailable.js';
+/** Export: choose a result and a format, write the file, see where it went. */
+import { Box, Text, useInput } from 'ink';
+import { isAbsolute, resolve } from 'node:path';
+import { useState } from 'react';
+import { LineInput } from '../components/LineInput.js';
+import { defaultFileName, EXPORT_ENGINE_AVAILABLE, EXPORT_FORMATS, exportable, exportItem, type ExportDone } from '../engines/exporter.js';
+import { errorText } from '../errorText.js';
 import type { ScreenProps } from '../ScreenProps.js';
+import { useTheme } from '../ThemeContext.js';
+import { useEditField } from '../useEditField.js';
 
-export function ExportScreen(_props: ScreenProps) {
-  return <Unavailable what="Export" engine="pending" />;
+export function ExportScreen(props: ScreenProps) {
+  const theme = useTheme();
+  const items = props.session.items.filter(exportable).slice().reverse();
+  const [sel, setSel] = useState(0);
+  const [fi, setFi] = useState(0);
+  const [names, setNames] = useState<Record<string, string>>({});
+  const [field, setField] = useEditField<'name'>(props.active, props.setEditing);
+  const [draft, setDraft] = useState('');
+  const [last, setLast] = useState<{ done?: ExportDone; error?: string } | undefined>(undefined);
+  const item = items[Math.min(sel, items.length - 1)];
+  const format = EXPORT_FORMATS[fi]!;
+  const nameKey = item ? `${item.id}:${format}` : '';
+  const fileName = item ? (names[nameKey] ?? defaultFileName(item, format)) : '';
+  const path = fileName === '' ? '' : isAbsolute(fileName) ? fileName : resolve(props.cwd, fileName);
+
+  const write = (force: boolean) => {
+    if (!item) return props.notify('nothing to export yet: compute something first', 'error');
+    try {
+      const done = exportItem(item, format, path, force);
+      setLast({ done });
+      props.notify(`written: ${done.path}`);
+    } catch (e) {
+      setLast({ error: errorText(e) });
+      props.notify(errorText(e), 'error');
+    }
+  };
+
+  useInput(
+    (input, key) => {
+      if (key.upArrow) setSel((s) => Math.max(0, s - 1));
+      if (key.downArrow) setSel((s) => Math.min(Math.max(0, items.length - 1), s + 1));
+      if (key.leftArrow) setFi((f) => (f + EXPORT_FORMATS.length - 1) % EXPORT_FORMATS.length);
+      if (key.rightArrow) setFi((f) => (f + 1) % EXPORT_FORMATS.length);
+      if (key.return) write(false);
+      if (input === 'f') write(true);
+      if (input === 'e' && item) {
+        setDraft(fileName);
+        setField('name');
+      }
+    },
+    { isActive: props.active && field === undefined },
+  );
+
+  const listH = Math.max(2, props.height - 7);
+  const start = Math.max(0, Math.min(sel - listH + 1, items.length - listH));
+  return (
+    <Box flexDirection="column">
+      {!EXPORT_ENGINE_AVAILABLE ? (
+        <Text wrap="wrap" {...theme.style('warn')}>
+          The export engine (src/export) is not available in this build; nothing can be written here.
+        </Text>
+      ) : null}
+      <Text wrap="truncate">
+        <Text {...theme.style('dim')}>format </Text>
+        {EXPORT_FORMATS.map((f) => (
+          <Text key={f} {...(f === format ? theme.style('selected') : theme.style('dim'))}>
+            {f === format && !theme.color ? `[${f}]` : ` ${f} `}
+          </Text>
+        ))}
+      </Text>
+      {field === 'name' ? (
+        <LineInput
+          label="file"
+          value={draft}
+          active
+          width={props.width}
+          onChange={setDraft}
+          onSubmit={(v) => {
+            setNames({ ...names, [nameKey]: v.trim() });
+            setField(undefined);
+          }}
+          onLeave={() => setField(undefined)}
+        />
+      ) : (
+        <Text wrap="truncate">
+          <Text {...theme.style('dim')}>file </Text>
+          {path || '—'}
+        </Text>
+      )}
+      <Text {...theme.style('dim')}>results ({items.length}), newest first:</Text>
+      {items.length === 0 ? <Text {...theme.style('warn')}>none yet: compute a module, a distribution or an expression, or run a search</Text> : null}
+      {items.slice(start, start + listH).map((x, i) => {
+        const at = start + i;
+        return (
+          <Text key={x.id} wrap="truncate" {...(at === sel ? theme.style('selected') : {})}>
+            {at === sel ? '▶ ' : '  '}
+            {x.origin.padEnd(10)} {x.title}
+          </Text>
+        );
+      })}
+      {last?.done ? (
+        <Text wrap="truncate" {...theme.style('ok')}>
+          ✓ wrote {last.done.bytes} bytes to {last.done.path}
+        </Text>
+      ) : last?.error ? (
+        <Text wrap="truncate" {...theme.style('error')}>
+          ✗ {last.error}
+        </Text>
+      ) : null}
+    </Box>
+  );
 }

@@ -1,6 +1,118 @@
-import { Unavailable } from '../components/Unavailable.js';
+/**
+ * Symmetric functions: type an expression of the `gradus sym` language, see the result in
+ * the Schur basis; a parse error is pointed at its column under the expression.
+ */
+import { Box, Text, useInput } from 'ink';
+import { useState } from 'react';
+import { seriesFromJson } from '../../series/seriesJson.js';
+import { makeTarget } from '../../series/target.js';
+import { LineInput } from '../components/LineInput.js';
+import { errorColumn, startSym, SYMFUN_ENGINE_AVAILABLE, type SymOutcome } from '../engines/symfun.js';
+import { errorText } from '../errorText.js';
 import type { ScreenProps } from '../ScreenProps.js';
+import { useTheme } from '../ThemeContext.js';
+import { useEditField } from '../useEditField.js';
+import { useJob } from '../useJob.js';
 
-export function SymfunScreen(_props: ScreenProps) {
-  return <Unavailable what="Symfun" engine="pending" />;
+export const DEFAULT_EXPRESSION = 'deltaprime(e(1), e(3))';
+
+export function SymfunScreen(props: ScreenProps) {
+  const theme = useTheme();
+  const [expr, setExpr] = useState(DEFAULT_EXPRESSION);
+  const [field, setField] = useEditField<'expr'>(props.active, props.setEditing);
+  const [offset, setOffset] = useState(0);
+  const job = useJob<SymOutcome>();
+  const [evaluated, setEvaluated] = useState(expr);
+
+  const evaluate = (text: string) => {
+    setEvaluated(text);
+    setOffset(0);
+    job.run(
+      (onProgress) => startSym(text, onProgress),
+      (r) => props.addItem({ title: `sym ${r.expression}`, origin: 'symfun', payload: r }),
+    );
+  };
+
+  const sendToSearch = () => {
+    const r = job.state.result;
+    if (!r) return props.notify('evaluate an expression first (Enter)', 'error');
+    if (r.degree === undefined) return props.notify('this result has no single degree n to search by', 'error');
+    try {
+      const series = seriesFromJson(r.seriesJson, 'sym result');
+      const title = `sym ${r.expression}`;
+      props.addItem({ title, origin: 'symfun', target: makeTarget(title, [{ n: r.degree, series }]) });
+      props.go('search');
+    } catch (e) {
+      props.notify(errorText(e), 'error');
+    }
+  };
+
+  useInput(
+    (input, key) => {
+      if (key.return) return evaluate(expr);
+      if (input === 'e') return setField('expr');
+      if (input === 'g') return sendToSearch();
+      if (input === 'x' && job.state.status === 'running') return job.cancel();
+      if (key.downArrow) setOffset((o) => o + 1);
+      if (key.upArrow) setOffset((o) => Math.max(0, o - 1));
+    },
+    { isActive: props.active && field === undefined },
+  );
+
+  const st = job.state;
+  const col = st.status === 'error' && st.error ? errorColumn(st.error) : undefined;
+  const lines = st.result?.lines ?? [];
+  const room = Math.max(3, props.height - 5);
+  const off = Math.min(offset, Math.max(0, lines.length - room));
+  return (
+    <Box flexDirection="column">
+      {!SYMFUN_ENGINE_AVAILABLE ? (
+        <Text wrap="wrap" {...theme.style('warn')}>
+          The symmetric-function engine (src/symfun expressions) is not available in this build; nothing can be evaluated here.
+        </Text>
+      ) : null}
+      {field === 'expr' ? (
+        <LineInput
+          label="sym"
+          value={expr}
+          active
+          width={props.width}
+          onChange={setExpr}
+          onSubmit={(v) => {
+            setField(undefined);
+            evaluate(v);
+          }}
+          onLeave={() => setField(undefined)}
+        />
+      ) : (
+        <Text wrap="truncate">
+          <Text {...theme.style('dim')}>sym </Text>
+          {expr}
+        </Text>
+      )}
+      {col !== undefined && evaluated === expr ? (
+        <Text {...theme.style('error')}>{' '.repeat(Math.max(0, col - 1) + 4)}^</Text>
+      ) : null}
+      {st.status === 'running' ? (
+        <Text {...theme.style('dim')}>evaluating… (x cancels)</Text>
+      ) : st.status === 'error' ? (
+        <Text wrap="wrap" {...theme.style('error')}>
+          ✗ {st.error}
+        </Text>
+      ) : st.result ? (
+        <Text wrap="truncate" {...theme.style('ok')}>
+          = ({lines.length} term{lines.length === 1 ? '' : 's'} in the Schur basis, {(st.result.elapsedMs / 1000).toFixed(2)}s)
+        </Text>
+      ) : (
+        <Text {...theme.style('dim')}>Enter evaluates; e edits. Forms: e(4) h(2,1) s(2,1) p(2,1) H(2,1) nabla(F) delta(f,F) deltaprime(f,F) omega(F) subs(F,t=0)</Text>
+      )}
+      {lines.slice(off, off + room).map((l, i) => (
+        <Text key={i} wrap="truncate">
+          {'  '}
+          {l}
+        </Text>
+      ))}
+      {lines.length > room ? <Text {...theme.style('dim')}>lines {off + 1}–{Math.min(lines.length, off + room)} of {lines.length} (↑/↓)</Text> : null}
+    </Box>
+  );
 }
