@@ -5,12 +5,34 @@
 import { InputError } from '../src/core/errors.js';
 import { unknownNameMessage } from '../src/core/suggest.js';
 import type { Family } from '../src/enumerate/plugin.js';
+import { compositions } from './compositions.js';
+import { decoratedLabelledDyckPaths } from './decorated-labelled-dyck-paths.js';
+import { dyckPaths } from './dyck-paths.js';
+import { fillings } from './fillings.js';
 import { orderedSetPartitions } from './ordered-set-partitions.js';
+import { parkingFunctions } from './parking-functions.js';
+import { partitions } from './partitions.js';
 import { permutations } from './permutations.js';
+import { semistandardTableaux } from './semistandard-tableaux.js';
+import { setPartitions } from './set-partitions.js';
+import { standardTableaux } from './standard-tableaux.js';
+import { subsets } from './subsets.js';
+import { words } from './words.js';
 
 export const FAMILIES: readonly Family<unknown>[] = [
+  compositions,
+  decoratedLabelledDyckPaths,
+  dyckPaths,
+  fillings,
   orderedSetPartitions,
+  parkingFunctions,
+  partitions,
   permutations,
+  semistandardTableaux,
+  setPartitions,
+  standardTableaux,
+  subsets,
+  words,
 ];
 
 /** The family with this id; an InputError naming the nearest ids otherwise. */

@@ -7,7 +7,7 @@
 import { factorial } from '../src/core/integers.js';
 import type { Family, ParamSpec, Params, Shard } from '../src/enumerate/plugin.js';
 import { stirling2 } from './support/numbers.js';
-import { checkAtMost, intParam, validateBySpec } from './support/params.js';
+import { checkAtMost, emptyFamilyError, intParam, validateBySpec } from './support/params.js';
 import { randomSetPartition } from './support/random-set-partition.js';
 import { shuffleInPlace } from './support/random.js';
 import { shardParts } from './support/shards.js';
@@ -160,6 +160,7 @@ export const orderedSetPartitions: Family<OrderedSetPartition> = {
   render: renderBlocks,
   sample(params, random) {
     validate(params);
+    if (stirling2(intParam(params, 'n'), intParam(params, 'k')) === 0n) throw emptyFamilyError('ordered-set-partitions', params);
     return shuffleInPlace(randomSetPartition(intParam(params, 'n'), intParam(params, 'k'), random), random);
   },
   key: (p) => p.map((b) => b.join(',')).join('|'),

@@ -5,32 +5,89 @@
 import { InputError } from '../src/core/errors.js';
 import { unknownNameMessage } from '../src/core/suggest.js';
 import type { Statistic } from '../src/enumerate/plugin.js';
+import { binaryInversions, ones, subsetSum } from './binary-words.js';
+import { tableauCharge, tableauCocharge, wordCharge, wordCocharge } from './charge.js';
+import { compositionLargestPart, compositionMajorIndex, compositionParts } from './composition-parts.js';
 import { cycles } from './cycles.js';
+import { denert } from './denert.js';
 import { ascents, descents, inverseDescents } from './descents.js';
+import { dyckArea, dyckBounce, dyckDinv, dyckPeaks, dyckReturns } from './dyck-statistics.js';
 import { excedances, weakExcedances } from './excedances.js';
+import { fillingInv, fillingMaj } from './filling-statistics.js';
 import { fixedPoints } from './fixed-points.js';
 import { inversions } from './inversions.js';
+import { longestIncreasingSubsequence } from './longest-increasing-subsequence.js';
 import { inverseMajorIndex, majorIndex } from './major-index.js';
+import { ospDinv } from './osp-dinv.js';
+import { ospInv } from './osp-inv.js';
+import { ospMaj, ospMinimaj } from './osp-maj.js';
+import { decoratedArea, decoratedDinv, parkingArea, parkingDinv } from './parking-statistics.js';
+import { distinctParts, durfeeSquare, largestPart, nLambda, partitionParts } from './partition-statistics.js';
 import { peaks, valleys } from './peaks.js';
 import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMinima } from './records.js';
+import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
+import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
+import { wordInversions } from './word-inversions.js';
+import { wordDescents, wordMajorIndex } from './word-major-index.js';
 
 export const STATISTICS: readonly Statistic<unknown>[] = [
+  binaryInversions,
+  ones,
+  subsetSum,
+  tableauCharge,
+  tableauCocharge,
+  wordCharge,
+  wordCocharge,
+  compositionLargestPart,
+  compositionMajorIndex,
+  compositionParts,
   cycles,
+  denert,
   ascents,
   descents,
   inverseDescents,
+  dyckArea,
+  dyckBounce,
+  dyckDinv,
+  dyckPeaks,
+  dyckReturns,
   excedances,
   weakExcedances,
+  fillingInv,
+  fillingMaj,
   fixedPoints,
   inversions,
+  longestIncreasingSubsequence,
   inverseMajorIndex,
   majorIndex,
+  ospDinv,
+  ospInv,
+  ospMaj,
+  ospMinimaj,
+  decoratedArea,
+  decoratedDinv,
+  parkingArea,
+  parkingDinv,
+  distinctParts,
+  durfeeSquare,
+  largestPart,
+  nLambda,
+  partitionParts,
   peaks,
   valleys,
   leftToRightMaxima,
   leftToRightMinima,
   rightToLeftMaxima,
   rightToLeftMinima,
+  blocks,
+  crossings,
+  nestings,
+  singletons,
+  tableauDescents,
+  tableauMajorIndex,
+  wordInversions,
+  wordDescents,
+  wordMajorIndex,
 ];
 
 /** The statistic with this id; an InputError naming the nearest ids otherwise. */

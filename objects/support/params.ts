@@ -71,3 +71,12 @@ export function checkAtMost(familyId: string, name: string, value: number | unde
     throw new InputError(`${familyId}: ${name} must be at most ${maxName} = ${max} (got ${value})`, name);
   }
 }
+
+/** Thrown by a sampler asked for an object of an empty family. */
+export function emptyFamilyError(familyId: string, params: Params): InputError {
+  const shown = Object.entries(params)
+    .filter(([, v]) => v !== undefined)
+    .map(([k, v]) => `${k}=${typeof v === 'number' ? v : v!.join(',')}`)
+    .join(' ');
+  return new InputError(`${familyId} has no objects for ${shown || 'these parameters'}`);
+}

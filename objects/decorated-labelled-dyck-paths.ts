@@ -1,0 +1,124 @@
+/**
+ * Labelled Dyck paths of size n with decorated double rises, for the rise version of the
+ * Delta theorem (MATH.md §3): Δ'_{e_{k−1}} e_n sums over those with n − k decorations.
+ * Give k (1..n, as in MATH.md and the superspace modules δ_{n,k}) or the number of
+ * decorations d = n − k (0..n−1). A double rise is a row r ≥ 2 whose north step follows
+ * the north step of row r−1. Order: Dyck paths (lexicographic), then the decorated sets
+ * (lexicographic), then the labellings.
+ */
+import { binomial } from '../src/core/integers.js';
+import { InputError } from '../src/core/errors.js';
+import type { Family, ParamSpec, Params } from '../src/enumerate/plugin.js';
+import { labellings } from './parking-functions.js';
+import { drawDyckPath, firstDyckPath, nextDyckPath } from './support/dyck.js';
+import { multinomial } from './support/numbers.js';
+import { intParam, optIntParam, validateBySpec } from './support/params.js';
+import { labelRuns, northRuns, parkingReadingWord } from './support/parking.js';
+import { shuffleInPlace, weightedIndex } from './support/random.js';
+import type { DecoratedLabelledDyckPath, DyckPath } from './types.js';
+
+const ID = 'decorated-labelled-dyck-paths';
+const PARAMS: readonly ParamSpec[] = [
+  { name: 'n', kind: 'int', description: 'size n (number of cars)', min: 1, max: 10 },
+  { name: 'k', kind: 'int', description: 'k of Δ′_{e_{k−1}} e_n (1..n): n − k decorated double rises', min: 1, max: 10, optional: true },
+  { name: 'd', kind: 'int', description: 'number of decorated double rises d = n − k (0..n−1)', min: 0, max: 9, optional: true },
+];
+
+/** The number of decorations asked for (validates). */
+function decorations(params: Params): number {
+  validateBySpec(ID, PARAMS, params);
+  const n = intParam(params, 'n');
+  const k = optIntParam(params, 'k');
+  const d = optIntParam(params, 'd');
+  if (k === undefined && d === undefined) throw new InputError(`${ID} needs k (1..${n}) or d, the number of decorations (0..${n - 1})`, 'k');
+  if (k !== undefined && k > n) throw new InputError(`${ID}: k must be at most n = ${n} (got ${k})`, 'k');
+  if (d !== undefined && d > n - 1) throw new InputError(`${ID}: d must be at most n − 1 = ${n - 1} (got ${d})`, 'd');
+  if (k !== undefined && d !== undefined && k + d !== n) throw new InputError(`${ID}: k and d must satisfy k + d = n (got k=${k}, d=${d})`, 'd');
+  return d ?? n - k!;
+}
+
+/** The double rises of a path: rows r (1-based, r ≥ 2) whose north step follows row r−1's. */
+export function doubleRises(path: DyckPath): number[] {
+  const out: number[] = [];
+  let row = 0;
+  for (let i = 0; i < path.length; i++) {
+    if (path[i] !== 1) continue;
+    row++;
+    if (i > 0 && path[i - 1] === 1) out.push(row);
+  }
+  return out;
+}
+
+/** Streams the d-element subsets of items (fresh arrays, lexicographic by position). */
+export function* subsetsOfSize<T>(items: readonly T[], d: number): Generator<T[]> {
+  if (d > items.length) return;
+  const idx = Array.from({ length: d }, (_, i) => i);
+  for (;;) {
+    yield idx.map((i) => items[i]!);
+    let i = d - 1;
+    while (i >= 0 && idx[i] === items.length - d + i) i--;
+    if (i < 0) return;
+    idx[i]!++;
+    for (let j = i + 1; j < d; j++) idx[j] = idx[j - 1]! + 1;
+  }
+}
+
+/** Weight of a Dyck path: its labellings times its choices of decorated rises. */
+function weight(path: DyckPath, d: number): bigint {
+  return multinomial(northRuns(path)) * binomial(doubleRises(path).length, d);
+}
+
+export const decoratedLabelledDyckPaths: Family<DecoratedLabelledDyckPath> = {
+  id: ID,
+  description: 'labelled Dyck paths with n − k decorated double rises (rise version of the Delta theorem)',
+  source: 'Haglund–Remmel–Wilson, "The Delta Conjecture", Trans. Amer. Math. Soc. 370 (2018)',
+  params: PARAMS,
+  validate: (params) => void decorations(params),
+  *generate(params) {
+    const d = decorations(params);
+    const path = firstDyckPath(intParam(params, 'n'));
+    do {
+      const frozen = path.slice();
+      for (const decorated of subsetsOfSize(doubleRises(frozen), d)) {
+        for (const labels of labellings(frozen)) yield { path: frozen, labels: labels.slice(), decorated };
+      }
+    } while (nextDyckPath(path));
+  },
+  count(params) {
+    const d = decorations(params);
+    const path = firstDyckPath(intParam(params, 'n'));
+    let s = 0n;
+    do s += weight(path, d);
+    while (nextDyckPath(path));
+    return s;
+  },
+  render: (p) => drawDyckPath(p.path, p.labels, new Set(p.decorated)),
+  sample(params, random) {
+    const d = decorations(params);
+    // A path by its weight, then a uniform labelling and decorated set: uniform overall.
+    const paths: (0 | 1)[][] = [];
+    const weights: bigint[] = [];
+    const path = firstDyckPath(intParam(params, 'n'));
+    do {
+      const w = weight(path, d);
+      if (w > 0n) {
+        paths.push(path.slice());
+        weights.push(w);
+      }
+    } while (nextDyckPath(path));
+    const chosen = paths[weightedIndex(random, weights)]!;
+    const runs = northRuns(chosen);
+    const runOf = shuffleInPlace(runs.flatMap((len, j) => new Array<number>(len).fill(j)), random);
+    const runStart = runs.map((_, j) => runs.slice(0, j).reduce((a, b) => a + b, 0));
+    const labels = new Array<number>(runOf.length).fill(0);
+    labelRuns(runOf, runStart, new Array<number>(runs.length).fill(0), labels);
+    const decorated = shuffleInPlace(doubleRises(chosen), random)
+      .slice(0, d)
+      .sort((a, b) => a - b);
+    return { path: chosen, labels, decorated };
+  },
+  key: (p) => `${p.path.map((s) => (s === 1 ? 'N' : 'E')).join('')}:${p.labels.join(',')}:${p.decorated.join(',')}`,
+  readingWord: parkingReadingWord,
+  testParams: [{ n: 1, k: 1 }, { n: 3, k: 3 }, { n: 3, k: 2 }, { n: 4, d: 1 }, { n: 4, k: 2 }, { n: 4, k: 1 }],
+};
+
