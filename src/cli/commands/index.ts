@@ -1,8 +1,9 @@
 /** Every command of the command line, in the order `gradus --help` lists them. */
 import type { CommandSpec } from '../command.js';
 import { appCommand } from './app.js';
+import { catalogueCommand } from './catalogue.js';
 import { demoCommand } from './demo.js';
 import { qseriesCommand } from './qseries.js';
 import { versionCommand } from './version.js';
 
-export const COMMANDS: readonly CommandSpec[] = [qseriesCommand, demoCommand, versionCommand, appCommand];
+export const COMMANDS: readonly CommandSpec[] = [qseriesCommand, demoCommand, versionCommand, appCommand, catalogueCommand];

@@ -1,0 +1,61 @@
+/**
+ * Fill the catalogue unit by unit, each unit in its own transaction (an interrupted build
+ * keeps every finished unit and nothing of the unit under way; running again resumes).
+ */
+import { LimitError } from '../core/errors.js';
+import type { Progress } from '../cli/progress.js';
+import type { Catalogue } from './catalogue.js';
+import { planUnits } from './planUnits.js';
+import { provenance } from './provenance.js';
+import { tallyUnit } from './tallyUnit.js';
+
+export interface BuildOptions {
+  readonly nMax: number;
+  readonly maxObjects: bigint;
+  readonly families?: readonly string[];
+  readonly progress: Progress;
+  /** Called after each unit is written (for a line of log on stderr). */
+  readonly onUnit?: (text: string) => void;
+}
+
+export interface BuildReport {
+  readonly units: number;
+  readonly skippedDone: number;
+  readonly rows: number;
+  readonly objects: string;
+  readonly seconds: number;
+  readonly familiesLeftOut: readonly { family: string; why: string }[];
+}
+
+export function buildCatalogue(cat: Catalogue, o: BuildOptions): BuildReport {
+  const plan = planUnits(o.nMax, o.families);
+  const todo = plan.units.filter((u) => !cat.isUnitDone(u.family.id, u.params));
+  const total = todo.reduce((s, u) => s + u.objects, 0n);
+  if (total > o.maxObjects) {
+    throw new LimitError(`building up to n = ${o.nMax} visits ${total} objects, above the limit ${o.maxObjects}; raise it with --max-objects`, 'max-objects');
+  }
+  const t0 = Date.now();
+  let done = 0n;
+  let rows = 0;
+  o.progress.start(`catalogue build (n ≤ ${o.nMax})`, Number(total));
+  for (const u of todo) {
+    const t1 = Date.now();
+    const r = tallyUnit(u.family, u.params, u.stats);
+    const seconds = (Date.now() - t1) / 1000;
+    cat.writeUnit(u.family.id, u.params, r.objects, seconds, r.rows,
+      provenance({ family: u.family.id, params: u.params, statistics: u.stats.map((s) => s.id) }, 'exhaustive enumeration, exact integer tallies', [], seconds));
+    rows += r.rows.length;
+    done += r.objects;
+    o.progress.update(Number(done));
+    o.onUnit?.(`${u.family.id} ${JSON.stringify(u.params)}: ${r.objects} objects, ${r.rows.length} distributions, ${seconds.toFixed(2)}s`);
+  }
+  o.progress.finish();
+  return {
+    units: todo.length,
+    skippedDone: plan.units.length - todo.length,
+    rows,
+    objects: done.toString(),
+    seconds: (Date.now() - t0) / 1000,
+    familiesLeftOut: plan.skipped,
+  };
+}

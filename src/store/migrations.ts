@@ -1,0 +1,31 @@
+/**
+ * Versioned schema of the catalogue: migration i takes PRAGMA user_version from i to i+1.
+ * Each runs in one transaction with the version bump, so a file is never half-migrated.
+ */
+export const MIGRATIONS: readonly string[] = [
+  `CREATE TABLE meta (key TEXT PRIMARY KEY, value TEXT NOT NULL);
+   CREATE TABLE units (
+     family TEXT NOT NULL, params TEXT NOT NULL, n INTEGER NOT NULL, k INTEGER,
+     objects TEXT NOT NULL, seconds REAL NOT NULL, provenance TEXT NOT NULL,
+     PRIMARY KEY (family, params));
+   CREATE TABLE distributions (
+     id INTEGER PRIMARY KEY,
+     family TEXT NOT NULL, params TEXT NOT NULL, n INTEGER NOT NULL, k INTEGER,
+     statistics TEXT NOT NULL, combine TEXT NOT NULL, transform TEXT NOT NULL DEFAULT '',
+     kind TEXT NOT NULL, series TEXT NOT NULL, at_one TEXT NOT NULL, hash TEXT NOT NULL,
+     provenance TEXT NOT NULL,
+     UNIQUE (family, params, statistics, combine, transform));
+   CREATE INDEX distributions_hash ON distributions (hash);
+   CREATE INDEX distributions_place ON distributions (family, n, k);
+   CREATE TABLE module_results (
+     id INTEGER PRIMARY KEY, inputs TEXT NOT NULL, n INTEGER, k INTEGER,
+     result TEXT NOT NULL, hash TEXT NOT NULL, provenance TEXT NOT NULL, UNIQUE (inputs));
+   CREATE TABLE sym_results (
+     id INTEGER PRIMARY KEY, expression TEXT NOT NULL, degree INTEGER,
+     result TEXT NOT NULL, hash TEXT NOT NULL, provenance TEXT NOT NULL, UNIQUE (expression));
+   CREATE TABLE search_results (
+     id INTEGER PRIMARY KEY, created TEXT NOT NULL, target TEXT NOT NULL,
+     result TEXT NOT NULL, provenance TEXT NOT NULL);`,
+];
+
+export const SCHEMA_VERSION = MIGRATIONS.length;

@@ -1,0 +1,58 @@
+/**
+ * The units a catalogue build fills: every family whose parameters are n (and k), for
+ * n = 1..nMax (and k = 1..n), with the family's statistics and those read after each
+ * transform leaving the family.
+ */
+import { FAMILIES } from '../../objects/index.js';
+import { transformsFrom } from '../../objects/transforms/index.js';
+import { statisticsOfFamily } from '../../statistics/index.js';
+import type { Family } from '../enumerate/plugin.js';
+import { tallyStats, type TallyStat } from './tallyUnit.js';
+
+export interface Unit {
+  readonly family: Family<unknown>;
+  readonly params: Readonly<Record<string, number>>;
+  readonly stats: readonly TallyStat[];
+  readonly objects: bigint;
+}
+
+export interface Plan {
+  readonly units: readonly Unit[];
+  /** Families left out, with the reason. */
+  readonly skipped: readonly { family: string; why: string }[];
+}
+
+export function planUnits(nMax: number, only?: readonly string[]): Plan {
+  const units: Unit[] = [];
+  const skipped: { family: string; why: string }[] = [];
+  for (const family of FAMILIES) {
+    if (only && !only.includes(family.id)) continue;
+    const names = family.params.filter((p) => !p.optional).map((p) => p.name);
+    if (!family.params.some((p) => p.name === 'n') || names.some((x) => x !== 'n' && x !== 'k')) {
+      skipped.push({ family: family.id, why: `parameters ${family.params.map((p) => p.name).join(', ')} (the catalogue fills families indexed by n, and k)` });
+      continue;
+    }
+    const own = statisticsOfFamily(family.id);
+    const via = transformsFrom(family.id).map((t) => ({ t, stats: statisticsOfFamily(t.to) })).filter((x) => x.stats.length > 0);
+    const stats = tallyStats(family, own, via);
+    if (stats.length === 0) {
+      skipped.push({ family: family.id, why: 'no statistics' });
+      continue;
+    }
+    const nSpec = family.params.find((p) => p.name === 'n')!;
+    const top = Math.min(nMax, nSpec.max ?? nMax);
+    for (let n = Math.max(1, nSpec.min ?? 1); n <= top; n++) {
+      const ks: (number | undefined)[] = names.includes('k') ? Array.from({ length: n }, (_, i) => i + 1) : [undefined];
+      for (const k of ks) {
+        const params: Record<string, number> = k === undefined ? { n } : { n, k };
+        try {
+          family.validate(params);
+        } catch {
+          continue;
+        }
+        units.push({ family, params, stats, objects: family.count(params) });
+      }
+    }
+  }
+  return { units, skipped };
+}
