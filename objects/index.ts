@@ -6,7 +6,7 @@ import { InputError } from '../src/core/errors.js';
 import { unknownNameMessage } from '../src/core/suggest.js';
 import type { Family } from '../src/enumerate/plugin.js';
 import { compositions } from './compositions.js';
-import { decoratedLabelledDyckPaths } from './decorated-labelled-dyck-paths.js';
+import { decoratedDyckPaths } from './decorated-dyck-paths.js';
 import { dyckPaths } from './dyck-paths.js';
 import { fillings } from './fillings.js';
 import { orderedSetPartitions } from './ordered-set-partitions.js';
@@ -21,7 +21,7 @@ import { words } from './words.js';
 
 export const FAMILIES: readonly Family<unknown>[] = [
   compositions,
-  decoratedLabelledDyckPaths,
+  decoratedDyckPaths,
   dyckPaths,
   fillings,
   orderedSetPartitions,

@@ -17,7 +17,7 @@ import { labelRuns, northRuns, parkingReadingWord } from './support/parking.js';
 import { shuffleInPlace, weightedIndex } from './support/random.js';
 import type { DecoratedLabelledDyckPath, DyckPath } from './types.js';
 
-const ID = 'decorated-labelled-dyck-paths';
+const ID = 'decorated-dyck-paths';
 const PARAMS: readonly ParamSpec[] = [
   { name: 'n', kind: 'int', description: 'size n (number of cars)', min: 1, max: 10 },
   { name: 'k', kind: 'int', description: 'k of Δ′_{e_{k−1}} e_n (1..n): n − k decorated double rises', min: 1, max: 10, optional: true },
@@ -68,7 +68,7 @@ function weight(path: DyckPath, d: number): bigint {
   return multinomial(northRuns(path)) * binomial(doubleRises(path).length, d);
 }
 
-export const decoratedLabelledDyckPaths: Family<DecoratedLabelledDyckPath> = {
+export const decoratedDyckPaths: Family<DecoratedLabelledDyckPath> = {
   id: ID,
   description: 'labelled Dyck paths with n − k decorated double rises (rise version of the Delta theorem)',
   source: 'Haglund–Remmel–Wilson, "The Delta Conjecture", Trans. Amer. Math. Soc. 370 (2018)',
