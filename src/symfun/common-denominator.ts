@@ -7,6 +7,7 @@
  */
 import { ArithmeticError } from '../core/errors.js';
 import { Poly } from '../core/poly.js';
+import { divideDense, fromDense, toDense } from './dense-poly.js';
 
 const cyclotomicCache = new Map<number, Poly>();
 
@@ -69,12 +70,32 @@ export function sumOverCommonDenominator(
   length: number,
 ): Poly[] {
   const sets = terms.map((t) => multiset(t.den));
+  // cancel factors that divide the numerator already (keeps the common denominator small)
+  const nums = terms.map((t, i) => {
+    let num = t.numerator;
+    if (num.isZero()) return num;
+    const set = sets[i]!;
+    for (const [k, m] of set) {
+      let left = m;
+      let dense = toDense(num);
+      while (left > 0) {
+        const qd = divideDense(dense, factorPoly(k));
+        if (!qd) break;
+        dense = qd;
+        left--;
+      }
+      num = fromDense(dense);
+      if (left === 0) set.delete(k);
+      else set.set(k, left);
+    }
+    return num;
+  });
   const common = new Map<string, number>();
   for (const s of sets) for (const [k, m] of s) common.set(k, Math.max(common.get(k) ?? 0, m));
   const acc: Poly[] = new Array<Poly>(length).fill(Poly.zero);
   terms.forEach((t, i) => {
-    if (t.numerator.isZero()) return;
-    let cof = Poly.constant(t.den.sign).mul(t.numerator);
+    if (nums[i]!.isZero()) return;
+    let cof = Poly.constant(t.den.sign).mul(nums[i]!);
     for (const [k, m] of common) {
       const extra = m - (sets[i]!.get(k) ?? 0);
       if (extra > 0) cof = cof.mul(factorPoly(k).pow(extra));
@@ -86,18 +107,15 @@ export function sumOverCommonDenominator(
   // divide by the smallest factors first (cheaper quotients later)
   const order = [...common.entries()].sort((x, y) => factorPoly(x[0]).termCount - factorPoly(y[0]).termCount);
   return acc.map((p) => {
-    let r = p;
+    let r = toDense(p);
     for (const [k, m] of order) {
       const f = factorPoly(k);
       for (let i = 0; i < m; i++) {
-        try {
-          r = r.divExact(f);
-        } catch (e) {
-          if (e instanceof ArithmeticError) throw new ArithmeticError(`the result is not a polynomial (not divisible by ${f.toString()})`);
-          throw e;
-        }
+        const qd = divideDense(r, f);
+        if (!qd) throw new ArithmeticError(`the result is not a polynomial (not divisible by ${f.toString()})`);
+        r = qd;
       }
     }
-    return r;
+    return fromDense(r);
   });
 }
