@@ -4,7 +4,7 @@
  * degrees may be mixed (products of different degrees, sums). Immutable.
  */
 import { InputError } from '../core/errors.js';
-import { conjugate, fLambda, partitionKey, partitionList, size, type Partition } from '../core/partitions.js';
+import { checkPartition, conjugate, fLambda, partitionKey, partitionList, size, type Partition } from '../core/partitions.js';
 import { Poly } from '../core/poly.js';
 import { PolyQ } from '../core/polyq.js';
 import { basisToSchur, schurToBasis, type Basis } from './transitions.js';
@@ -19,6 +19,20 @@ function addInto(m: Map<string, PolyQ>, key: string, c: PolyQ): void {
   const s = prev ? prev.add(c) : c;
   if (s.isZero()) m.delete(key);
   else m.set(key, s);
+}
+
+/**
+ * Zero parts are dropped (e_0 = h_0 = 1 as factors); the multiplicative bases e, h,
+ * p accept their parts in any order, s and m need a partition.
+ */
+function normalizeIndex(basis: Basis, nu: readonly number[]): Partition {
+  for (const x of nu) {
+    if (!Number.isInteger(x) || x < 0) throw new InputError(`${basis}: parts must be non-negative integers (got ${nu.join(',')})`, 'partition');
+  }
+  if (basis === 'p' && nu.includes(0)) throw new InputError('p: parts must be positive (p_0 is not defined)', 'partition');
+  const parts = nu.filter((x) => x > 0);
+  if (basis === 'e' || basis === 'h' || basis === 'p') return parts.sort((a, b) => b - a);
+  return checkPartition(parts, `${basis} index`);
 }
 
 export class SymFun {
@@ -36,7 +50,8 @@ export class SymFun {
   /** Σ c_ν b_ν from coefficients in the basis b, keyed by partition. */
   static fromBasis(basis: Basis, coeffs: Iterable<readonly [Partition, PolyQ | Poly]>): SymFun {
     const m = new Map<string, PolyQ>();
-    for (const [nu, c0] of coeffs) {
+    for (const [nu0, c0] of coeffs) {
+      const nu = normalizeIndex(basis, nu0);
       const c = c0 instanceof Poly ? PolyQ.of(c0) : c0;
       if (c.isZero()) continue;
       const n = size(nu);

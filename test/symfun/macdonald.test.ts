@@ -1,0 +1,61 @@
+import { describe, expect, it } from 'vitest';
+import { conjugate, dominates, partitionKey, partitionList } from '../../src/core/partitions.js';
+import { Poly } from '../../src/core/poly.js';
+import { PolyQ } from '../../src/core/polyq.js';
+import { bigW } from '../../src/symfun/cell-data.js';
+import { modifiedMacdonald } from '../../src/symfun/macdonald.js';
+import { starScalar } from '../../src/symfun/operators.js';
+import { plethysmTimes } from '../../src/symfun/plethysm.js';
+import { SymFun, keyToPartition } from '../../src/symfun/symfun.js';
+
+const { q, t } = Poly;
+const s = (...l: number[]) => SymFun.basisElement('s', l);
+
+describe('modified Macdonald polynomials by the filling formula', () => {
+  it('check values H̃_(2), H̃_(11), H̃_(21) (Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, AMS 2008, ch. 2 — from memory, via MATH.md §3)', () => {
+    expect(modifiedMacdonald([2]).equals(s(2).add(s(1, 1).scale(q)))).toBe(true);
+    expect(modifiedMacdonald([1, 1]).equals(s(2).add(s(1, 1).scale(t)))).toBe(true);
+    expect(modifiedMacdonald([2, 1]).equals(s(3).add(s(2, 1).scale(q.add(t))).add(s(1, 1, 1).scale(q.mul(t))))).toBe(true);
+  });
+  it('H̃_μ(X;q,t) = H̃_μ′(X;t,q), ⟨H̃_μ, s_(n)⟩ = 1 and H̃_μ(X;1,1) = h_1^n for n ≤ 6 (MATH.md §3; Haiman)', () => {
+    for (let n = 1; n <= 6; n++) {
+      const h1n = SymFun.basisElement('h', new Array(n).fill(1));
+      for (const mu of partitionList(n)) {
+        const h = modifiedMacdonald(mu);
+        expect(h.swapQT().equals(modifiedMacdonald(conjugate(mu)))).toBe(true);
+        expect(h.coeff([n]).equals(PolyQ.one)).toBe(true);
+        expect(h.specialize({ q: 1, t: 1 }).equals(h1n)).toBe(true);
+      }
+    }
+  });
+  it('independent route: the triangularity characterisation holds for n ≤ 5 (Haiman; MATH.md §3)', () => {
+    // H̃_μ[X(1−q)] ∈ span{s_λ : λ ≥ μ}, H̃_μ[X(1−t)] ∈ span{s_λ : λ ≥ μ′}, ⟨H̃_μ, s_(n)⟩ = 1
+    // determine H̃_μ uniquely; here the filling sum is checked against them.
+    const oneMinusQ = Poly.one.sub(q);
+    const oneMinusT = Poly.one.sub(t);
+    for (let n = 1; n <= 5; n++)
+      for (const mu of partitionList(n)) {
+        const h = modifiedMacdonald(mu);
+        for (const [k] of plethysmTimes(h, oneMinusQ).schurTerms()) expect(dominates(keyToPartition(k), mu)).toBe(true);
+        for (const [k] of plethysmTimes(h, oneMinusT).schurTerms()) expect(dominates(keyToPartition(k), conjugate(mu))).toBe(true);
+      }
+  });
+  it('a wrong filling rule fails the n = 4 checks: the triangularity test is sharp (sanity of the test itself)', () => {
+    // swapping two Schur coefficients of H̃_(3,1) must break the characterisation
+    const h = modifiedMacdonald([3, 1]);
+    const broken = h.sub(s(3, 1).scale(h.coeff([3, 1]).num)).add(s(3, 1).scale(h.coeff([2, 2]).num));
+    const bad = [...plethysmTimes(broken, Poly.one.sub(q)).schurTerms()].some(([k]) => !dominates(keyToPartition(k), [3, 1]));
+    const bad2 = [...plethysmTimes(broken, Poly.one.sub(t)).schurTerms()].some(([k]) => !dominates(keyToPartition(k), [2, 1, 1]));
+    expect(bad || bad2).toBe(true);
+  });
+  it('*-orthogonality ⟨H̃_λ, H̃_μ⟩_* = δ w_μ for n ≤ 4 (Garsia–Haiman — from memory; checked here)', () => {
+    for (let n = 1; n <= 4; n++) {
+      const ps = partitionList(n);
+      for (const a of ps)
+        for (const b of ps) {
+          const v = starScalar(modifiedMacdonald(a), modifiedMacdonald(b));
+          expect(v.equals(partitionKey(a) === partitionKey(b) ? PolyQ.of(bigW(b)) : PolyQ.zero)).toBe(true);
+        }
+    }
+  });
+});
