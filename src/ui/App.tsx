@@ -86,11 +86,15 @@ export function App(props: AppProps) {
   const notify = useCallback((text: string, kind: 'info' | 'error' = 'info') => setStatus({ text, kind }), []);
 
   useInput((input, key) => {
-    const order = SCREENS.filter((s) => s.id !== 'help');
-    const idx = order.findIndex((s) => s.id === screen);
     if (key.tab) {
-      const next = order[(idx + (key.shift ? order.length - 1 : 1) + (idx < 0 ? 1 : 0)) % order.length]!;
-      return go(next.id);
+      // Functional update: keys typed faster than a redraw still move one screen each.
+      setEditing(false);
+      setScreen((cur) => {
+        const order = SCREENS.filter((s) => s.id !== 'help');
+        const idx = Math.max(0, order.findIndex((s) => s.id === cur));
+        return order[(idx + (key.shift ? order.length - 1 : 1)) % order.length]!.id;
+      });
+      return;
     }
     if (editing) return;
     if (input === 'q') return exit();

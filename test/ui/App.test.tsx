@@ -1,17 +1,67 @@
-import { render } from 'ink-testing-library';
-import { describe, expect, it } from 'vitest';
-import { App } from '../../src/ui/App.js';
+import { afterEach, describe, expect, it } from 'vitest';
+import { SCREENS } from '../../src/ui/screens.js';
+import { fits, frame, KEYS, press, renderApp, type Rendered } from './helpers.js';
 
-describe('App shell', () => {
-  it('renders at 80x24', async () => {
-    const r = render(<App size={{ columns: 80, rows: 24 }} env={{ NO_COLOR: '1' }} initialScreen="families" />);
-    await new Promise((res) => setTimeout(res, 50));
-    console.log(r.lastFrame());
-    r.stdin.write('\u001b[C');
-    await new Promise((res) => setTimeout(res, 50));
-    r.stdin.write('a');
-    await new Promise((res) => setTimeout(res, 50));
-    console.log(r.lastFrame());
-    r.unmount();
+let r: Rendered | undefined;
+afterEach(() => {
+  r?.unmount();
+  r = undefined;
+});
+
+describe('app shell', () => {
+  it('opens on the demo tour, with tabs for every screen and the help line', () => {
+    r = renderApp();
+    const f = frame(r);
+    expect(f).toContain('[1Tour]');
+    for (const s of SCREENS) expect(f).toContain(s.tab);
+    expect(f).toContain('Enter run the next step');
+    expect(f).toContain('q quit');
+    expect(fits(f, 80, 24)).toBe(true);
+  });
+
+  it('reaches every screen with its jump key, each fitting 80x24 with its own help line', async () => {
+    r = renderApp();
+    for (const s of SCREENS) {
+      await press(r, s.jump);
+      const f = frame(r);
+      expect(f, s.id).toContain(`[${s.jump}${s.tab}]`);
+      expect(f, s.id).toContain(`${s.keys[0]!.keys} ${s.keys[0]!.action}`);
+      expect(fits(f, 80, 24), `${s.id}:\n${f}`).toBe(true);
+    }
+  });
+
+  it('Tab and Shift+Tab cycle through the screens', async () => {
+    r = renderApp();
+    await press(r, KEYS.tab);
+    expect(frame(r)).toContain('[2Families]');
+    await press(r, KEYS.shiftTab, KEYS.shiftTab);
+    expect(frame(r)).toContain('[7Export]');
+  });
+
+  it('uses the room of a larger terminal', async () => {
+    r = renderApp({ size: { columns: 120, rows: 40 } });
+    const f = frame(r);
+    expect(f.split('\n').length).toBeGreaterThan(30);
+    expect(f).toContain('1 Tour');
+    expect(fits(f, 120, 40)).toBe(true);
+  });
+
+  it('the help screen lists the keys of every screen', async () => {
+    r = renderApp({ size: { columns: 80, rows: 200 } });
+    await press(r, '?');
+    const f = frame(r);
+    for (const s of SCREENS.filter((x) => x.id !== 'help')) {
+      expect(f).toContain(s.title);
+      for (const k of s.keys) expect(f).toContain(k.action);
+    }
+  });
+
+  it('q quits', async () => {
+    r = renderApp();
+    await press(r, 'q');
+    // After exit ink stops rendering; typing more changes nothing.
+    const before = frame(r);
+    await press(r, '2');
+    expect(frame(r)).toBe(before);
   });
 });

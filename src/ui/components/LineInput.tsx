@@ -4,7 +4,7 @@
  * same with and without colour.
  */
 import { Text, useInput } from 'ink';
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import { useTheme } from '../ThemeContext.js';
 
 export interface LineInputProps {
@@ -19,11 +19,24 @@ export interface LineInputProps {
 
 export function LineInput(props: LineInputProps) {
   const theme = useTheme();
-  const [cursor, setCursor] = useState(props.value.length);
+  const [cursor, setCursorState] = useState(props.value.length);
+  // The latest text and cursor, so keys arriving faster than redraws all land.
+  const live = useRef({ value: props.value, cursor: props.value.length, seen: props.value });
+  if (live.current.seen !== props.value) live.current = { value: props.value, cursor: Math.min(cursor, props.value.length), seen: props.value };
   const pos = Math.min(cursor, props.value.length);
+  const setCursor = (c: number) => {
+    live.current.cursor = c;
+    setCursorState(c);
+  };
+  const change = (v: string) => {
+    live.current.value = v;
+    live.current.seen = v;
+    props.onChange(v);
+  };
   useInput(
     (input, key) => {
-      const v = props.value;
+      const v = live.current.value;
+      const pos = Math.min(live.current.cursor, v.length);
       if (key.return) return props.onSubmit(v);
       if (key.escape) return props.onLeave();
       if (key.tab) return;
@@ -33,19 +46,19 @@ export function LineInput(props: LineInputProps) {
       if (key.end || (key.ctrl && input === 'e')) return setCursor(v.length);
       if (key.ctrl && input === 'u') {
         setCursor(0);
-        return props.onChange('');
+        return change('');
       }
       if (key.backspace || key.delete) {
         if (pos === 0) return;
         setCursor(pos - 1);
-        return props.onChange(v.slice(0, pos - 1) + v.slice(pos));
+        return change(v.slice(0, pos - 1) + v.slice(pos));
       }
       if (key.ctrl || key.meta || key.upArrow || key.downArrow || key.pageUp || key.pageDown) return;
       // Printable text (a paste arrives as one string); control characters are dropped.
       const clean = input.replace(/[\u0000-\u001f\u007f]/g, '');
       if (clean === '') return;
       setCursor(pos + clean.length);
-      props.onChange(v.slice(0, pos) + clean + v.slice(pos));
+      change(v.slice(0, pos) + clean + v.slice(pos));
     },
     { isActive: props.active },
   );
