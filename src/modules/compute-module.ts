@@ -1,0 +1,129 @@
+/**
+ * Engine entry for closure modules: `computeModule(spec, options)` builds the seed, picks the
+ * route (Young-subgroup ranks for derivative-only operators, the iterated closure otherwise,
+ * or the small exact route over Q), runs it with two primes and compares, and returns the
+ * cells with checks and provenance. The command line and the terminal app both call this.
+ */
+import { LimitError } from '../core/errors.js';
+import { CONFIRM_PRIME, DEFAULT_PRIME, PRIMES } from '../core/modp.js';
+import { toBigIntExact } from '../core/rational.js';
+import { VERSION } from '../version.js';
+import { moduleChecks } from './checks.js';
+import { primeCoeffs, rationalCoeffs } from './coefficients.js';
+import { derivativeClosure } from './derivative-closure.js';
+import { exactClosure } from './exact-closure.js';
+import { iteratedClosure } from './iterated-closure.js';
+import type { ModuleCell } from './module-cell.js';
+import type { Axis, ModuleResult } from './module-result.js';
+import { estimateModuleWork } from './module-cost.js';
+import { familyName, isDerivativeOnly, parseOperatorFamilies } from './operators.js';
+import { buildSeedPolynomial } from './seed-polynomial.js';
+import { seedSupport } from './seed-support.js';
+import { seedTerms, type SeedSpec } from './seeds.js';
+import { mergeRuns } from './merge-runs.js';
+
+export interface ModuleSpec extends SeedSpec {
+  /** Operator family names: x, y, theta, polar1, polar2, … */
+  readonly ops: readonly string[];
+}
+
+export type ModuleMethod = 'auto' | 'young' | 'iterated' | 'exact';
+
+export interface ModuleOptions {
+  readonly frobenius?: boolean;
+  readonly prime?: number;
+  readonly method?: ModuleMethod;
+  /** Refuse estimated work above this many units (see module-cost). */
+  readonly maxWork?: number;
+  readonly onEstimate?: (units: number, seconds: number) => void;
+  readonly onProgress?: (done: number, total: number, label: string) => void;
+  readonly signal?: AbortSignal;
+}
+
+export const DEFAULT_MAX_WORK = 2e9;
+const EXACT_MAX_WORK = 2e6;
+
+export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): ModuleResult {
+  const t0 = performance.now();
+  const ops = parseOperatorFamilies(spec.ops);
+  const terms = seedTerms(spec);
+  const polar = ops.some((o) => o.kind === 'polar');
+  const needs = { y: polar || ops.some((o) => o.kind === 'y'), polar };
+  const derivOnly = isDerivativeOnly(ops);
+  const method = options.method === undefined || options.method === 'auto' ? (derivOnly ? 'young' : 'iterated') : options.method;
+  if (method === 'young' && !derivOnly) throw new LimitError('the young method handles derivative operators only (x, y, theta); use --method iterated', 'method');
+  const frob = options.frobenius ?? false;
+  const p1 = options.prime ?? DEFAULT_PRIME;
+  const p2 = p1 === CONFIRM_PRIME ? DEFAULT_PRIME : CONFIRM_PRIME;
+
+  const probe = buildSeedPolynomial(spec.n, terms, primeCoeffs(p1), needs);
+  const probeSupport = seedSupport(probe.alg.space, p1, probe.f);
+  const est = estimateModuleWork(probeSupport, ops, method === 'young' ? 'young' : 'iterated');
+  options.onEstimate?.(est.units, est.seconds);
+  const limit = method === 'exact' ? EXACT_MAX_WORK : options.maxWork ?? DEFAULT_MAX_WORK;
+  if (est.units > limit) {
+    throw new LimitError(
+      `estimated work ${est.units.toExponential(2)} units (about ${Math.round(est.seconds)} s) exceeds the limit ${limit.toExponential(2)}${method === 'exact' ? ' of the exact route: use a modular method' : '; raise it with --max-work'}`,
+      method === 'exact' ? 'method' : 'max-work',
+    );
+  }
+  const character = probe.character;
+  const frobOk = frob && character !== 'none';
+  const notes: string[] = [];
+  if (frob && character === 'none') notes.push('the seed is neither symmetric nor antisymmetric: S_n does not act on the closure, no Frobenius series');
+
+  let cells: readonly ModuleCell[];
+  let primes: number[] = [];
+  let confirmation: string;
+  let field: string;
+  let methodText: string;
+  if (method === 'exact') {
+    const sp = buildSeedPolynomial(spec.n, terms, rationalCoeffs, needs);
+    cells = exactClosure(sp.alg, sp.f, probeSupport.degree, ops, frobOk, (t) => toBigIntExact(t));
+    confirmation = 'exact over Q (no modular step)';
+    field = 'Q';
+    methodText = 'closure over Q in reduced echelon form; characters by traces on the echelon basis';
+  } else {
+    const run = (p: number): readonly ModuleCell[] => {
+      const sp = p === p1 ? probe : buildSeedPolynomial(spec.n, terms, primeCoeffs(p), needs);
+      const chi = sp.character === 'sign' ? -1 : sp.character === 'trivial' ? 1 : 0;
+      if (method === 'young') {
+        const support = p === p1 ? probeSupport : seedSupport(sp.alg.space, p, sp.f);
+        return derivativeClosure(support, { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') }, chi, {
+          onProgress: options.onProgress,
+          signal: options.signal,
+        });
+      }
+      return iteratedClosure(sp.alg, sp.f, probeSupport.degree, ops, { frobenius: chi !== 0, p, onProgress: options.onProgress, signal: options.signal });
+    };
+    const merged = mergeRuns([p1, p2], run, PRIMES);
+    cells = merged.cells;
+    primes = merged.primes;
+    confirmation = merged.confirmation;
+    field = `F_p for p in {${primes.join(', ')}}`;
+    methodText =
+      method === 'young'
+        ? 'derivative closure: graded pieces as images of the seed-coefficient maps; Schur multiplicities from ranks of Young-subgroup invariants (h) and anti-invariants (e) solved with Kostka numbers'
+        : 'iterated closure degree by degree (semi-echelon form mod p); Schur multiplicities from ranks of Young-subgroup folds of each basis';
+    notes.push('ranks mod p are lower bounds of ranks over Q; multiplicities are integer combinations of ranks, so no character value is lifted from F_p');
+  }
+  if (!frobOk) cells = cells.map((c) => ({ degree: c.degree, dim: c.dim }));
+  const live = cells.filter((c) => c.dim > 0);
+  const sp = probe.alg.space;
+  const axes: Axis[] = ['x'];
+  if (sp.hasY) axes.push('y');
+  if (sp.hasTheta) axes.push('theta');
+  return {
+    kind: 'module',
+    name: spec.seed,
+    description: `closure of ${terms.description} under ${ops.map(familyName).join(', ')}`,
+    n: spec.n,
+    ...(spec.k !== undefined ? { k: spec.k } : {}),
+    ops: ops.map(familyName),
+    axes,
+    cells: live,
+    frobenius: frobOk,
+    checks: moduleChecks(spec.n, live, axes),
+    provenance: { primes, field, method: methodText, confirmation, notes, seconds: (performance.now() - t0) / 1000, version: VERSION },
+  };
+}

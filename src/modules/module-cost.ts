@@ -1,0 +1,33 @@
+/**
+ * A cost estimate before starting, in work units (pairs of seed term and operator monomial
+ * the route visits), with a rough time calibrated on this code (measured in the benchmark).
+ */
+import { conjugate, partitionList } from '../core/partitions.js';
+import type { OperatorFamily } from './operators.js';
+import type { SeedSupport } from './seed-support.js';
+
+const SECONDS_PER_UNIT = 1e-6;
+
+function groupOrder(l: readonly number[]): number {
+  let s = 1;
+  for (const part of l) for (let i = 2; i <= part; i++) s *= i;
+  return s;
+}
+
+export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFamily[], route: 'young' | 'iterated'): { units: number; seconds: number } {
+  const n = seed.space.n;
+  let boxes = 1;
+  for (let i = 0; i < n; i++) {
+    boxes *= (seed.xs[i]! + 1) * (seed.ys[i]! + 1) * (((seed.masks[0] ?? 0) >> i) & 1 ? 2 : 1);
+  }
+  let units: number;
+  if (route === 'young') {
+    let shrink = 0;
+    for (const l of partitionList(n)) shrink += 1 / Math.max(groupOrder(l), groupOrder(conjugate(l)));
+    units = seed.count * boxes * shrink;
+  } else {
+    const polar = ops.some((o) => o.kind === 'polar');
+    units = seed.count * boxes * ops.length * (polar ? 4 * n : 1);
+  }
+  return { units, seconds: units * SECONDS_PER_UNIT };
+}
