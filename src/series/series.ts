@@ -116,7 +116,8 @@ export function seriesCanonical(s: Series): string {
   switch (s.kind) {
     case 'q':
     case 'qt':
-      return `${s.kind}:${polyCanonical(s.poly)}`;
+      // one prefix for both: a q,t series without t equals the q-series
+      return `poly:${polyCanonical(s.poly)}`;
     case 'schur':
       return `schur:${[...s.terms].sort(byPartitionKey).map(([k, c]) => `${k}=${polyCanonical(c)}`).join(';')}`;
     case 'multi':

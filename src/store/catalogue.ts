@@ -139,14 +139,14 @@ export class Catalogue {
     return r ? decode(r) : undefined;
   }
 
-  /** Candidate groups (family, statistics, combine, transform) of a kind, and how many share a count. */
-  candidateCounts(kind: SeriesKind, n: number, k: number | undefined, atOne: bigint): { groups: number; sameCount: number; families: string[]; statistics: number } {
-    const where = `kind = ? AND n = ?${k === undefined ? '' : ' AND (k = ? OR k IS NULL)'}`;
-    const args: unknown[] = k === undefined ? [kind, n] : [kind, n, k];
+  /** Candidate groups (family, statistics, combine, transform) of some kinds at size n, and how many share a count. */
+  candidateCounts(kinds: readonly SeriesKind[], n: number, atOne: bigint): { groups: number; sameCount: number; families: string[]; statistics: string[] } {
+    const where = `kind IN (${kinds.map(() => '?').join(',')}) AND n = ?`;
+    const args: unknown[] = [...kinds, n];
     const groups = (this.db.prepare(`SELECT COUNT(*) AS c FROM (SELECT DISTINCT family, statistics, combine, transform FROM distributions WHERE ${where})`).get(...args) as { c: number }).c;
     const sameCount = (this.db.prepare(`SELECT COUNT(*) AS c FROM (SELECT DISTINCT family, statistics, combine, transform FROM distributions WHERE ${where} AND at_one = ?)`).get(...args, atOne.toString()) as { c: number }).c;
-    const families = (this.db.prepare(`SELECT DISTINCT family FROM distributions WHERE ${where}`).all(...args) as { family: string }[]).map((r) => r.family);
-    const statistics = (this.db.prepare(`SELECT COUNT(DISTINCT statistics) AS c FROM distributions WHERE ${where}`).get(...args) as { c: number }).c;
+    const families = (this.db.prepare(`SELECT DISTINCT family FROM distributions WHERE ${where} ORDER BY family`).all(...args) as { family: string }[]).map((r) => r.family);
+    const statistics = (this.db.prepare(`SELECT DISTINCT statistics FROM distributions WHERE ${where} AND combine IN ('single', 'shape') ORDER BY statistics`).all(...args) as { statistics: string }[]).map((r) => r.statistics);
     return { groups, sameCount, families, statistics };
   }
 

@@ -67,7 +67,7 @@ export function tallyUnit(family: Family<unknown>, params: Readonly<Record<strin
       const v = stats[i]!.compute(obj);
       if (!Number.isInteger(v) || v < 0 || v >= 4096) throw new Error(`statistic ${stats[i]!.id} gave ${v} (expected an integer from 0 to 4095)`);
       vals[i] = v;
-      bump(single[i]!, v);
+      bump(single[i]!, packExponents(v, 0));
     }
     for (let i = 0; i < S; i++) for (let j = i + 1; j < S; j++) bump(pairs[i]![j]!, packExponents(vals[i]!, vals[j]!));
     if (hasShape) {

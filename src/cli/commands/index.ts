@@ -2,8 +2,9 @@
 import type { CommandSpec } from '../command.js';
 import { appCommand } from './app.js';
 import { catalogueCommand } from './catalogue.js';
+import { searchCommand } from './search.js';
 import { demoCommand } from './demo.js';
 import { qseriesCommand } from './qseries.js';
 import { versionCommand } from './version.js';
 
-export const COMMANDS: readonly CommandSpec[] = [qseriesCommand, demoCommand, versionCommand, appCommand, catalogueCommand];
+export const COMMANDS: readonly CommandSpec[] = [qseriesCommand, demoCommand, versionCommand, appCommand, catalogueCommand, searchCommand];

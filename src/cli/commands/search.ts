@@ -1,0 +1,122 @@
+/** `gradus search`: find statistics whose distributions equal a target family of series. */
+import { resolve } from 'node:path';
+import { InputError } from '../../core/errors.js';
+import { atomicWrite } from '../../export/atomicWrite.js';
+import { recognise } from '../../match/recognise.js';
+import { targetFromCommand } from '../../match/runFrom.js';
+import { searchCatalogue } from '../../match/search.js';
+import { searchDocument, type SearchDocument } from '../../match/searchDocument.js';
+import { parseTake, TAKE_CHOICES } from '../../series/fromDocument.js';
+import { parseCoeffs } from '../../series/parseCoeffs.js';
+import { rangeText, type Target } from '../../series/target.js';
+import { readTargetFile } from '../../series/targetFile.js';
+import { Catalogue } from '../../store/catalogue.js';
+import { cataloguePath } from '../../store/cataloguePath.js';
+import { provenance } from '../../store/provenance.js';
+import { flagOpt, intOpt, strOpt, type CommandIO, type CommandSpec, type ParsedArgs } from '../command.js';
+import { toJsonText } from '../json-output.js';
+import { CATALOGUE_OPTION } from './catalogue.js';
+
+const N_MAX = 12;
+
+export function parseRange(text: string | undefined): [number, number] | undefined {
+  if (text === undefined) return undefined;
+  const m = /^\s*(\d+)\s*\.\.\s*(\d+)\s*$/.exec(text);
+  if (!m) throw new InputError(`--n-range must be a..b with integers 1 ≤ a ≤ b ≤ ${N_MAX} (got "${text}")`, 'n-range');
+  const a = Number(m[1]);
+  const b = Number(m[2]);
+  if (a < 1 || b < a || b > N_MAX) throw new InputError(`--n-range must be a..b with integers 1 ≤ a ≤ b ≤ ${N_MAX} (got "${text}")`, 'n-range');
+  return [a, b];
+}
+
+async function readTarget(args: ParsedArgs, io: CommandIO, range: [number, number] | undefined): Promise<Target> {
+  const sources = ['target-file', 'from', 'coeffs'].filter((s) => strOpt(args, s) !== undefined);
+  if (sources.length !== 1) throw new InputError('search needs exactly one of --target-file F, --from "<command>", --coeffs "n=…:…"', sources[1] ?? 'from');
+  const take = parseTake(strOpt(args, 'take'));
+  let t: Target;
+  if (sources[0] === 'from') {
+    if (!range) throw new InputError('--from needs --n-range a..b (the sizes n to run the command for)', 'n-range');
+    io.progress.start('running the target command');
+    t = await targetFromCommand(strOpt(args, 'from')!, range[0], range[1], take, io.env, io.cwd);
+    io.progress.finish();
+    return t;
+  }
+  t = sources[0] === 'coeffs' ? parseCoeffs(strOpt(args, 'coeffs')!) : readTargetFile(resolve(io.cwd, strOpt(args, 'target-file')!));
+  if (range) {
+    const entries = t.entries.filter((e) => e.n >= range[0] && e.n <= range[1]);
+    if (entries.length === 0) throw new InputError(`--n-range ${range[0]}..${range[1]} leaves no entry of the target (it has ${rangeText(t.entries)})`, 'n-range');
+    t = { ...t, entries };
+  }
+  return t;
+}
+
+export const searchCommand: CommandSpec = {
+  name: 'search',
+  summary: 'find statistics (and pairs, sums, Frobenius-level sums) whose distribution equals a target',
+  usage: 'search [--n-range a..b] (--target-file F | --from "<command with {n} {k}>" | --coeffs "n=3:1,2,2,1;…") [--take T] [--save FILE] [--catalogue PATH] [--json]',
+  options: [
+    { name: 'n-range', type: 'string', description: 'sizes n of the target (needed with --from)', placeholder: 'a..b' },
+    { name: 'target-file', type: 'string', description: 'a target file in our format (README "Target files")', placeholder: 'F' },
+    { name: 'from', type: 'string', description: 'a gradus data command, run for each n (and k = 1..n) with {n}, {k} replaced', placeholder: 'CMD' },
+    { name: 'coeffs', type: 'string', description: 'coefficients typed: "n=3:1,2,2,1;n=4,k=2:…" (q,t rows separated by |)', placeholder: 'TEXT' },
+    { name: 'take', type: 'string', description: `what to read from --from documents: ${TAKE_CHOICES.join(', ')} (sign = coefficient of s_(1^n) = ⟨F,e_n⟩)`, placeholder: 'T' },
+    { name: 'limit', type: 'int', description: 'show at most this many matches (default 10)', placeholder: 'M', min: 1, max: 10000 },
+    { name: 'save', type: 'string', description: 'also write the result as a saved-search file (for gradus export)', placeholder: 'FILE' },
+    { name: 'force', type: 'flag', description: 'let --save replace an existing file' },
+    CATALOGUE_OPTION,
+  ],
+  producesData: true,
+  details: [
+    'The catalogue (gradus catalogue build) is searched for the target and its variants (q-reversed, ω,',
+    'q and t swapped); each match says the range it was verified on. Every search is kept in the catalogue',
+    'with an id that gradus export accepts (as search:ID). Example:',
+    '  gradus search --n-range 1..6 --from "qseries ordered-stirling --n {n} --k {k}"',
+  ].join('\n'),
+  async run(args: ParsedArgs, io) {
+    const range = parseRange(strOpt(args, 'n-range'));
+    const path = cataloguePath(strOpt(args, 'catalogue'), io.env, io.cwd);
+    const cat = Catalogue.open(path, { readonly: true });
+    try {
+      const target = await readTarget(args, io, range);
+      const t0 = Date.now();
+      const outcome = searchCatalogue(cat, target);
+      const rec = recognise(target);
+      const seconds = (Date.now() - t0) / 1000;
+      const prov = provenance({ target: target.label, catalogue: path }, 'exact look-up of series hashes in the catalogue, then exact comparison on every entry', [], seconds);
+      const doc = searchDocument(target, rangeText(target.entries), rec, outcome, prov);
+      const id = cat.saveSearch(target.label, doc, prov);
+      const save = strOpt(args, 'save');
+      if (save) atomicWrite(resolve(io.cwd, save), toJsonText(doc) + '\n', flagOpt(args, 'force'), 'save');
+      if (flagOpt(args, 'json')) return io.out(toJsonText({ ...doc, id: `search:${id}` }));
+      printText(io, doc, id, intOpt(args, 'limit') ?? 10);
+    } finally {
+      cat.close();
+    }
+  },
+};
+
+function printText(io: CommandIO, d: SearchDocument, id: number, limit: number): void {
+  io.out(`target: ${String((d.target as { label?: string }).label)} (${d.range})`);
+  const r = d.recognition;
+  if (r.formula) io.out(`formula: f = ${r.formula}  (verified on ${d.range})`);
+  for (const x of r.recurrences) io.out(`recurrence: ${x.text}${x.name ? `  [${x.name}]` : ''}  (checked on ${x.checked} entries)`);
+  const flags = [r.palindromic ? 'palindromic' : 'not palindromic', r.unimodal ? 'unimodal' : 'not unimodal'];
+  io.out(`every entry: ${flags.join(', ')}`);
+  const t = d.tried;
+  const triedLine = `tried ${t.candidates} candidates at n = ${t.anchor?.n ?? '-'}${t.anchor?.k === undefined ? '' : `, k = ${t.anchor.k}`} (${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there) over ${t.families.length} families [${t.families.join(', ')}], ${t.statistics.length} statistics, forms ${t.combines.join('/')}, variants ${t.variants.join(', ')}; catalogue n ≤ ${t.catalogueMaxN}`;
+  if (d.matches.length === 0) {
+    io.out('no match: no distribution in the catalogue equals the target or any of its variants.');
+    if (!t.anchor) io.out(`the catalogue holds n ≤ ${t.catalogueMaxN}, below every n of the target; extend it with gradus catalogue build --n-max N`);
+    io.out(triedLine);
+  } else {
+    io.out(`${d.matches.length} match${d.matches.length === 1 ? '' : 'es'}, simplest first:`);
+    d.matches.slice(0, limit).forEach((m, i) => {
+      io.out(`${String(i + 1).padStart(3)}. ${m.formula}`);
+      io.out(`     family ${m.family}, statistics ${m.statistics.join(' & ')} (${m.combine}${m.transform ? `, via ${m.transform}` : ''}), ${m.mapping}, variant ${m.variant}`);
+      io.out(`     verified ${m.verified}${m.complete ? '' : `; not checked (outside the catalogue or the family): ${m.unchecked.map((p) => `(${p.n}${p.k === undefined ? '' : `,${p.k}`})`).join(' ')}`}`);
+    });
+    if (d.matches.length > limit) io.out(`… ${d.matches.length - limit} more (--limit, or --json for all)`);
+    io.out(triedLine);
+  }
+  io.out(`saved as search:${id} (gradus export search:${id} --format latex --out FILE)`);
+}

@@ -1,0 +1,137 @@
+/**
+ * Search the catalogue for distributions equal to a target. For each variant of the
+ * target, the anchor entry (largest n held in the catalogue) is looked up by its exact
+ * hash; every row found gives candidates (group × parameter mapping) that are then
+ * checked on every entry of the target. Counts at q = 1 are reported as the first filter.
+ */
+import type { Catalogue, Combine, StoredRow } from '../store/catalogue.js';
+import { seriesHash } from '../store/seriesHash.js';
+import { seriesAtOne, seriesEquals, type SeriesKind } from '../series/series.js';
+import { rangeText, type Target, type TargetEntry } from '../series/target.js';
+import { candidateFormula } from './candidateFormula.js';
+import { applyMapping, mappingCost, mappingsFor, type Mapping } from './parameterMapping.js';
+import { variantsOf } from './variants.js';
+
+export interface SearchMatch {
+  readonly family: string;
+  readonly statistics: readonly string[];
+  readonly combine: Combine;
+  readonly transform: string;
+  readonly variant: string;
+  readonly mapping: string;
+  readonly formula: string;
+  readonly verified: string;
+  readonly verifiedEntries: readonly { n: number; k?: number }[];
+  /** Target entries the catalogue could not check (outside its range or the family's). */
+  readonly unchecked: readonly { n: number; k?: number }[];
+  readonly complete: boolean;
+  readonly cost: number;
+}
+
+export interface SearchTried {
+  readonly anchor: { n: number; k?: number } | null;
+  readonly catalogueMaxN: number;
+  readonly candidates: number;
+  readonly sameCount: number;
+  readonly exactAtAnchor: number;
+  readonly families: readonly string[];
+  readonly statistics: readonly string[];
+  readonly variants: readonly string[];
+  readonly combines: readonly string[];
+}
+
+export interface SearchOutcome {
+  readonly matches: readonly SearchMatch[];
+  readonly tried: SearchTried;
+}
+
+const COMBINE_COST: Record<Combine, number> = { single: 0, shape: 0, joint: 1, fundamental: 1, ifundamental: 1.5, sum: 2 };
+
+function kindsFor(kind: SeriesKind): SeriesKind[] {
+  return kind === 'schur' ? ['schur'] : kind === 'multi' ? ['multi'] : ['q', 'qt'];
+}
+
+function chooseAnchor(entries: readonly TargetEntry[], maxN: number): TargetEntry | undefined {
+  const held = entries.filter((e) => e.n <= maxN);
+  if (held.length === 0) return undefined;
+  const n = Math.max(...held.map((e) => e.n));
+  const atN = held.filter((e) => e.n === n);
+  return atN.sort((a, b) => Math.abs((a.k ?? 0) - n / 2) - Math.abs((b.k ?? 0) - n / 2))[0];
+}
+
+export function searchCatalogue(cat: Catalogue, target: Target): SearchOutcome {
+  const maxN = cat.maxN();
+  const variants = variantsOf(target);
+  const anchor0 = chooseAnchor(target.entries, maxN);
+  const kinds = kindsFor(target.kind);
+  const counts = anchor0 ? cat.candidateCounts(kinds, anchor0.n, seriesAtOne(anchor0.series)) : { groups: 0, sameCount: 0, families: [], statistics: [] };
+  const matches = new Map<string, SearchMatch>();
+  let exactAtAnchor = 0;
+  for (const v of variants) {
+    const anchor = anchor0 && v.target.entries.find((e) => e.n === anchor0.n && e.k === anchor0.k);
+    if (!anchor) continue;
+    const rows = cat.byHash(seriesHash(anchor.series)).filter((r) => seriesEquals(r.series, anchor.series));
+    exactAtAnchor += rows.length;
+    for (const row of rows) {
+      for (const m of mappingsFor(anchor, row)) {
+        const key = [row.family, row.statistics.join(','), row.combine, row.transform, m.text].join('|');
+        if (matches.has(key)) continue;
+        const found = verify(cat, row, m, v.target.entries);
+        if (!found) continue;
+        const cost = COMBINE_COST[row.combine] + (row.transform ? 1 : 0) + (v.id === 'as-given' ? 0 : 1) + mappingCost(m) + found.unchecked.length * 0.01;
+        matches.set(key, {
+          family: row.family,
+          statistics: row.statistics,
+          combine: row.combine,
+          transform: row.transform,
+          variant: v.id,
+          mapping: m.text,
+          formula: candidateFormula(row.family, Object.keys(row.params).sort((a, b) => (a === 'n' ? -1 : b === 'n' ? 1 : a.localeCompare(b))).join(','), row.statistics, row.combine, v.id),
+          verified: rangeText(found.verified),
+          verifiedEntries: found.verified,
+          unchecked: found.unchecked,
+          complete: found.unchecked.length === 0,
+          cost,
+        });
+      }
+    }
+  }
+  const sorted = [...matches.values()].sort((a, b) => Number(b.complete) - Number(a.complete) || b.verifiedEntries.length - a.verifiedEntries.length || a.cost - b.cost || a.family.localeCompare(b.family) || a.statistics.join().localeCompare(b.statistics.join()));
+  return {
+    matches: sorted,
+    tried: {
+      anchor: anchor0 ? { n: anchor0.n, ...(anchor0.k === undefined ? {} : { k: anchor0.k }) } : null,
+      catalogueMaxN: maxN,
+      candidates: counts.groups,
+      sameCount: counts.sameCount,
+      exactAtAnchor,
+      families: counts.families,
+      statistics: counts.statistics,
+      variants: variants.map((v) => v.id),
+      combines: target.kind === 'schur' ? ['shape', 'fundamental', 'ifundamental'] : ['single', 'sum', 'joint'],
+    },
+  };
+}
+
+type Place = { n: number; k?: number };
+
+function verify(cat: Catalogue, row: StoredRow, m: Mapping, entries: readonly TargetEntry[]): { verified: Place[]; unchecked: Place[] } | undefined {
+  const verified: Place[] = [];
+  const unchecked: Place[] = [];
+  for (const e of entries) {
+    const place: Place = { n: e.n, ...(e.k === undefined ? {} : { k: e.k }) };
+    const params = applyMapping(m, e);
+    if (params['n']! < 1 || (params['k'] !== undefined && (params['k'] < 1 || params['k'] > params['n']!))) {
+      unchecked.push(place);
+      continue;
+    }
+    const r = cat.find(row.family, params, row.statistics.join(','), row.combine, row.transform);
+    if (!r) {
+      unchecked.push(place);
+      continue;
+    }
+    if (!seriesEquals(r.series, e.series)) return undefined;
+    verified.push(place);
+  }
+  return verified.length > 0 ? { verified, unchecked } : undefined;
+}
