@@ -5,8 +5,31 @@
 import { InputError } from '../../src/core/errors.js';
 import { unknownNameMessage } from '../../src/core/suggest.js';
 import type { Transform } from '../../src/enumerate/plugin.js';
+import { complement, wordComplement } from './complement.js';
+import { conjugate } from './conjugate.js';
+import { dyckReverse } from './dyck-reverse.js';
+import { foata, wordFoata } from './foata.js';
+import { inverse } from './inverse.js';
+import { reverse, wordReverse } from './reverse.js';
+import { rskInsertion, rskRecording } from './rsk.js';
+import { transpose } from './transpose.js';
+import { zeta } from './zeta.js';
 
-export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [];
+export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
+  complement,
+  wordComplement,
+  conjugate,
+  dyckReverse,
+  foata,
+  wordFoata,
+  inverse,
+  reverse,
+  wordReverse,
+  rskInsertion,
+  rskRecording,
+  transpose,
+  zeta,
+];
 
 /** The transform with this id; an InputError naming the nearest ids otherwise. */
 export function transformById(id: string): Transform<unknown, unknown> {

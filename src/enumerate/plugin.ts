@@ -73,4 +73,6 @@ export interface Transform<A, B> {
   readonly source: string;
   readonly examples: readonly (readonly [A, B])[];
   apply(obj: A): B;
+  /** True when apply is its own inverse (the contract tests then check apply∘apply = id). */
+  readonly involution?: boolean;
 }
