@@ -1,0 +1,203 @@
+/**
+ * Evaluation of a parsed expression to a symmetric function over Q[q,t]; scalars are
+ * symmetric functions of degree 0. The function table doubles as the documentation.
+ */
+import { InputError, LimitError } from '../core/errors.js';
+import { Poly } from '../core/poly.js';
+import { PolyQ } from '../core/polyq.js';
+import { unknownNameMessage } from '../core/suggest.js';
+import type { Arg, Node } from './expression-parser.js';
+import { modifiedHallLittlewood } from './hall-littlewood.js';
+import { modifiedMacdonald } from './macdonald.js';
+import { delta, deltaPrime, deltaPrimeOfEn, nabla } from './operators.js';
+import { plethysmTimes } from './plethysm.js';
+import { SymFun } from './symfun.js';
+import type { Basis } from './transitions.js';
+
+export interface EvalOptions {
+  /** Largest degree for H̃_μ and the operators (their cost grows like n!). */
+  readonly maxDegree: number;
+}
+
+export interface FunctionDoc {
+  readonly name: string;
+  readonly signature: string;
+  readonly description: string;
+}
+
+export const EXPRESSION_FUNCTIONS: readonly FunctionDoc[] = [
+  { name: 's', signature: 's(2,1)', description: 'Schur function (parts of a partition; s() = 1)' },
+  { name: 'm', signature: 'm(2,1)', description: 'monomial symmetric function' },
+  { name: 'e', signature: 'e(2,1)', description: 'elementary symmetric functions e_2 e_1 (e(0) = 1)' },
+  { name: 'h', signature: 'h(2,1)', description: 'complete homogeneous symmetric functions' },
+  { name: 'p', signature: 'p(2,1)', description: 'power sums' },
+  { name: 'H', signature: 'H(2,1)', description: 'modified Macdonald polynomial H̃_μ(X;q,t)' },
+  { name: 'HL', signature: 'HL(2,1)', description: 'modified Hall–Littlewood function H̃_μ(X;t) = H̃_μ(X;0,t)' },
+  { name: 'nabla', signature: 'nabla(F)', description: '∇: H̃_μ ↦ T_μ H̃_μ' },
+  { name: 'delta', signature: 'delta(f, F)', description: 'Δ_f: H̃_μ ↦ f[B_μ] H̃_μ' },
+  { name: 'deltaprime', signature: 'deltaprime(f, F)', description: "Δ'_f: H̃_μ ↦ f[B_μ − 1] H̃_μ" },
+  { name: 'omega', signature: 'omega(F)', description: 'ω: s_λ ↦ s_λ′' },
+  { name: 'subs', signature: 'subs(F, t=0)', description: 'set q and/or t to integers (subs(F, q=1, t=1))' },
+  { name: 'swap', signature: 'swap(F)', description: 'exchange q and t' },
+  { name: 'pleth', signature: 'pleth(F, 1-q)', description: 'plethysm F[X·A] by a q,t-polynomial A with integer coefficients' },
+  { name: 'inner', signature: 'inner(F, G)', description: 'Hall scalar product ⟨F, G⟩ (a scalar)' },
+  { name: 'hilbert', signature: 'hilbert(F)', description: 'Hilbert series ⟨F, p_1^n⟩ (a scalar)' },
+];
+
+const BASIS_NAMES = new Set(['s', 'm', 'e', 'h', 'p']);
+
+function fail(col: number, msg: string): never {
+  throw new InputError(`column ${col}: ${msg}`, 'expression');
+}
+
+function constantOf(f: SymFun): PolyQ | undefined {
+  const d = f.degrees();
+  if (d.length === 0) return PolyQ.zero;
+  if (d.length === 1 && d[0] === 0) return f.coeff([]);
+  return undefined;
+}
+
+export function evaluateNode(node: Node, opts: EvalOptions): SymFun {
+  const ev = (n: Node): SymFun => evaluateNode(n, opts);
+  switch (node.kind) {
+    case 'num':
+      return SymFun.scalar(Poly.constant(node.value));
+    case 'var':
+      return SymFun.scalar(node.name === 'q' ? Poly.q : Poly.t);
+    case 'neg':
+      return ev(node.arg).neg();
+    case 'pow': {
+      const b = ev(node.base);
+      const c = constantOf(b);
+      return c ? SymFun.scalar(PolyQ.of(c.num.pow(node.exp), c.den ** BigInt(node.exp))) : b.pow(node.exp);
+    }
+    case 'bin': {
+      const a = ev(node.left);
+      const b = ev(node.right);
+      if (node.op === '+') return a.add(b);
+      if (node.op === '-') return a.sub(b);
+      if (node.op === '*') {
+        const ca = constantOf(a);
+        const cb = constantOf(b);
+        if (cb) return a.scale(cb);
+        if (ca) return b.scale(ca);
+        return a.mul(b);
+      }
+      const c = constantOf(b);
+      if (!c || !c.num.isConstant() || c.isZero()) fail(node.right.col, 'division is only by a non-zero integer');
+      return a.scale(PolyQ.of(Poly.constant(c.den), c.num.constantTerm()));
+    }
+    case 'call':
+      return evaluateCall(node, opts);
+  }
+}
+
+function exprArgs(node: Extract<Node, { kind: 'call' }>, count: number, sig: string): Node[] {
+  if (node.args.length !== count) fail(node.col, `${node.name} takes ${count} argument${count === 1 ? '' : 's'}: ${sig}`);
+  return node.args.map((a) => {
+    if (a.kind !== 'expr') fail(a.col, `${node.name} takes no "${a.name}=" argument: ${sig}`);
+    return a.expr;
+  });
+}
+
+function partsOf(node: Extract<Node, { kind: 'call' }>): number[] {
+  return node.args.map((a: Arg) => {
+    if (a.kind !== 'expr' || a.expr.kind !== 'num') fail(a.col, `${node.name}(…) takes the parts of a partition as integers, as ${node.name}(2,1)`);
+    const v = (a.expr as { value: bigint }).value;
+    if (v > 1000n) fail(a.col, `a part must be at most 1000`);
+    return Number(v);
+  });
+}
+
+function checkDegree(f: SymFun, what: string, col: number, opts: EvalOptions): void {
+  const n = Math.max(0, ...f.degrees());
+  if (n > opts.maxDegree) {
+    throw new LimitError(`column ${col}: ${what} in degree ${n} needs every H̃_μ with μ ⊢ ${n}; the limit is degree ${opts.maxDegree} (raise it with --max-degree)`, 'max-degree');
+  }
+}
+
+function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions): SymFun {
+  const ev = (n: Node): SymFun => evaluateNode(n, opts);
+  const name = node.name;
+  if (BASIS_NAMES.has(name)) {
+    const parts = partsOf(node);
+    try {
+      return SymFun.basisElement(name as Basis, parts);
+    } catch (e) {
+      if (e instanceof InputError) fail(node.col, e.message);
+      throw e;
+    }
+  }
+  switch (name) {
+    case 'H':
+    case 'HL': {
+      const parts = partsOf(node);
+      if (parts.some((x, i) => x === 0 || (i > 0 && x > parts[i - 1]!))) fail(node.col, `${name}(…) needs a partition: positive, weakly decreasing parts`);
+      const n = parts.reduce((a, b) => a + b, 0);
+      if (name === 'H' && n > opts.maxDegree) {
+        throw new LimitError(`column ${node.col}: H(…) of size ${n} sums over ${n}! fillings; the limit is ${opts.maxDegree} (raise it with --max-degree)`, 'max-degree');
+      }
+      return name === 'H' ? modifiedMacdonald(parts) : modifiedHallLittlewood(parts);
+    }
+    case 'nabla': {
+      const [a] = exprArgs(node, 1, 'nabla(F)');
+      const f = ev(a!);
+      checkDegree(f, 'nabla', node.col, opts);
+      return nabla(f);
+    }
+    case 'delta':
+    case 'deltaprime': {
+      const [a, b] = exprArgs(node, 2, `${name}(f, F)`);
+      const g = ev(a!);
+      const f = ev(b!);
+      checkDegree(f, name, node.col, opts);
+      if (name === 'delta') return delta(g, f);
+      // e_n has a closed expansion in the H̃ basis: use it when F is a multiple of e_n
+      const d = f.degrees();
+      if (d.length === 1 && d[0]! > 0) {
+        const en = SymFun.basisElement('e', [d[0]!]);
+        const c = f.coeff(new Array(d[0]!).fill(1));
+        if (!c.isZero() && f.equals(en.scale(c))) return deltaPrimeOfEn(g, d[0]!).scale(c);
+      }
+      return deltaPrime(g, f);
+    }
+    case 'omega': {
+      const [a] = exprArgs(node, 1, 'omega(F)');
+      return ev(a!).omega();
+    }
+    case 'swap': {
+      const [a] = exprArgs(node, 1, 'swap(F)');
+      return ev(a!).swapQT();
+    }
+    case 'subs': {
+      if (node.args.length < 2 || node.args[0]!.kind !== 'expr') fail(node.col, 'subs takes a function and one or two assignments: subs(F, t=0) or subs(F, q=1, t=1)');
+      const f = ev((node.args[0] as { expr: Node }).expr);
+      const values: { q?: bigint; t?: bigint } = {};
+      for (const a of node.args.slice(1)) {
+        if (a.kind !== 'assign' || (a.name !== 'q' && a.name !== 't')) fail(a.col, 'expected an assignment q=<integer> or t=<integer>');
+        const asg = a as Extract<Arg, { kind: 'assign' }>;
+        const c = constantOf(ev(asg.value));
+        if (!c || !c.num.isConstant() || !c.isIntegral()) fail(asg.value.col, `the value of ${asg.name} must be an integer`);
+        values[asg.name as 'q' | 't'] = c!.num.constantTerm();
+      }
+      return f.specialize(values);
+    }
+    case 'pleth': {
+      const [a, b] = exprArgs(node, 2, 'pleth(F, A)');
+      const f = ev(a!);
+      const alpha = constantOf(ev(b!));
+      if (!alpha || !alpha.isIntegral()) fail(b!.col, 'the alphabet must be a polynomial in q, t with integer coefficients, as 1-q');
+      return plethysmTimes(f, alpha!.num);
+    }
+    case 'inner': {
+      const [a, b] = exprArgs(node, 2, 'inner(F, G)');
+      return SymFun.scalar(ev(a!).hallInner(ev(b!)));
+    }
+    case 'hilbert': {
+      const [a] = exprArgs(node, 1, 'hilbert(F)');
+      return SymFun.scalar(ev(a!).hilbert());
+    }
+    default:
+      return fail(node.col, unknownNameMessage('function', name, EXPRESSION_FUNCTIONS.map((f) => f.name)));
+  }
+}
