@@ -43,7 +43,7 @@ export function moduleChecks(n: number, cells: readonly ModuleCell[], axes: read
     holds: !badTurn,
     detail: badTurn ? `fails at ${label(coords(badTurn))} (${badTurn.dim} vs ${dimAt(turn(coords(badTurn)))} at ${label(turn(coords(badTurn)))})` : `dim at d equals dim at ${axes.length === 1 ? 'the reversed degree' : 'the opposite corner'} for every cell`,
   });
-  if (axes.length === 2) {
+  if (axes.length === 2 && axes[0] === 'x' && axes[1] === 'y') {
     const badT = live.find((c) => dimAt([coords(c)[1]!, coords(c)[0]!]) !== c.dim);
     findings.push({
       check: 'Hilbert table symmetric under transposition',

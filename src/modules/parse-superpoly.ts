@@ -15,7 +15,7 @@ export function parseSuperpoly(text: string, n: number, option = 'poly'): RawPol
   let pos = 0;
   const fail = (msg: string, at = pos): never => {
     const near = text.slice(at, at + 8);
-    throw new InputError(`--${option}: ${msg} at column ${at + 1}${near ? ` (near "${near}")` : ' (end of input)'}`, option);
+    throw new InputError(`--${option}: column ${at + 1}: ${msg}${near ? ` (near "${near}")` : ' (at the end)'}`, option);
   };
   const skip = (): void => {
     while (pos < text.length && /\s/.test(text[pos]!)) pos++;

@@ -1,0 +1,111 @@
+/** `gradus module`: closure of a seed under operator families, with Hilbert and Frobenius series. */
+import { InputError } from '../../core/errors.js';
+import { unknownNameMessage } from '../../core/suggest.js';
+import { computeModule, DEFAULT_MAX_WORK, type ModuleMethod } from '../../modules/compute-module.js';
+import { resultToJson, resultToText } from '../../modules/format-result.js';
+import { SEED_NAMES, type SeedName } from '../../modules/seeds.js';
+import { formatDuration } from '../progress.js';
+import { flagOpt, intOpt, listOpt, strOpt, type CommandSpec } from '../command.js';
+import { toJsonText } from '../json-output.js';
+
+const METHODS: readonly ModuleMethod[] = ['auto', 'young', 'iterated', 'exact'];
+
+function intList(args: Parameters<CommandSpec['run']>[0], name: string): number[] | undefined {
+  const raw = listOpt(args, name);
+  if (!raw) return undefined;
+  return raw.map((s) => {
+    if (!/^\d+$/.test(s)) throw new InputError(`--${name} must be comma-separated non-negative integers (got "${s}")`, name);
+    return Number(s);
+  });
+}
+
+export function parseWork(text: string | undefined, option = 'max-work'): number | undefined {
+  if (text === undefined) return undefined;
+  const v = Number(text);
+  if (!/^\d+(\.\d+)?(e\d+)?$/i.test(text.trim()) || !Number.isFinite(v) || v <= 0) {
+    throw new InputError(`--${option} must be a positive number of work units such as 5e9 (got "${text}")`, option);
+  }
+  return v;
+}
+
+export const moduleCommand: CommandSpec = {
+  name: 'module',
+  summary: 'closure of a seed under derivatives and polarizations: multigraded Hilbert and Frobenius series',
+  usage:
+    'module --seed NAME --n N [--k K] [--height S] [--x-exponents …] [--y-exponents …] [--theta …] [--poly "…"] [--symmetrize|--antisymmetrize] --ops x,theta,… [--frobenius] [--prime P] [--method M] [--max-work W] [--json]',
+  options: [
+    { name: 'seed', type: 'string', description: `seed: ${SEED_NAMES.join(', ')}`, placeholder: 'NAME' },
+    { name: 'n', type: 'int', description: 'number of variables of each kind', placeholder: 'N', min: 1, max: 10 },
+    { name: 'k', type: 'int', description: 'k of δ_{n,k} and of the θ-staircase (1..n)', placeholder: 'K', min: 1, max: 10 },
+    { name: 'height', type: 'int', description: 'height s of the first n−k positions of δ_{n,k} (default k−1)', placeholder: 'S', min: 0, max: 30 },
+    { name: 'x-exponents', type: 'list', description: 'x-exponents of a monomial seed', placeholder: 'A,B,…' },
+    { name: 'y-exponents', type: 'list', description: 'y-exponents of a monomial seed', placeholder: 'A,B,…' },
+    { name: 'theta', type: 'list', description: 'θ indices (1-based) of a monomial seed', placeholder: 'I,J,…' },
+    { name: 'poly', type: 'string', description: 'a superpolynomial such as "x1^2*x2*th1 - 3*y2*th1*th3" (seed poly)', placeholder: 'TEXT' },
+    { name: 'symmetrize', type: 'flag', description: 'symmetrize the monomial or polynomial seed (monomials are antisymmetrized by default)' },
+    { name: 'antisymmetrize', type: 'flag', description: 'antisymmetrize a typed polynomial seed' },
+    { name: 'ops', type: 'list', description: 'operator families: x, y, theta (all ∂/∂x_i, ∂/∂y_i, ∂/∂θ_i), polarJ = Σ y_i ∂x_i^J', placeholder: 'x,theta,…' },
+    { name: 'frobenius', type: 'flag', description: 'also the Schur expansion of every cell' },
+    { name: 'prime', type: 'int', description: 'first prime (below 2^26); a second prime always confirms', placeholder: 'P', min: 2, max: 2 ** 26 - 1 },
+    { name: 'method', type: 'string', description: `route: ${METHODS.join(', ')} (auto: young for derivative operators, iterated otherwise; exact: over Q, small cases)`, placeholder: 'M' },
+    { name: 'max-work', type: 'string', description: `refuse estimated work above W units (default ${DEFAULT_MAX_WORK.toExponential(0)})`, placeholder: 'W' },
+  ],
+  producesData: true,
+  details: [
+    'seeds:',
+    '  vandermonde              ε_n(x1^(n−1) x2^(n−2) … xn^0)',
+    '  superspace-vandermonde   δ_{n,k} = ε_n(Π_{i≤n−k} x_i^s θ_i · Π_j x_{n−k+j}^{k−j}), s = --height (default k−1)',
+    '  theta-staircase          ε_n(θ1…θ_{n−k} · Π_j x_{n−k+j}^{k−j})',
+    '  monomial                 --x-exponents, --y-exponents, --theta; antisymmetrized (or --symmetrize)',
+    '  poly                     --poly "<superpolynomial>" as typed (or --symmetrize / --antisymmetrize)',
+    'example: gradus module --seed superspace-vandermonde --n 4 --k 2 --ops x,theta --frobenius',
+  ].join('\n'),
+  run(args, io) {
+    const seedName = strOpt(args, 'seed');
+    if (!seedName) throw new InputError(`module needs --seed NAME (${SEED_NAMES.join(', ')})`, 'seed');
+    if (!(SEED_NAMES as readonly string[]).includes(seedName)) throw new InputError(`--seed: ${unknownNameMessage('seed', seedName, SEED_NAMES)}`, 'seed');
+    const n = intOpt(args, 'n');
+    if (n === undefined) throw new InputError('module needs --n N (1..10)', 'n');
+    const ops = listOpt(args, 'ops');
+    if (!ops) throw new InputError('module needs --ops (x, y, theta, polar1, polar2, …), e.g. --ops x,theta', 'ops');
+    const method = (strOpt(args, 'method') ?? 'auto') as ModuleMethod;
+    if (!METHODS.includes(method)) throw new InputError(`--method: ${unknownNameMessage('method', method, METHODS)}`, 'method');
+    if (flagOpt(args, 'symmetrize') && flagOpt(args, 'antisymmetrize')) throw new InputError('--symmetrize and --antisymmetrize exclude each other', 'symmetrize');
+    const symmetrizer = flagOpt(args, 'symmetrize') ? 'symmetrize' : flagOpt(args, 'antisymmetrize') ? 'antisymmetrize' : undefined;
+    const k = intOpt(args, 'k');
+    const height = intOpt(args, 'height');
+    const xe = intList(args, 'x-exponents');
+    const ye = intList(args, 'y-exponents');
+    const th = intList(args, 'theta');
+    const poly = strOpt(args, 'poly');
+    const prime = intOpt(args, 'prime');
+    const result = computeModule(
+      {
+        seed: seedName as SeedName,
+        n,
+        ops,
+        ...(k !== undefined ? { k } : {}),
+        ...(height !== undefined ? { height } : {}),
+        ...(xe ? { xExponents: xe } : {}),
+        ...(ye ? { yExponents: ye } : {}),
+        ...(th ? { theta: th } : {}),
+        ...(poly !== undefined ? { poly } : {}),
+        ...(symmetrizer ? { symmetrizer } : {}),
+      },
+      {
+        frobenius: flagOpt(args, 'frobenius'),
+        method,
+        ...(prime !== undefined ? { prime } : {}),
+        ...(strOpt(args, 'max-work') !== undefined ? { maxWork: parseWork(strOpt(args, 'max-work')) } : {}),
+        onEstimate: (units, seconds) => io.err(`estimated work: ${units.toExponential(2)} units (about ${formatDuration(seconds)} per prime, two primes)`),
+        onProgress: (done, total, label) => {
+          if (done <= 1) io.progress.start('module', total || undefined);
+          io.progress.update(done);
+          void label;
+        },
+      },
+    );
+    io.progress.finish();
+    io.out(flagOpt(args, 'json') ? toJsonText(resultToJson(result)) : resultToText(result));
+  },
+};
