@@ -7,7 +7,7 @@ import type { ParamSpec, Params, ParamValue } from '../../src/enumerate/plugin.j
 
 function describe(spec: ParamSpec): string {
   const range = `${spec.min ?? 0}..${spec.max ?? '∞'}`;
-  if (spec.kind === 'int') return `an integer from ${range}`;
+  if (spec.kind === 'int') return `an integer from ${spec.min ?? 0} to ${spec.max ?? '∞'}`;
   if (spec.kind === 'partition') return `a partition (weakly decreasing positive integers, such as 3,1) of size ${range}`;
   return `a list of non-negative integers (such as 2,1,1) with sum ${range}`;
 }
