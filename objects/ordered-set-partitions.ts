@@ -1,11 +1,12 @@
 /**
  * Ordered set partitions of [n] into k blocks, as surjective words f: [n] → [k]
  * (element i lies in block f(i)), streamed in lexicographic order of that word.
- * Fast path: `visit` steps one word with nextSurjection and refills one set of block
- * buffers; shards split by the first two letters of the word.
+ * Fast path: `visit` walks set partitions times block orders with reused buffers (its
+ * order differs from generate's); nextSurjection/surjectionToBlocks step the word order.
  */
 import { factorial } from '../src/core/integers.js';
 import type { Family, ParamSpec, Params, Shard } from '../src/enumerate/plugin.js';
+import { firstGrowthWord, growthWordToBlocks, nextGrowthWord, renderBlocks } from './support/growth-words.js';
 import { stirling2 } from './support/numbers.js';
 import { checkAtMost, emptyFamilyError, intParam, validateBySpec } from './support/params.js';
 import { randomSetPartition } from './support/random-set-partition.js';
@@ -80,37 +81,48 @@ function firstWord(n: number, k: number, prefix: readonly number[]): { w: number
   return { w, counts };
 }
 
+/** Next permutation (lexicographic) of p in place; the first changed index, or −1 after the last. */
+function nextOrder(p: number[]): number {
+  let i = p.length - 2;
+  while (i >= 0 && p[i]! > p[i + 1]!) i--;
+  if (i < 0) return -1;
+  let j = p.length - 1;
+  while (p[j]! < p[i]!) j--;
+  let t = p[i]!;
+  p[i] = p[j]!;
+  p[j] = t;
+  for (let l = i + 1, r = p.length - 1; l < r; l++, r--) {
+    t = p[l]!;
+    p[l] = p[r]!;
+    p[r] = t;
+  }
+  return i;
+}
+
+/**
+ * The fast path: every set partition into k blocks (restricted growth order) in every
+ * order of its blocks (lexicographic). Stepping the order only swaps block pointers, so
+ * an object costs O(1) amortized. Shards take whole set partitions round-robin (each
+ * brings k! objects, so shards balance within one set partition's worth).
+ */
 function visitOsp(n: number, k: number, f: (p: OrderedSetPartition) => void, shard?: Shard): void {
   const [index, count] = shardParts(shard);
-  const blocks = Array.from({ length: k }, () => [] as number[]);
-  const run = (prefix: readonly number[]): void => {
-    const start = firstWord(n, k, prefix);
-    if (!start) return;
-    const { w, counts } = start;
-    for (const b of blocks) b.length = 0;
+  if (stirling2(n, k) === 0n) return;
+  const a = firstGrowthWord(n, k);
+  const order = Array.from({ length: k }, (_, i) => i);
+  const ordered: number[][] = new Array<number[]>(k);
+  let j = 0;
+  do {
+    if (j++ % count !== index) continue;
+    const blocks = growthWordToBlocks(a);
+    for (let i = 0; i < k; i++) ordered[i] = blocks[(order[i] = i)]!;
     let from = 0;
     do {
-      surjectionToBlocks(w, blocks, from);
-      f(blocks);
-      from = nextSurjection(w, counts, k, prefix.length);
+      for (let i = from; i < k; i++) ordered[i] = blocks[order[i]!]!;
+      f(ordered);
+      from = nextOrder(order);
     } while (from >= 0);
-  };
-  if (count === 1 || n < 2) {
-    if (index === 0) run([]);
-    return;
-  }
-  // The completions of a prefix depend only on its number of distinct letters: group the
-  // prefixes of length 3 by that number and deal each group round-robin, so shards balance.
-  const len = Math.min(n, 3);
-  const groups: number[][][] = Array.from({ length: len + 1 }, () => []);
-  const total = k ** len;
-  for (let code = 0; code < total; code++) {
-    const p: number[] = [];
-    for (let i = 0, c = code; i < len; i++, c = Math.floor(c / k)) p.unshift(c % k);
-    groups[new Set(p).size]!.push(p);
-  }
-  let j = 0;
-  for (const g of groups) for (const p of g) if (j++ % count === index) run(p);
+  } while (nextGrowthWord(a, k));
 }
 
 const PARAMS: readonly ParamSpec[] = [
@@ -120,13 +132,6 @@ const PARAMS: readonly ParamSpec[] = [
 function validate(params: Params): void {
   validateBySpec('ordered-set-partitions', PARAMS, params);
   checkAtMost('ordered-set-partitions', 'k', intParam(params, 'k'), intParam(params, 'n'), 'n');
-}
-
-/** Blocks joined by |, elements by nothing when n < 10 (as 13|2|45) and by commas otherwise. */
-export function renderBlocks(blocks: readonly (readonly number[])[]): string {
-  if (blocks.length === 0) return '(empty)';
-  const sep = blocks.some((b) => b.some((x) => x >= 10)) ? ',' : '';
-  return blocks.map((b) => b.join(sep)).join('|');
 }
 
 export const orderedSetPartitions: Family<OrderedSetPartition> = {

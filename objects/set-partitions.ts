@@ -3,7 +3,7 @@
  * (a[i] = block of i+1, blocks numbered by their minima) in lexicographic order.
  */
 import type { Family, ParamSpec, Params } from '../src/enumerate/plugin.js';
-import { renderBlocks } from './ordered-set-partitions.js';
+import { firstGrowthWord, growthWordToBlocks, nextGrowthWord, renderBlocks } from './support/growth-words.js';
 import { bell, stirling2 } from './support/numbers.js';
 import { checkAtMost, emptyFamilyError, intParam, optIntParam, validateBySpec } from './support/params.js';
 import { randomSetPartition } from './support/random-set-partition.js';
@@ -19,42 +19,6 @@ function validate(params: Params): void {
   checkAtMost('set-partitions', 'k', optIntParam(params, 'k'), intParam(params, 'n'), 'n');
 }
 
-/** Smallest completion of a[from..] given b blocks used so far (opening blocks only when k forces it). */
-function complete(a: number[], from: number, b: number, k: number | undefined): void {
-  for (let j = from; j < a.length; j++) {
-    if (k !== undefined && k - b >= a.length - j) a[j] = b++;
-    else a[j] = 0;
-  }
-}
-
-/** Next restricted growth word (with exactly k blocks when k is given) in place; false after the last. */
-export function nextGrowthWord(a: number[], k?: number): boolean {
-  const n = a.length;
-  const before: number[] = new Array<number>(n); // blocks used by a[0..i−1]
-  let b = 0;
-  for (let i = 0; i < n; i++) {
-    before[i] = b;
-    b = Math.max(b, a[i]! + 1);
-  }
-  for (let i = n - 1; i >= 1; i--) {
-    const v = a[i]! + 1;
-    if (v > before[i]!) continue;
-    const used = Math.max(before[i]!, v + 1);
-    if (k !== undefined && (used > k || k - used > n - 1 - i)) continue;
-    a[i] = v;
-    complete(a, i + 1, used, k);
-    return true;
-  }
-  return false;
-}
-
-/** The blocks of a restricted growth word. */
-export function growthWordToBlocks(a: readonly number[]): number[][] {
-  const blocks: number[][] = [];
-  a.forEach((v, i) => (blocks[v] ??= []).push(i + 1));
-  return blocks;
-}
-
 export const setPartitions: Family<SetPartition> = {
   id: 'set-partitions',
   description: 'set partitions of [n] (blocks sorted by their minima), all or with exactly k blocks',
@@ -66,8 +30,7 @@ export const setPartitions: Family<SetPartition> = {
     const n = intParam(params, 'n');
     const k = optIntParam(params, 'k');
     if (k !== undefined && stirling2(n, k) === 0n) return;
-    const a = new Array<number>(n).fill(0);
-    if (n > 0) complete(a, 1, 1, k);
+    const a = firstGrowthWord(n, k);
     do yield growthWordToBlocks(a);
     while (nextGrowthWord(a, k));
   },
