@@ -48,6 +48,9 @@ function factorPoly(key: string): Poly {
   return hit;
 }
 
+/** Called after each step of a long sum with (steps done, steps in all). */
+export type StepReporter = (done: number, total: number) => void;
+
 export interface BinomialDenominator {
   /** pairs [a, b] meaning q^a − t^b */
   readonly factors: readonly (readonly [number, number])[];
@@ -68,7 +71,10 @@ function multiset(d: BinomialDenominator): Map<string, number> {
 export function sumOverCommonDenominator(
   terms: readonly { readonly numerator: Poly; readonly vector: readonly Poly[]; readonly den: BinomialDenominator }[],
   length: number,
+  onStep?: StepReporter,
 ): Poly[] {
+  const steps = terms.length + length;
+  let done = 0;
   const sets = terms.map((t) => multiset(t.den));
   // cancel factors that divide the numerator already (keeps the common denominator small)
   const nums = terms.map((t, i) => {
@@ -103,7 +109,9 @@ export function sumOverCommonDenominator(
     t.vector.forEach((v, j) => {
       if (!v.isZero()) acc[j] = acc[j]!.add(cof.mul(v));
     });
+    onStep?.(++done, steps);
   });
+  done = terms.length;
   // divide by the smallest factors first (cheaper quotients later)
   const order = [...common.entries()].sort((x, y) => factorPoly(x[0]).termCount - factorPoly(y[0]).termCount);
   return acc.map((p) => {
@@ -116,6 +124,7 @@ export function sumOverCommonDenominator(
         r = qd;
       }
     }
+    onStep?.(++done, steps);
     return fromDense(r);
   });
 }

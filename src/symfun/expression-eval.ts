@@ -7,16 +7,18 @@ import { Poly } from '../core/poly.js';
 import { PolyQ } from '../core/polyq.js';
 import { unknownNameMessage } from '../core/suggest.js';
 import type { Arg, Node } from './expression-parser.js';
-import { modifiedHallLittlewood } from './hall-littlewood.js';
-import { modifiedMacdonald } from './macdonald.js';
+import { HALL_LITTLEWOOD_MAX_N, modifiedHallLittlewood } from './hall-littlewood.js';
+import { MACDONALD_MAX_N, modifiedMacdonald } from './macdonald.js';
 import { delta, deltaPrime, deltaPrimeOfEn, nabla } from './operators.js';
 import { plethysmTimes } from './plethysm.js';
 import { SymFun } from './symfun.js';
 import type { Basis } from './transitions.js';
 
 export interface EvalOptions {
-  /** Largest degree for H̃_μ and the operators (their cost grows like n!). */
+  /** Largest degree for the operators ∇, Δ, Δ′ (their cost grows faster than n!). */
   readonly maxDegree: number;
+  /** Told about the steps of long work: a label, steps done, steps in all. */
+  readonly onProgress?: (label: string, done: number, total: number) => void;
 }
 
 export interface FunctionDoc {
@@ -116,6 +118,11 @@ function checkDegree(f: SymFun, what: string, col: number, opts: EvalOptions): v
   }
 }
 
+function reporter(label: string, opts: EvalOptions): ((done: number, total: number) => void) | undefined {
+  const sink = opts.onProgress;
+  return sink ? (done, total) => sink(label, done, total) : undefined;
+}
+
 function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions): SymFun {
   const ev = (n: Node): SymFun => evaluateNode(n, opts);
   const name = node.name;
@@ -134,16 +141,15 @@ function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions):
       const parts = partsOf(node);
       if (parts.some((x, i) => x === 0 || (i > 0 && x > parts[i - 1]!))) fail(node.col, `${name}(…) needs a partition: positive, weakly decreasing parts`);
       const n = parts.reduce((a, b) => a + b, 0);
-      if (name === 'H' && n > opts.maxDegree) {
-        throw new LimitError(`column ${node.col}: H(…) of size ${n} sums over ${n}! fillings; the limit is ${opts.maxDegree} (raise it with --max-degree)`, 'max-degree');
-      }
+      const max = name === 'H' ? MACDONALD_MAX_N : HALL_LITTLEWOOD_MAX_N;
+      if (n > max) throw new LimitError(`column ${node.col}: ${name}(…) of size ${n} is above the fixed limit ${max} (its cost grows like n!)`);
       return name === 'H' ? modifiedMacdonald(parts) : modifiedHallLittlewood(parts);
     }
     case 'nabla': {
       const [a] = exprArgs(node, 1, 'nabla(F)');
       const f = ev(a!);
       checkDegree(f, 'nabla', node.col, opts);
-      return nabla(f);
+      return nabla(f, reporter('nabla', opts));
     }
     case 'delta':
     case 'deltaprime': {
@@ -151,15 +157,16 @@ function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions):
       const g = ev(a!);
       const f = ev(b!);
       checkDegree(f, name, node.col, opts);
-      if (name === 'delta') return delta(g, f);
+      const onStep = reporter(name, opts);
+      if (name === 'delta') return delta(g, f, onStep);
       // e_n has a closed expansion in the H̃ basis: use it when F is a multiple of e_n
       const d = f.degrees();
       if (d.length === 1 && d[0]! > 0) {
         const en = SymFun.basisElement('e', [d[0]!]);
         const c = f.coeff(new Array(d[0]!).fill(1));
-        if (!c.isZero() && f.equals(en.scale(c))) return deltaPrimeOfEn(g, d[0]!).scale(c);
+        if (!c.isZero() && f.equals(en.scale(c))) return deltaPrimeOfEn(g, d[0]!, onStep).scale(c);
       }
-      return deltaPrime(g, f);
+      return deltaPrime(g, f, onStep);
     }
     case 'omega': {
       const [a] = exprArgs(node, 1, 'omega(F)');

@@ -7,7 +7,7 @@ import { evaluateNode, type EvalOptions } from './expression-eval.js';
 import { parseExpression } from './expression-parser.js';
 import type { SymFun } from './symfun.js';
 
-export const DEFAULT_MAX_DEGREE = 9;
+export const DEFAULT_MAX_DEGREE = 8;
 
 export interface SymResult {
   readonly expression: string;
@@ -20,7 +20,7 @@ export interface SymResult {
 export function evaluateExpression(text: string, options: Partial<EvalOptions> = {}): SymResult {
   const t0 = Date.now();
   const node = parseExpression(text);
-  const value = evaluateNode(node, { maxDegree: options.maxDegree ?? DEFAULT_MAX_DEGREE });
+  const value = evaluateNode(node, { ...options, maxDegree: options.maxDegree ?? DEFAULT_MAX_DEGREE });
   const d = value.degrees();
   return {
     expression: text,

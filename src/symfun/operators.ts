@@ -11,7 +11,7 @@ import { Poly } from '../core/poly.js';
 import { PolyQ } from '../core/polyq.js';
 import { lcm } from './lcm.js';
 import { bigB, bigM, bigPi, bigT, wFactors } from './cell-data.js';
-import { sumOverCommonDenominator } from './common-denominator.js';
+import { sumOverCommonDenominator, type StepReporter } from './common-denominator.js';
 import { modifiedMacdonald, modifiedMacdonaldSchur } from './macdonald.js';
 import { evaluateAtAlphabet } from './plethysm.js';
 import { SymFun } from './symfun.js';
@@ -42,7 +42,7 @@ export function enNumerators(n: number): PolyQ[] {
 }
 
 /** Σ_μ eig(μ)·num_μ / w_μ · H̃_μ for μ ⊢ n, exactly. */
-export function sumInMacdonaldBasis(n: number, nums: readonly PolyQ[], eig: (mu: Partition) => PolyQ): SymFun {
+export function sumInMacdonaldBasis(n: number, nums: readonly PolyQ[], eig: (mu: Partition) => PolyQ, onStep?: StepReporter): SymFun {
   const ps = partitionList(n);
   if (n === 0) return SymFun.scalar(nums[0]!.mul(eig([])));
   const weighted = ps.map((mu, i) => nums[i]!.mul(eig(mu)));
@@ -52,16 +52,16 @@ export function sumInMacdonaldBasis(n: number, nums: readonly PolyQ[], eig: (mu:
     vector: modifiedMacdonaldSchur(mu),
     den: wFactors(mu),
   }));
-  const coeffs = sumOverCommonDenominator(terms, ps.length);
+  const coeffs = sumOverCommonDenominator(terms, ps.length, onStep);
   return SymFun.fromBasis('s', ps.map((l, j) => [l, PolyQ.of(coeffs[j]!, den)] as const));
 }
 
 /** Apply the operator with eigenvalue eig(μ) on H̃_μ to any symmetric function. */
-export function applyDiagonal(f: SymFun, eig: (mu: Partition) => PolyQ): SymFun {
+export function applyDiagonal(f: SymFun, eig: (mu: Partition) => PolyQ, onStep?: StepReporter): SymFun {
   let out = SymFun.zero;
   for (const n of f.degrees()) {
     const part = f.homogeneousPart(n);
-    out = out.add(sumInMacdonaldBasis(n, macdonaldNumerators(part, n), eig));
+    out = out.add(sumInMacdonaldBasis(n, macdonaldNumerators(part, n), eig, onStep));
   }
   return out;
 }
@@ -76,17 +76,17 @@ export function deltaPrimeEigen(g: SymFun): (mu: Partition) => PolyQ {
   return (mu) => evaluateAtAlphabet(g, bigB(mu).sub(Poly.one));
 }
 
-export function nabla(f: SymFun): SymFun {
-  return applyDiagonal(f, nablaEigen);
+export function nabla(f: SymFun, onStep?: StepReporter): SymFun {
+  return applyDiagonal(f, nablaEigen, onStep);
 }
-export function delta(g: SymFun, f: SymFun): SymFun {
-  return applyDiagonal(f, deltaEigen(g));
+export function delta(g: SymFun, f: SymFun, onStep?: StepReporter): SymFun {
+  return applyDiagonal(f, deltaEigen(g), onStep);
 }
-export function deltaPrime(g: SymFun, f: SymFun): SymFun {
-  return applyDiagonal(f, deltaPrimeEigen(g));
+export function deltaPrime(g: SymFun, f: SymFun, onStep?: StepReporter): SymFun {
+  return applyDiagonal(f, deltaPrimeEigen(g), onStep);
 }
 
 /** Δ'_g e_n through the closed expansion of e_n (no change of basis needed). */
-export function deltaPrimeOfEn(g: SymFun, n: number): SymFun {
-  return sumInMacdonaldBasis(n, enNumerators(n), deltaPrimeEigen(g));
+export function deltaPrimeOfEn(g: SymFun, n: number, onStep?: StepReporter): SymFun {
+  return sumInMacdonaldBasis(n, enNumerators(n), deltaPrimeEigen(g), onStep);
 }

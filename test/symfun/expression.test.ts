@@ -65,6 +65,7 @@ describe('expression language', () => {
   });
   it('refuses operators past the degree limit with a LimitError naming --max-degree', () => {
     expect(() => evaluateExpression('nabla(e(5))', { maxDegree: 4 })).toThrow(LimitError);
-    expect(() => evaluateExpression('H(3,2)', { maxDegree: 4 })).toThrow(/--max-degree/);
+    expect(() => evaluateExpression('deltaprime(e(1), e(5))', { maxDegree: 4 })).toThrow(/--max-degree/);
+    expect(() => evaluateExpression('H(11)')).toThrow(LimitError);
   });
 });

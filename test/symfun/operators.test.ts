@@ -33,6 +33,21 @@ describe('e_n in the modified Macdonald basis', () => {
   });
 });
 
+describe('expansion of any F in the H̃ basis', () => {
+  it('Σ_μ ⟨F, H̃_μ⟩_* / w_μ · H̃_μ sums back to F for random F of degree ≤ 5 (checks the *-orthogonality route)', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 5 }), fc.nat(), fc.nat(), fc.integer({ min: -4, max: 4 }), (n, i, j, c) => {
+        const ps = partitionList(n);
+        const f = s(...ps[i % ps.length]!)
+          .scale(t.add(Poly.constant(c)))
+          .add(SymFun.basisElement('p', ps[j % ps.length]!));
+        expect(sumInMacdonaldBasis(n, macdonaldNumerators(f, n), () => PolyQ.one).equals(f)).toBe(true);
+      }),
+      { numRuns: 15 },
+    );
+  });
+});
+
 describe('nabla and Delta operators', () => {
   it('∇e_2 = s_2 + (q+t) s_11 and C_3 = q³ + q²t + qt² + t³ + qt (MATH.md §3)', () => {
     expect(nabla(e(2)).equals(s(2).add(s(1, 1).scale(q.add(t))))).toBe(true);

@@ -22,7 +22,7 @@ export const symCommand: CommandSpec = {
     {
       name: 'max-degree',
       type: 'int',
-      description: `largest degree for H(…) and the operators (default ${DEFAULT_MAX_DEGREE}; cost grows like n!)`,
+      description: `largest degree for nabla, delta, deltaprime (default ${DEFAULT_MAX_DEGREE}, about 5 s a call there; cost grows faster than n!)`,
       placeholder: 'N',
       min: 0,
       max: MACDONALD_MAX_N,
@@ -53,7 +53,18 @@ export const symCommand: CommandSpec = {
       throw new InputError(`--basis must be one of ${BASES.join(', ')} (got "${basisText}")`, 'basis');
     }
     const basis = basisText as Basis;
-    const result = evaluateExpression(text, { maxDegree: intOpt(args, 'max-degree') ?? DEFAULT_MAX_DEGREE });
+    let current = '';
+    const result = evaluateExpression(text, {
+      maxDegree: intOpt(args, 'max-degree') ?? DEFAULT_MAX_DEGREE,
+      onProgress: (label, done, total) => {
+        if (label !== current || done === 1) {
+          io.progress.start(`sym: ${label}`, total);
+          current = label;
+        }
+        io.progress.update(done);
+        if (done === total) io.progress.finish();
+      },
+    });
     if (flagOpt(args, 'json')) {
       const { denominator, terms } = integralCoefficients(result.value, basis);
       io.out(
