@@ -16,6 +16,20 @@ describe('characters of S_n', () => {
       [-1n, 1n, 1n, -1n, 1n],
     ]);
   });
+  it('S_5 table (same source — from memory; the independent checks below also cover it)', () => {
+    // classes (5), (4,1), (3,2), (3,1,1), (2,2,1), (2,1,1,1), (1^5); rows in the same order
+    expect(characterTable(5)).toEqual(
+      [
+        [1, 1, 1, 1, 1, 1, 1],
+        [-1, 0, -1, 1, 0, 2, 4],
+        [0, -1, 1, -1, 1, 1, 5],
+        [1, 0, 0, 0, -2, 0, 6],
+        [0, 1, -1, -1, 1, -1, 5],
+        [-1, 0, 1, 1, 0, -2, 4],
+        [1, -1, -1, 1, 1, -1, 1],
+      ].map((r) => r.map(BigInt)),
+    );
+  });
   it('independent checks: χ^λ(1^n) = f^λ (hook formula) and χ^λ' + "'" + ' = sign · χ^λ for n ≤ 8', () => {
     for (let n = 1; n <= 8; n++) {
       const ps = partitionList(n);
