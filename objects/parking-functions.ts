@@ -2,11 +2,13 @@
  * Parking functions of size n as labelled Dyck paths: for each Dyck path (lexicographic),
  * every way to put cars 1..n on its north steps increasing up each column. Car c lies in
  * column j exactly when c prefers spot j (0-based): the classical bijection.
+ * Fast path: `visit` reuses the path and label buffers; shards take Dyck paths round-robin.
  */
 import type { Family, ParamSpec, Params } from '../src/enumerate/plugin.js';
 import { nextPermutationFrom } from './permutations.js';
 import { drawDyckPath, firstDyckPath, nextDyckPath } from './support/dyck.js';
 import { intParam, validateBySpec } from './support/params.js';
+import { shardParts } from './support/shards.js';
 import { labelRuns, northRuns, parkingReadingWord, randomParkingFunction } from './support/parking.js';
 import type { DyckPath, LabelledDyckPath } from './types.js';
 
@@ -46,6 +48,20 @@ export const parkingFunctions: Family<LabelledDyckPath> = {
     do {
       const frozen = path.slice();
       for (const labels of labellings(frozen)) yield { path: frozen, labels: labels.slice() };
+    } while (nextDyckPath(path));
+  },
+  visit(params, f, shard) {
+    validate(params);
+    const [index, count] = shardParts(shard);
+    const path = firstDyckPath(intParam(params, 'n'));
+    let j = 0;
+    do {
+      if (j++ % count !== index) continue;
+      const obj = { path, labels: [] as number[] };
+      for (const labels of labellings(path)) {
+        obj.labels = labels;
+        f(obj);
+      }
     } while (nextDyckPath(path));
   },
   count(params) {

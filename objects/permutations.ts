@@ -4,54 +4,12 @@
  * shards split by the first two letters, dealt round-robin (n(n−1) nearly equal parts).
  */
 import { factorial } from '../src/core/integers.js';
-import type { Family, ParamSpec, Params, Shard } from '../src/enumerate/plugin.js';
+import type { Family, ParamSpec, Params } from '../src/enumerate/plugin.js';
+import { visitRearrangements } from './support/multiset-visit.js';
+import { nextPermutationFrom } from './support/next-permutation.js';
 import { intParam, validateBySpec } from './support/params.js';
 import { shuffleInPlace } from './support/random.js';
-import { shardParts } from './support/shards.js';
 import type { Permutation } from './types.js';
-
-/**
- * Next permutation (lexicographic) of a[start..] in place, leaving a[0..start−1] alone;
- * false (and a unchanged) after the last one. Works for multisets too (repeated letters).
- */
-export function nextPermutationFrom(a: number[], start = 0): boolean {
-  let i = a.length - 2;
-  while (i >= start && a[i]! >= a[i + 1]!) i--;
-  if (i < start) return false;
-  let j = a.length - 1;
-  while (a[j]! <= a[i]!) j--;
-  let t = a[i]!;
-  a[i] = a[j]!;
-  a[j] = t;
-  for (let l = i + 1, r = a.length - 1; l < r; l++, r--) {
-    t = a[l]!;
-    a[l] = a[r]!;
-    a[r] = t;
-  }
-  return true;
-}
-
-function visitPermutations(n: number, f: (w: Permutation) => void, shard?: Shard): void {
-  const [index, count] = shardParts(shard);
-  const a = Array.from({ length: n }, (_, i) => i + 1);
-  if (n < 2 || count === 1) {
-    if (index === 0) do f(a);
-    while (nextPermutationFrom(a, 0));
-    return;
-  }
-  let p = 0;
-  for (let x = 1; x <= n; x++) {
-    for (let y = 1; y <= n; y++) {
-      if (y === x || p++ % count !== index) continue;
-      a[0] = x;
-      a[1] = y;
-      let m = 2;
-      for (let v = 1; v <= n; v++) if (v !== x && v !== y) a[m++] = v;
-      do f(a);
-      while (nextPermutationFrom(a, 2));
-    }
-  }
-}
 
 const PARAMS: readonly ParamSpec[] = [{ name: 'n', kind: 'int', description: 'size n', min: 0, max: 20 }];
 const validate = (params: Params): void => validateBySpec('permutations', PARAMS, params);
@@ -68,9 +26,9 @@ export const permutations: Family<Permutation> = {
     do yield a.slice();
     while (nextPermutationFrom(a, 0));
   },
-  visit(params: Params, f: (w: Permutation) => void, shard?: Shard) {
+  visit(params, f, shard) {
     validate(params);
-    visitPermutations(intParam(params, 'n'), f, shard);
+    visitRearrangements(Array.from({ length: intParam(params, 'n') }, (_, i) => i + 1), f, shard);
   },
   count(params) {
     validate(params);
@@ -82,3 +40,6 @@ export const permutations: Family<Permutation> = {
   readingWord: (w) => w,
   testParams: [{ n: 0 }, { n: 1 }, { n: 3 }, { n: 5 }],
 };
+
+/** Re-exported: the in-place lexicographic step used by several families. */
+export { nextPermutationFrom };

@@ -4,6 +4,7 @@
  */
 import type { Family, ParamSpec, Params } from '../src/enumerate/plugin.js';
 import { nextPermutationFrom } from './permutations.js';
+import { visitRearrangements } from './support/multiset-visit.js';
 import { multinomial } from './support/numbers.js';
 import { listParam, validateBySpec } from './support/params.js';
 import { shuffleInPlace } from './support/random.js';
@@ -37,10 +38,7 @@ export const words: Family<Word> = {
   },
   visit(params, f, shard) {
     validate(params);
-    if (shard && shard.index !== 0) return; // not split: every object goes to shard 0
-    const w = sortedWord(listParam(params, 'content'));
-    do f(w);
-    while (nextPermutationFrom(w, 0));
+    visitRearrangements(sortedWord(listParam(params, 'content')), f, shard);
   },
   count(params) {
     validate(params);
