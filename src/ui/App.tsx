@@ -107,7 +107,7 @@ export function App(props: AppProps) {
   // fills the terminal (a full frame makes ink clear the screen on every redraw).
   const bodyHeight = Math.max(6, rows - 4);
   const width = Math.max(40, columns);
-  const common = { width, height: bodyHeight, session, addItem: add, setCurrent, setEditing, notify, go, cwd: props.cwd ?? process.cwd() };
+  const common = { width, height: bodyHeight, session, addItem: add, setCurrent, setEditing, notify, go, cwd: props.cwd ?? process.cwd(), env };
   return (
     <ThemeContext.Provider value={theme}>
       <Box flexDirection="column" width={width}>

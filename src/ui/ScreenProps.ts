@@ -18,4 +18,6 @@ export interface ScreenProps {
   go(screen: ScreenId): void;
   /** Directory where exports are written by default. */
   readonly cwd: string;
+  /** Environment (catalogue path, NO_COLOR). */
+  readonly env: Readonly<Record<string, string | undefined>>;
 }

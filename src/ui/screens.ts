@@ -23,6 +23,8 @@ export const SCREENS: readonly ScreenInfo[] = [
     title: 'Demo session: a seed of our own, its module, a search, an export',
     keys: [
       { keys: 'Enter', action: 'run the next step' },
+      { keys: 'x', action: 'cancel' },
+      { keys: '←/→', action: 'show another step' },
       { keys: 'r', action: 'start over' },
     ],
   },
@@ -93,6 +95,7 @@ export const SCREENS: readonly ScreenInfo[] = [
       { keys: 'Enter', action: 'search' },
       { keys: 'x', action: 'cancel' },
       { keys: '↑/↓', action: 'browse candidates' },
+      { keys: 'b', action: 'build the catalogue' },
     ],
   },
   {

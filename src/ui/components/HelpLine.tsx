@@ -5,15 +5,17 @@ import { useTheme } from '../ThemeContext.js';
 
 export function HelpLine({ keys, width }: { readonly keys: readonly KeyHelp[]; readonly width: number }) {
   const theme = useTheme();
-  const all: KeyHelp[] = [...keys, { keys: 'Tab', action: 'screen' }, { keys: '?', action: 'help' }, { keys: 'q', action: 'quit' }];
-  const parts: KeyHelp[] = [];
-  let used = 0;
-  for (const k of all) {
-    const len = k.keys.length + 1 + k.action.length + 2;
-    if (used + len > width) break;
-    parts.push(k);
-    used += len;
+  // The global keys always show; the screen's own keys fill the room before them.
+  const global: KeyHelp[] = [{ keys: 'Tab', action: 'screen' }, { keys: '?', action: 'help' }, { keys: 'q', action: 'quit' }];
+  const len = (k: KeyHelp) => k.keys.length + 1 + k.action.length + 2;
+  let used = global.reduce((s, k) => s + len(k), 0);
+  const own: KeyHelp[] = [];
+  for (const k of keys) {
+    if (used + len(k) > width) break;
+    own.push(k);
+    used += len(k);
   }
+  const parts = [...own, ...global];
   return (
     <Text wrap="truncate">
       {parts.map((k, i) => (

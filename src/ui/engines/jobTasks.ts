@@ -2,10 +2,79 @@
  * The engine tasks the app runs in a worker thread, by name. Each takes JSON-ready input,
  * reports progress, and returns JSON-ready output.
  */
+import { computeModule } from '../../modules/compute-module.js';
+import { resultToJson } from '../../modules/format-result.js';
+import { recognise } from '../../match/recognise.js';
+import { searchCatalogue } from '../../match/search.js';
+import { searchDocument } from '../../match/searchDocument.js';
+import { rangeText } from '../../series/target.js';
+import { targetFromJson } from '../../series/targetFile.js';
+import { buildCatalogue } from '../../store/buildCatalogue.js';
+import { Catalogue } from '../../store/catalogue.js';
+import { provenance } from '../../store/provenance.js';
+import type { ModuleRequest } from './moduleRequest.js';
+
 export type ProgressFn = (label: string, done: number, total?: number) => void;
 export type JobTask = (input: unknown, progress: ProgressFn) => unknown | Promise<unknown>;
 
 export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
+  // The same engine entry `gradus module` calls; the result is plain data.
+  module: (input, progress) => {
+    const req = input as ModuleRequest;
+    const result = computeModule(req.spec, {
+      frobenius: true,
+      method: req.method,
+      ...(req.prime !== undefined ? { prime: req.prime } : {}),
+      ...(req.maxWork !== undefined ? { maxWork: req.maxWork } : {}),
+      onEstimate: (units, seconds) => progress(`estimated ${units.toExponential(1)} units, ~${Math.ceil(seconds)}s per prime`, 0),
+      onProgress: (done, total, label) => progress(label || 'closure', done, total || undefined),
+    });
+    return { result, json: resultToJson(result) };
+  },
+  // The same calls `gradus search` makes, and the search is kept in the catalogue.
+  search: (input, progress) => {
+    const { target: tj, catalogue } = input as { target: unknown; catalogue: string };
+    const target = targetFromJson(tj);
+    progress('searching the catalogue', 0);
+    const cat = Catalogue.open(catalogue, { readonly: true });
+    try {
+      const t0 = Date.now();
+      const outcome = searchCatalogue(cat, target);
+      const rec = recognise(target);
+      const ms = Date.now() - t0;
+      const prov = provenance({ target: target.label, catalogue }, 'exact look-up of series hashes in the catalogue, then exact comparison on every entry', [], ms / 1000);
+      const doc = searchDocument(target, rangeText(target.entries), rec, outcome, prov);
+      const id = cat.saveSearch(target.label, doc, prov);
+      return { doc, id, ms };
+    } finally {
+      cat.close();
+    }
+  },
+  // The same engine call as `gradus catalogue build`.
+  'catalogue-build': (input, progress) => {
+    const { catalogue, nMax } = input as { catalogue: string; nMax: number };
+    const cat = Catalogue.open(catalogue);
+    try {
+      let label = 'catalogue build';
+      let total: number | undefined;
+      const r = buildCatalogue(cat, {
+        nMax,
+        maxObjects: 50_000_000n,
+        progress: {
+          start: (l, t) => {
+            label = l;
+            total = t;
+            progress(label, 0, total);
+          },
+          update: (done) => progress(label, done, total),
+          finish: () => {},
+        },
+      });
+      return { text: `catalogue ${catalogue}: ${r.units} units built (${r.skippedDone} already there), ${r.rows} distributions in ${r.seconds.toFixed(1)}s` };
+    } finally {
+      cat.close();
+    }
+  },
   // Exercises the worker plumbing in tests: counts to input.n, reporting progress.
   count: async (input, progress) => {
     const { n, delayMs } = input as { n: number; delayMs: number };

@@ -1,22 +1,26 @@
 /**
- * The module engine as the Modules screen and the demo use it. Until src/modules offers
- * its entry point this reports itself unavailable (no made-up data).
+ * The module engine as the Modules screen and the demo use it: the request is checked on
+ * this side (one clear line at once), then computeModule runs in a worker with progress
+ * and can be cancelled.
  */
-import { InputError } from '../../core/errors.js';
+import type { ModuleResult } from '../../modules/module-result.js';
+import { parseModuleRequest } from './moduleRequest.js';
 import type { ModuleOutcome } from './moduleTypes.js';
+import { moduleOutcome } from './moduleView.js';
 import { startJob, type Job, type JobProgress } from './workerJob.js';
 
-export const MODULE_ENGINE_AVAILABLE = false;
+export const MODULE_ENGINE_AVAILABLE = true;
 
-export const DEFAULT_MODULE_REQUEST = '--seed monomial --x 2,1,0 --theta 3 --antisymmetrize --n 3 --ops x,theta';
+/** Our own seed for the demo: ε(x1^2 x2 θ3), the staircase of n = 3 with θ on its last variable. */
+export const DEFAULT_MODULE_REQUEST = '--seed monomial --n 3 --x-exponents 2,1,0 --theta 3 --ops x,theta';
 
 /** Checks the request on this side (fast, one clear line) before a worker starts. */
 export function checkModuleRequest(line: string): void {
-  if (line.trim() === '') throw new InputError('the module request is empty: give at least --seed and --n');
-  if (!MODULE_ENGINE_AVAILABLE) throw new InputError('the module engine is not available in this build');
+  parseModuleRequest(line);
 }
 
 export function startModule(line: string, onProgress: (p: JobProgress) => void): Job<ModuleOutcome> {
-  checkModuleRequest(line);
-  return startJob<ModuleOutcome>('module', { line }, onProgress);
+  const req = parseModuleRequest(line);
+  const job = startJob<{ result: ModuleResult; json: unknown }>('module', req, onProgress);
+  return { result: job.result.then((r) => moduleOutcome(r.result, r.json)), cancel: job.cancel };
 }

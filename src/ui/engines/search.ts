@@ -1,16 +1,29 @@
 /**
- * The search engine as the Search screen and the demo use it; runs in a worker. Until
- * src/match offers its entry point this reports itself unavailable.
+ * The search engine as the Search screen and the demo use it: the same calls `gradus
+ * search` makes (catalogue look-up, formula recognition, saved-search document), run in a
+ * worker. Building the catalogue, when there is none, is a worker job too.
  */
-import { InputError } from '../../core/errors.js';
+import type { SearchDocument } from '../../match/searchDocument.js';
 import type { Target } from '../../series/target.js';
 import { targetToJson } from '../../series/targetFile.js';
 import type { SearchOutcome } from './searchTypes.js';
+import { searchOutcome } from './searchView.js';
 import { startJob, type Job, type JobProgress } from './workerJob.js';
 
-export const SEARCH_ENGINE_AVAILABLE = false;
+export const SEARCH_ENGINE_AVAILABLE = true;
 
-export function startSearch(target: Target, onProgress: (p: JobProgress) => void): Job<SearchOutcome> {
-  if (!SEARCH_ENGINE_AVAILABLE) throw new InputError('the search engine is not available in this build');
-  return startJob<SearchOutcome>('search', { target: targetToJson(target) }, onProgress);
+/** The size the app builds a missing catalogue to (seconds of work on two cores). */
+export const APP_CATALOGUE_N_MAX = 5;
+
+export function startSearch(target: Target, cataloguePath: string, onProgress: (p: JobProgress) => void): Job<SearchOutcome> {
+  const job = startJob<{ doc: SearchDocument; id: number; ms: number }>('search', { target: targetToJson(target), catalogue: cataloguePath }, onProgress);
+  return { result: job.result.then((r) => searchOutcome(r.doc, r.id, r.ms)), cancel: job.cancel };
+}
+
+export interface BuildSummary {
+  readonly text: string;
+}
+
+export function startCatalogueBuild(cataloguePath: string, nMax: number, onProgress: (p: JobProgress) => void): Job<BuildSummary> {
+  return startJob<BuildSummary>('catalogue-build', { catalogue: cataloguePath, nMax }, onProgress);
 }

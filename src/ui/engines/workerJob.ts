@@ -41,7 +41,28 @@ export class JobError extends Error {
   }
 }
 
+let inProcess = false;
+
+/**
+ * Run tasks on this thread instead (the text demo: nothing to keep responsive, and no
+ * worker start-up to pay). Such a job cannot be cancelled.
+ */
+export function runJobsInProcess(on: boolean): void {
+  inProcess = on;
+}
+
+function startLocal<T>(task: string, input: unknown, onProgress: (p: JobProgress) => void): Job<T> {
+  const result = import('./jobTasks.js').then(async ({ JOB_TASKS }) => {
+    const run = JOB_TASKS[task];
+    if (!run) throw new Error(`no such task ${task}`);
+    const value = await run(input, (label, done, total) => onProgress({ label, done, total }));
+    return value as T;
+  });
+  return { result, cancel() {} };
+}
+
 export function startJob<T>(task: string, input: unknown, onProgress: (p: JobProgress) => void): Job<T> {
+  if (inProcess) return startLocal<T>(task, input, onProgress);
   const worker = new Worker(new URL('./jobWorker.mjs', import.meta.url), {
     workerData: { task, input },
     stdout: true,

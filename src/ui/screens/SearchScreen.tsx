@@ -8,7 +8,8 @@ import { useState } from 'react';
 import { parseCoeffs } from '../../series/parseCoeffs.js';
 import { LineInput } from '../components/LineInput.js';
 import { ProgressBar } from '../components/ProgressBar.js';
-import { SEARCH_ENGINE_AVAILABLE, startSearch } from '../engines/search.js';
+import { cataloguePath } from '../../store/cataloguePath.js';
+import { APP_CATALOGUE_N_MAX, SEARCH_ENGINE_AVAILABLE, startCatalogueBuild, startSearch, type BuildSummary } from '../engines/search.js';
 import type { SearchOutcome } from '../engines/searchTypes.js';
 import { targetLines } from '../engines/seriesText.js';
 import { errorText } from '../errorText.js';
@@ -24,8 +25,10 @@ export function SearchScreen(props: ScreenProps) {
   const [field, setField] = useEditField<'coeffs'>(props.active, props.setEditing);
   const [draft, setDraft] = useState('n=3:1,2,2,1');
   const job = useJob<SearchOutcome>();
+  const build = useJob<BuildSummary>();
+  const catPath = cataloguePath(undefined, props.env, props.cwd);
   const [sel, setSel] = useState(0);
-  const now = useTicker(job.state.status === 'running');
+  const now = useTicker(job.state.status === 'running' || build.state.status === 'running');
   const withTarget = props.session.items.filter((x) => x.target);
   const item = currentItem(props.session);
   const target = item?.target;
@@ -35,7 +38,7 @@ export function SearchScreen(props: ScreenProps) {
     if (!target) return props.notify('no series to search: compute a module, evaluate an expression, or type coefficients (e)', 'error');
     setSel(0);
     job.run(
-      (onProgress) => startSearch(target, onProgress),
+      (onProgress) => startSearch(target, catPath, onProgress),
       (r) => {
         props.addItem({ title: `search: ${item?.title ?? target.label}`, origin: 'search', payload: r });
         props.notify(r.candidates.length ? `${r.candidates.length} candidate(s) in ${(r.elapsedMs / 1000).toFixed(2)}s` : `no match; tried ${r.tried}`);
@@ -47,9 +50,16 @@ export function SearchScreen(props: ScreenProps) {
     (input, key) => {
       if (key.return) return run();
       if (input === 'e') return setField('coeffs');
-      if (input === 'x' && job.state.status === 'running') {
+      if (input === 'x' && (job.state.status === 'running' || build.state.status === 'running')) {
         job.cancel();
-        return props.notify('search cancelled');
+        build.cancel();
+        return props.notify('cancelled');
+      }
+      if (input === 'b') {
+        return build.run(
+          (onProgress) => startCatalogueBuild(catPath, APP_CATALOGUE_N_MAX, onProgress),
+          (r) => props.notify(r.text),
+        );
       }
       if (input === '[' || input === ']') {
         if (withTarget.length === 0) return;
@@ -81,7 +91,7 @@ export function SearchScreen(props: ScreenProps) {
   const cands = outcome?.candidates ?? [];
   const detail = cands[sel];
   const detailLines = detail ? [`verified ${detail.range}${detail.formula ? `   formula ${detail.formula}` : ''}`, ...detail.detail].slice(0, 4) : [];
-  const listH = Math.max(2, props.height - 5 - previewN - (outcome?.recognition.length ?? 0) - detailLines.length);
+  const listH = Math.max(2, props.height - 7 - previewN - (outcome?.recognition.length ?? 0) - detailLines.length);
   const start = Math.max(0, Math.min(sel - listH + 1, cands.length - listH));
   return (
     <Box flexDirection="column">
@@ -100,6 +110,20 @@ export function SearchScreen(props: ScreenProps) {
             </Text>
           ))
         : null}
+      <Text wrap="truncate" {...theme.style('dim')}>
+        catalogue {catPath} (b builds it up to n = {APP_CATALOGUE_N_MAX})
+      </Text>
+      {build.state.status === 'running' ? (
+        <ProgressBar state={{ label: build.state.progress?.label ?? 'catalogue build', done: build.state.progress?.done ?? 0, total: build.state.progress?.total, elapsedMs: now - build.state.startedAt }} width={w} />
+      ) : build.state.status === 'error' ? (
+        <Text wrap="truncate" {...theme.style('error')}>
+          ✗ {build.state.error}
+        </Text>
+      ) : build.state.result ? (
+        <Text wrap="truncate" {...theme.style('ok')}>
+          {build.state.result.text}
+        </Text>
+      ) : null}
       {!SEARCH_ENGINE_AVAILABLE ? (
         <Text wrap="wrap" {...theme.style('warn')}>
           The search engine (src/match) is not available in this build; nothing can be searched here.

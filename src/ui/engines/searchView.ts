@@ -1,0 +1,37 @@
+/** The search engine's saved-search document as the Search screen shows it. */
+import type { SearchDocument } from '../../match/searchDocument.js';
+import type { SearchOutcome } from './searchTypes.js';
+
+export function triedText(d: SearchDocument): string {
+  const t = d.tried;
+  const at = t.anchor ? `n = ${t.anchor.n}${t.anchor.k === undefined ? '' : `, k = ${t.anchor.k}`}` : 'no size in the catalogue';
+  return (
+    `${t.candidates} candidates at ${at} (${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there) ` +
+    `over ${t.families.length} families and ${t.statistics.length} statistics, forms ${t.combines.join('/')}, ` +
+    `variants ${t.variants.join(', ')}; catalogue n ≤ ${t.catalogueMaxN}`
+  );
+}
+
+export function searchOutcome(d: SearchDocument, id: number, elapsedMs: number): SearchOutcome {
+  const r = d.recognition;
+  const recognition: string[] = [];
+  if (r.formula) recognition.push(`formula: ${r.formula} (on ${d.range})`);
+  for (const x of r.recurrences) recognition.push(`recurrence: ${x.text}${x.name ? ` [${x.name}]` : ''}`);
+  recognition.push(`every entry: ${r.palindromic ? 'palindromic' : 'not palindromic'}, ${r.unimodal ? 'unimodal' : 'not unimodal'}`);
+  return {
+    targetLabel: String((d.target as { label?: unknown }).label ?? ''),
+    candidates: d.matches.map((m) => ({
+      title: `${m.statistics.join(' & ')} on ${m.family} (${m.combine}${m.transform ? `, via ${m.transform}` : ''})`,
+      range: m.verified,
+      formula: m.formula,
+      detail: [
+        `parameters ${m.mapping}; variant ${m.variant}`,
+        ...(m.complete ? [] : [`not checked: ${m.unchecked.map((p) => `(${p.n}${p.k === undefined ? '' : `,${p.k}`})`).join(' ')}`]),
+      ],
+    })),
+    tried: triedText(d),
+    recognition,
+    elapsedMs,
+    json: { ...d, id: `search:${id}` },
+  };
+}
