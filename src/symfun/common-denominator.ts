@@ -7,7 +7,7 @@
  */
 import { ArithmeticError } from '../core/errors.js';
 import { Poly } from '../core/poly.js';
-import { divideDense, fromDense, toDense } from './dense-poly.js';
+import { divideDense, fromDense, sumOfProducts, toDense } from './dense-poly.js';
 
 const cyclotomicCache = new Map<number, Poly>();
 
@@ -98,24 +98,22 @@ export function sumOverCommonDenominator(
   });
   const common = new Map<string, number>();
   for (const s of sets) for (const [k, m] of s) common.set(k, Math.max(common.get(k) ?? 0, m));
-  const acc: Poly[] = new Array<Poly>(length).fill(Poly.zero);
-  terms.forEach((t, i) => {
-    if (nums[i]!.isZero()) return;
+  // cofactor_i = numerator_i · (common denominator / den_i)
+  const cofs = terms.map((t, i) => {
+    if (nums[i]!.isZero()) return Poly.zero;
     let cof = Poly.constant(t.den.sign).mul(nums[i]!);
     for (const [k, m] of common) {
       const extra = m - (sets[i]!.get(k) ?? 0);
       if (extra > 0) cof = cof.mul(factorPoly(k).pow(extra));
     }
-    t.vector.forEach((v, j) => {
-      if (!v.isZero()) acc[j] = acc[j]!.add(cof.mul(v));
-    });
     onStep?.(++done, steps);
+    return cof;
   });
   done = terms.length;
   // divide by the smallest factors first (cheaper quotients later)
   const order = [...common.entries()].sort((x, y) => factorPoly(x[0]).termCount - factorPoly(y[0]).termCount);
-  return acc.map((p) => {
-    let r = toDense(p);
+  return Array.from({ length }, (_, j) => {
+    let r = sumOfProducts(terms.map((t, i) => [cofs[i]!, t.vector[j] ?? Poly.zero] as const));
     for (const [k, m] of order) {
       const f = factorPoly(k);
       for (let i = 0; i < m; i++) {

@@ -63,3 +63,53 @@ export function divideDense(a: DensePoly, f: Poly): DensePoly | null {
   for (let k = 0; k < fi * cols; k++) if (r[k] !== 0n) return null;
   return { rows: qRows, cols: qCols, c: quo };
 }
+
+/**
+ * Σ_k a_k · b_k as a dense polynomial, for polynomials a_k, b_k. Accumulates in doubles
+ * when a bound on every partial sum (Σ_k max|a_k| · Σ|b_k|) stays below 2^53, so that
+ * every step is exact, and in BigInt otherwise.
+ */
+export function sumOfProducts(pairs: readonly (readonly [Poly, Poly])[]): DensePoly {
+  let rows = 1;
+  let cols = 1;
+  let bound = 0;
+  const live = pairs.filter(([a, b]) => !a.isZero() && !b.isZero());
+  for (const [a, b] of live) {
+    rows = Math.max(rows, a.degQ() + b.degQ() + 1);
+    cols = Math.max(cols, a.degT() + b.degT() + 1);
+    let maxA = 0;
+    for (const [, , c] of a.terms()) maxA = Math.max(maxA, Math.abs(Number(c)));
+    let l1 = 0;
+    for (const [, , c] of b.terms()) l1 += Math.abs(Number(c));
+    bound += maxA * l1;
+  }
+  const flat = (p: Poly) => {
+    const ts = [...p.terms()];
+    return { off: ts.map(([i, j]) => i * cols + j), c: ts.map(([, , v]) => v) };
+  };
+  if (bound < 2 ** 52) {
+    const acc = new Float64Array(rows * cols);
+    for (const [a, b] of live) {
+      const fa = flat(a);
+      const fb = flat(b);
+      const ca = fa.c.map(Number);
+      for (let y = 0; y < fb.off.length; y++) {
+        const ob = fb.off[y]!;
+        const cb = Number(fb.c[y]!);
+        for (let x = 0; x < fa.off.length; x++) acc[fa.off[x]! + ob]! += ca[x]! * cb;
+      }
+    }
+    return { rows, cols, c: Array.from(acc, (v) => BigInt(v)) };
+  }
+  const acc = new Array<bigint>(rows * cols).fill(0n);
+  for (const [a, b] of live) {
+    const fa = flat(a);
+    const fb = flat(b);
+    for (let y = 0; y < fb.off.length; y++) {
+      const ob = fb.off[y]!;
+      const cb = fb.c[y]!;
+      for (let x = 0; x < fa.off.length; x++) acc[fa.off[x]! + ob]! += fa.c[x]! * cb;
+    }
+  }
+  return { rows, cols, c: acc };
+}
