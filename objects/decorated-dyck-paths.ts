@@ -68,6 +68,27 @@ function weight(path: DyckPath, d: number): bigint {
   return multinomial(northRuns(path)) * binomial(doubleRises(path).length, d);
 }
 
+const weightCache = new Map<string, { paths: (0 | 1)[][]; weights: bigint[] }>();
+
+/** The Dyck paths of size n with their weights for d decorations (cached: C_n ≤ 16796 entries). */
+function weightedPaths(n: number, d: number): { paths: (0 | 1)[][]; weights: bigint[] } {
+  const key = `${n}:${d}`;
+  let hit = weightCache.get(key);
+  if (!hit) {
+    hit = { paths: [], weights: [] };
+    const path = firstDyckPath(n);
+    do {
+      const w = weight(path, d);
+      if (w > 0n) {
+        hit.paths.push(path.slice());
+        hit.weights.push(w);
+      }
+    } while (nextDyckPath(path));
+    weightCache.set(key, hit);
+  }
+  return hit;
+}
+
 export const decoratedDyckPaths: Family<DecoratedLabelledDyckPath> = {
   id: ID,
   description: 'labelled Dyck paths with n − k decorated double rises (rise version of the Delta theorem)',
@@ -86,26 +107,13 @@ export const decoratedDyckPaths: Family<DecoratedLabelledDyckPath> = {
   },
   count(params) {
     const d = decorations(params);
-    const path = firstDyckPath(intParam(params, 'n'));
-    let s = 0n;
-    do s += weight(path, d);
-    while (nextDyckPath(path));
-    return s;
+    return weightedPaths(intParam(params, 'n'), d).weights.reduce((a, b) => a + b, 0n);
   },
   render: (p) => drawDyckPath(p.path, p.labels, new Set(p.decorated)),
   sample(params, random) {
     const d = decorations(params);
     // A path by its weight, then a uniform labelling and decorated set: uniform overall.
-    const paths: (0 | 1)[][] = [];
-    const weights: bigint[] = [];
-    const path = firstDyckPath(intParam(params, 'n'));
-    do {
-      const w = weight(path, d);
-      if (w > 0n) {
-        paths.push(path.slice());
-        weights.push(w);
-      }
-    } while (nextDyckPath(path));
+    const { paths, weights } = weightedPaths(intParam(params, 'n'), d);
     const chosen = paths[weightedIndex(random, weights)]!;
     const runs = northRuns(chosen);
     const runOf = shuffleInPlace(runs.flatMap((len, j) => new Array<number>(len).fill(j)), random);
@@ -115,7 +123,7 @@ export const decoratedDyckPaths: Family<DecoratedLabelledDyckPath> = {
     const decorated = shuffleInPlace(doubleRises(chosen), random)
       .slice(0, d)
       .sort((a, b) => a - b);
-    return { path: chosen, labels, decorated };
+    return { path: chosen.slice(), labels, decorated };
   },
   key: (p) => `${p.path.map((s) => (s === 1 ? 'N' : 'E')).join('')}:${p.labels.join(',')}:${p.decorated.join(',')}`,
   readingWord: parkingReadingWord,

@@ -47,8 +47,11 @@ function grow(mu: readonly number[], add: readonly number[]): number[] {
   return add.map((x, r) => (mu[r] ?? 0) + x);
 }
 
-/** K_{λμ}: the number of SSYT of shape lambda and content mu (memoized strip recursion). */
-export function kostka(lambda: Partition, content: readonly number[]): bigint {
+/**
+ * A memoized counter: ways(i, mu) = number of ways to fill lambda/mu with letters i+1, …
+ * (content[i], … of each), by horizontal strips.
+ */
+function stripCounter(lambda: Partition, content: readonly number[]): (i: number, mu: readonly number[]) => bigint {
   const memo = new Map<string, bigint>();
   const rec = (i: number, mu: readonly number[]): bigint => {
     if (i === content.length) return mu.every((x, r) => x === lambda[r]) ? 1n : 0n;
@@ -60,7 +63,12 @@ export function kostka(lambda: Partition, content: readonly number[]): bigint {
     memo.set(key, s);
     return s;
   };
-  return rec(0, new Array<number>(lambda.length).fill(0));
+  return rec;
+}
+
+/** K_{λμ}: the number of SSYT of shape lambda and content mu. */
+export function kostka(lambda: Partition, content: readonly number[]): bigint {
+  return stripCounter(lambda, content)(0, new Array<number>(lambda.length).fill(0));
 }
 
 export const semistandardTableaux: Family<Tableau> = {
@@ -98,14 +106,14 @@ export const semistandardTableaux: Family<Tableau> = {
     validate(params);
     const lambda = listParam(params, 'shape');
     const content = listParam(params, 'content');
-    if (kostka(lambda, content) === 0n) throw new InputError(`semistandard-tableaux: no tableau of shape ${lambda.join(',')} with content ${content.join(',')}`, 'content');
+    const ways = stripCounter(lambda, content);
+    if (ways(0, new Array<number>(lambda.length).fill(0)) === 0n) throw new InputError(`semistandard-tableaux: no tableau of shape ${lambda.join(',')} with content ${content.join(',')}`, 'content');
     // Choose each letter's strip with weight = number of ways to finish (uniform overall).
     const rows: number[][] = lambda.map(() => []);
     let mu: number[] = new Array<number>(lambda.length).fill(0);
     for (let i = 0; i < content.length; i++) {
       const options = [...horizontalStrips(lambda, mu, content[i]!)];
-      const rest = content.slice(i + 1);
-      const weights = options.map((add) => kostkaFrom(lambda, grow(mu, add), rest));
+      const weights = options.map((add) => ways(i + 1, grow(mu, add)));
       const add = options[weightedIndex(random, weights)]!;
       add.forEach((x, r) => {
         for (let j = 0; j < x; j++) rows[r]!.push(i + 1);
@@ -125,11 +133,3 @@ export const semistandardTableaux: Family<Tableau> = {
     { shape: [3, 2, 1], content: [2, 2, 2] },
   ],
 };
-
-/** The number of ways to fill lambda/mu with the given content (skew Kostka, by strips). */
-function kostkaFrom(lambda: Partition, mu: readonly number[], content: readonly number[]): bigint {
-  if (content.length === 0) return mu.every((x, r) => x === lambda[r]) ? 1n : 0n;
-  let s = 0n;
-  for (const add of horizontalStrips(lambda, mu, content[0]!)) s += kostkaFrom(lambda, grow(mu, add), content.slice(1));
-  return s;
-}
