@@ -131,5 +131,6 @@ export const semistandardTableaux: Family<Tableau> = {
     { shape: [3, 1], content: [2, 0, 2] },
     { shape: [2, 1], content: [3] },
     { shape: [3, 2, 1], content: [2, 2, 2] },
+    { shape: [3, 2], content: [1, 2, 1, 1] },
   ],
 };

@@ -74,6 +74,21 @@ describe.each(FAMILIES.map((f) => [f.id, f] as const))('family %s', (_id, f) => 
     }
   });
 
+  it('samples are fair: on a small case every object comes up about equally often (seeded)', () => {
+    const p = f.testParams.find((q) => f.count(q) >= 3n && f.count(q) <= 60n);
+    if (!p) return;
+    const keys = keysOf(f, p);
+    const seen = new Map<string, number>(keys.map((k) => [k, 0]));
+    const per = 200;
+    const random = seeded(12345);
+    for (let i = 0; i < per * keys.length; i++) {
+      const k = f.key(f.sample(p, random));
+      seen.set(k, seen.get(k)! + 1);
+    }
+    // 200 expected per object; ±35% is five standard deviations.
+    for (const [k, c] of seen) expect(Math.abs(c - per), k).toBeLessThan(0.35 * per);
+  });
+
   it('validate rejects out-of-range, unknown and missing parameters with InputError', () => {
     const p = f.testParams[f.testParams.length - 1]!;
     expect(() => f.validate({ ...p, zzz: 1 })).toThrow(InputError);
