@@ -20,9 +20,14 @@ export interface LineInputProps {
 export function LineInput(props: LineInputProps) {
   const theme = useTheme();
   const [cursor, setCursorState] = useState(props.value.length);
-  // The latest text and cursor, so keys arriving faster than redraws all land.
-  const live = useRef({ value: props.value, cursor: props.value.length, seen: props.value });
-  if (live.current.seen !== props.value) live.current = { value: props.value, cursor: Math.min(cursor, props.value.length), seen: props.value };
+  // The latest text and cursor, so keys arriving faster than redraws all land; a value
+  // set from outside (not one this field produced) replaces them.
+  const live = useRef({ value: props.value, cursor: props.value.length });
+  const lastProp = useRef(props.value);
+  if (props.value !== lastProp.current) {
+    lastProp.current = props.value;
+    if (props.value !== live.current.value) live.current = { value: props.value, cursor: props.value.length };
+  }
   const pos = Math.min(cursor, props.value.length);
   const setCursor = (c: number) => {
     live.current.cursor = c;
@@ -30,7 +35,6 @@ export function LineInput(props: LineInputProps) {
   };
   const change = (v: string) => {
     live.current.value = v;
-    live.current.seen = v;
     props.onChange(v);
   };
   useInput(

@@ -12,6 +12,11 @@ import { targetFromJson } from '../../series/targetFile.js';
 import { buildCatalogue } from '../../store/buildCatalogue.js';
 import { Catalogue } from '../../store/catalogue.js';
 import { provenance } from '../../store/provenance.js';
+import { qtTableJson } from '../../cli/json-output.js';
+import { schurSeries } from '../../series/series.js';
+import { seriesToJson } from '../../series/seriesJson.js';
+import { evaluateExpression } from '../../symfun/expression.js';
+import { formatText, integralCoefficients } from '../../symfun/sym-format.js';
 import type { ModuleRequest } from './moduleRequest.js';
 
 export type ProgressFn = (label: string, done: number, total?: number) => void;
@@ -74,6 +79,30 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
     } finally {
       cat.close();
     }
+  },
+  // The same engine entry as `gradus sym`; text in the Schur basis, JSON as --json prints it.
+  sym: (input, progress) => {
+    const { expression } = input as { expression: string };
+    const r = evaluateExpression(expression, { onProgress: (label, done, total) => progress(label, done, total) });
+    const { denominator, terms } = integralCoefficients(r.value, 's');
+    const json = {
+      expression,
+      degree: r.degree,
+      basis: 's',
+      ...(denominator === 1n ? {} : { denominator: denominator.toString() }),
+      terms: Object.fromEntries(terms.map(([k, c]) => [k, qtTableJson(c.num)])),
+      provenance: r.provenance,
+    };
+    // A series for the search only when homogeneous with integer coefficients.
+    const seriesJson = typeof r.degree === 'number' && denominator === 1n ? seriesToJson(schurSeries(terms.map(([k, c]) => [k, c.num] as const))) : undefined;
+    return {
+      expression,
+      lines: formatText(r.value, 's').split('\n'),
+      json,
+      seriesJson,
+      degree: typeof r.degree === 'number' ? r.degree : undefined,
+      elapsedMs: r.provenance.milliseconds,
+    };
   },
   // Exercises the worker plumbing in tests: counts to input.n, reporting progress.
   count: async (input, progress) => {

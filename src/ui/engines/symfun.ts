@@ -1,11 +1,12 @@
 /**
- * The expression language of `gradus sym`, evaluated by the symmetric-function engine in
- * a worker. Until src/symfun offers its evaluator this reports itself unavailable.
+ * The expression language of `gradus sym`: parsed here (errors at once, with their
+ * column), evaluated by the same engine entry as the command line in a worker.
  */
 import { InputError } from '../../core/errors.js';
+import { parseExpression } from '../../symfun/expression-parser.js';
 import { startJob, type Job, type JobProgress } from './workerJob.js';
 
-export const SYMFUN_ENGINE_AVAILABLE = false;
+export const SYMFUN_ENGINE_AVAILABLE = true;
 
 export interface SymOutcome {
   readonly expression: string;
@@ -22,6 +23,8 @@ export interface SymOutcome {
 export function startSym(expression: string, onProgress: (p: JobProgress) => void): Job<SymOutcome> {
   if (!SYMFUN_ENGINE_AVAILABLE) throw new InputError('the symmetric-function engine is not available in this build');
   if (expression.trim() === '') throw new InputError('type an expression first, such as nabla(e(3))');
+  // Parse errors come at once, with their column, before any worker starts.
+  parseExpression(expression);
   return startJob<SymOutcome>('sym', { expression }, onProgress);
 }
 

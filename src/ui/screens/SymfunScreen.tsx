@@ -36,7 +36,7 @@ export function SymfunScreen(props: ScreenProps) {
   const sendToSearch = () => {
     const r = job.state.result;
     if (!r) return props.notify('evaluate an expression first (Enter)', 'error');
-    if (r.degree === undefined) return props.notify('this result has no single degree n to search by', 'error');
+    if (r.degree === undefined || r.seriesJson === undefined) return props.notify('only a homogeneous result with integer coefficients can be searched', 'error');
     try {
       const series = seriesFromJson(r.seriesJson, 'sym result');
       const title = `sym ${r.expression}`;
@@ -101,7 +101,7 @@ export function SymfunScreen(props: ScreenProps) {
         </Text>
       ) : st.result ? (
         <Text wrap="truncate" {...theme.style('ok')}>
-          = ({lines.length} term{lines.length === 1 ? '' : 's'} in the Schur basis, {(st.result.elapsedMs / 1000).toFixed(2)}s)
+          = in the Schur basis{st.result.degree !== undefined ? `, degree ${st.result.degree}` : ''} ({(st.result.elapsedMs / 1000).toFixed(2)}s; g sends it to the search)
         </Text>
       ) : (
         <Text {...theme.style('dim')}>Enter evaluates; e edits. Forms: e(4) h(2,1) s(2,1) p(2,1) H(2,1) nabla(F) delta(f,F) deltaprime(f,F) omega(F) subs(F,t=0)</Text>

@@ -1,0 +1,35 @@
+import { afterEach, describe, expect, it } from 'vitest';
+import { fits, frame, KEYS, press, renderApp, waitForFrame, type Rendered } from './helpers.js';
+
+let r: Rendered | undefined;
+afterEach(() => {
+  r?.unmount();
+  r = undefined;
+});
+
+describe('Symmetric functions screen', () => {
+  it('evaluates nabla(e(2)) in the Schur basis', async () => {
+    r = renderApp({ initialScreen: 'symfun' });
+    await press(r, 'e');
+    await press(r, '\u0015', 'nabla(e(2))', KEYS.enter);
+    // ∇e_2 = s_2 + (q+t) s_11 (MATH.md §3, Haglund 2008 ch. 2 — from memory; the engine's tests check it independently).
+    const f = await waitForFrame(r, (x) => x.includes('Schur basis'));
+    expect(f).toContain('s(2) + (q + t)*s(1,1)');
+    expect(f).toContain('degree 2');
+    expect(fits(f, 80, 24)).toBe(true);
+  }, 30_000);
+
+  it('points a parse error at its column', async () => {
+    r = renderApp({ initialScreen: 'symfun' });
+    await press(r, 'e');
+    await press(r, '\u0015', 'e(2) + * s(1)', KEYS.enter);
+    const f = await waitForFrame(r, (x) => x.includes('column'));
+    const lines = f.split('\n');
+    const exprLine = lines.findIndex((l) => l.startsWith('sym e(2) + * s(1)'));
+    expect(exprLine).toBeGreaterThan(0);
+    // The caret sits under the "*" the parser stopped at (column 8 of the expression).
+    expect(lines[exprLine + 1]!.indexOf('^')).toBe(lines[exprLine]!.indexOf('*'));
+    expect(f).toContain('column 8');
+    expect(f).not.toMatch(/\bat .+:\d+:\d+/); // no stack trace
+  }, 30_000);
+});
