@@ -35,6 +35,17 @@ describe('gradus show', { timeout: 120_000 }, () => {
     expect(doc.objects.map((o: { key: string }) => o.key)).toEqual(['1,2,3', '1,3,2', '2,1,3', '2,3,1']); // lexicographic order
     for (const o of doc.objects) for (const s of stats) expect(o.stats[s.id]).toBe(s.compute(o.object));
   });
+  it('--stat T:S reads the statistic S after the transform T', () => {
+    const s = statisticsOfFamily('permutations')[0];
+    if (!s) return;
+    const r = runCli(['show', 'permutations', '--n', '4', '--limit', '24', '--stat', `inverse:${s.id}`, '--json']);
+    expect(r.code).toBe(0);
+    for (const o of JSON.parse(r.stdout).objects) {
+      const w = o.object as number[];
+      const inv = w.map((_, i) => w.indexOf(i + 1) + 1);
+      expect(o.stats[`inverse:${s.id}`]).toBe(s.compute(inv));
+    }
+  });
   it('draws blocks as 13|2|45 and tableaux as rows (text)', () => {
     const osp = runCli(['show', 'ordered-set-partitions', '--n', '3', '--k', '2']);
     expect(osp.code).toBe(0);
@@ -58,6 +69,7 @@ describe('gradus show', { timeout: 120_000 }, () => {
     const cases: [string[], RegExp][] = [
       [['show', 'permutation', '--n', '3'], /nearest: permutations/],
       [['show', 'permutations', '--n', '3', '--stat', 'no-such-stat'], /statistic/],
+      [['show', 'permutations', '--n', '3', '--stat', 'fota:x'], /nearest: foata/],
       [['show', 'permutations', '--n', '3', '--k', '2'], /takes no --k/],
       [['show', 'permutations', '--n', '99'], /n must be an integer from 0 to 20/],
       [['show', 'standard-tableaux', '--shape', '1,2'], /shape/],

@@ -7,7 +7,10 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { familyById } from '../../objects/index.js';
-import { foataInverse, foataMap } from '../../objects/transforms/foata.js';
+import { composeStatistic } from '../../objects/transforms/compose-statistic.js';
+import { foata, foataInverse, foataMap } from '../../objects/transforms/foata.js';
+import { InputError } from '../../src/core/errors.js';
+import type { Statistic } from '../../src/enumerate/plugin.js';
 import { TRANSFORMS } from '../../objects/transforms/index.js';
 import { rsk, rskInverse } from '../../objects/transforms/rsk.js';
 import { zetaMap } from '../../objects/transforms/zeta.js';
@@ -139,5 +142,21 @@ describe('specific transforms', () => {
         expect(area(t.apply(p) as DyckPath)).toBe(area(p));
       }),
     );
+  });
+  it('composeStatistic reads a statistic after a transform: inv after Foata is maj (Foata 1968)', () => {
+    const invStat: Statistic<readonly number[]> = {
+      id: 'inv-here',
+      family: 'permutations',
+      description: 'inversions, computed in this test',
+      source: 'common practice',
+      examples: [],
+      compute: inv,
+    };
+    const composed = composeStatistic(foata, invStat);
+    expect(composed.id).toBe('foata:inv-here');
+    expect(composed.family).toBe('permutations');
+    for (const w of familyById('permutations').generate({ n: 5 })) expect(composed.compute(w as number[])).toBe(maj(w as number[]));
+    for (const [a, v] of composed.examples) expect(v).toBe(inv(foataMap(a)));
+    expect(() => composeStatistic(foata, { ...invStat, family: 'words' })).toThrow(InputError);
   });
 });

@@ -5,6 +5,8 @@
  * (exported so other commands read family parameters the same way).
  */
 import { familyById } from '../../../objects/index.js';
+import { composeStatistic } from '../../../objects/transforms/compose-statistic.js';
+import { transformsFrom } from '../../../objects/transforms/index.js';
 import { InputError } from '../../core/errors.js';
 import { unknownNameMessage } from '../../core/suggest.js';
 import type { Family, Params, Statistic } from '../../enumerate/plugin.js';
@@ -45,20 +47,30 @@ export function familyParams(family: Family<unknown>, args: ParsedArgs): Params 
   return params;
 }
 
+/**
+ * The statistic named `name` on the family: a statistic id of the family, or `t:s`, the
+ * statistic s read after the transform t (t from the family, s on t's target family).
+ */
+export function resolveStatistic(family: Family<unknown>, name: string): Statistic<unknown> {
+  const colon = name.indexOf(':');
+  if (colon >= 0) {
+    const t = transformsFrom(family.id).find((x) => x.id === name.slice(0, colon));
+    if (!t) {
+      const list = transformsFrom(family.id).map((x) => x.id);
+      throw new InputError(list.length ? unknownNameMessage(`transform from ${family.id}`, name.slice(0, colon), list) : `${family.id} has no transforms (asked for "${name}")`, 'stat');
+    }
+    return composeStatistic(t, resolveStatistic(familyById(t.to), name.slice(colon + 1)));
+  }
+  const own = statisticsOfFamily(family.id);
+  const hit = own.find((s) => s.id === name);
+  if (hit) return hit;
+  const list = own.map((s) => s.id);
+  throw new InputError(list.length ? unknownNameMessage(`statistic of ${family.id}`, name, list) : `${family.id} has no statistics yet (asked for "${name}")`, 'stat');
+}
+
 /** The statistics named by --stat, each checked against the family. */
 export function chosenStatistics(family: Family<unknown>, names: readonly string[]): Statistic<unknown>[] {
-  const own = statisticsOfFamily(family.id);
-  return names.map((name) => {
-    const hit = own.find((s) => s.id === name);
-    if (!hit) {
-      const list = own.map((s) => s.id);
-      throw new InputError(
-        list.length ? `${unknownNameMessage(`statistic of ${family.id}`, name, list)}` : `${family.id} has no statistics yet (asked for "${name}")`,
-        'stat',
-      );
-    }
-    return hit;
-  });
+  return names.map((name) => resolveStatistic(family, name));
 }
 
 /** A small seeded generator (mulberry32, common practice) so --sample --seed repeats. */
@@ -85,7 +97,7 @@ export const showCommand: CommandSpec = {
   positionals: [{ name: 'family', description: 'a family id (see gradus families)' }],
   options: [
     ...FAMILY_PARAM_OPTIONS,
-    { name: 'stat', type: 'list', description: 'statistics to show beside each object (repeat or separate by commas)', placeholder: 'S' },
+    { name: 'stat', type: 'list', description: 'statistics to show beside each object (repeat or separate by commas); T:S reads S after the transform T', placeholder: 'S' },
     { name: 'limit', type: 'int', description: 'how many objects to draw (default 20)', placeholder: 'M', min: 1, max: 100000 },
     { name: 'sample', type: 'flag', description: 'draw uniformly random objects instead of the first ones' },
     { name: 'seed', type: 'int', description: 'seed for --sample (default 1)', placeholder: 'S', min: 0, max: 2 ** 31 - 1 },
