@@ -8,10 +8,12 @@ import type { Transform } from '../../src/enumerate/plugin.js';
 import { complement, wordComplement } from './complement.js';
 import { conjugate } from './conjugate.js';
 import { dyckReverse } from './dyck-reverse.js';
+import { evacuation } from './evacuation.js';
 import { foata, wordFoata } from './foata.js';
 import { inverse } from './inverse.js';
 import { reverse, wordReverse } from './reverse.js';
 import { rskInsertion, rskRecording } from './rsk.js';
+import { subsetComplement } from './subset-complement.js';
 import { transpose } from './transpose.js';
 import { zeta } from './zeta.js';
 
@@ -20,6 +22,7 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   wordComplement,
   conjugate,
   dyckReverse,
+  evacuation,
   foata,
   wordFoata,
   inverse,
@@ -27,6 +30,7 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   wordReverse,
   rskInsertion,
   rskRecording,
+  subsetComplement,
   transpose,
   zeta,
 ];

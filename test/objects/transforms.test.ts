@@ -12,6 +12,7 @@ import { foata, foataInverse, foataMap } from '../../objects/transforms/foata.js
 import { InputError } from '../../src/core/errors.js';
 import type { Statistic } from '../../src/enumerate/plugin.js';
 import { TRANSFORMS } from '../../objects/transforms/index.js';
+import { evacuate } from '../../objects/transforms/evacuation.js';
 import { rsk, rskInverse } from '../../objects/transforms/rsk.js';
 import { zetaMap } from '../../objects/transforms/zeta.js';
 import type { DyckPath } from '../../objects/types.js';
@@ -158,5 +159,11 @@ describe('specific transforms', () => {
     for (const w of familyById('permutations').generate({ n: 5 })) expect(composed.compute(w as number[])).toBe(maj(w as number[]));
     for (const [a, v] of composed.examples) expect(v).toBe(inv(foataMap(a)));
     expect(() => composeStatistic(foata, { ...invStat, family: 'words' })).toThrow(InputError);
+  });
+  it('evacuation: P(w^#) = evac(P(w)) for w^# the reverse complement (Schützenberger; Stanley EC2 §A1.2), all of S_6', () => {
+    for (const w of familyById('permutations').generate({ n: 6 })) {
+      const sharp = [...(w as number[])].reverse().map((x) => 7 - x);
+      expect(rsk(sharp)[0]).toEqual(evacuate(rsk(w as number[])[0]));
+    }
   });
 });
