@@ -17,6 +17,8 @@ import { schurSeries } from '../../series/series.js';
 import { seriesToJson } from '../../series/seriesJson.js';
 import { evaluateExpression } from '../../symfun/expression.js';
 import { formatText, integralCoefficients } from '../../symfun/sym-format.js';
+import { computeDistribution } from '../../enumerate/distribution.js';
+import type { DistRequest } from '../../enumerate/request.js';
 import type { ModuleRequest } from './moduleRequest.js';
 
 export type ProgressFn = (label: string, done: number, total?: number) => void;
@@ -103,6 +105,11 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
       degree: typeof r.degree === 'number' ? r.degree : undefined,
       elapsedMs: r.provenance.milliseconds,
     };
+  },
+  // The same engine entry as `gradus dist`.
+  dist: async (input, progress) => {
+    const d = await computeDistribution(input as DistRequest, { onProgress: (done, total) => progress('objects', done, total) });
+    return { series: d.series.toJson(), ms: d.provenance.ms, method: d.provenance.method };
   },
   // Exercises the worker plumbing in tests: counts to input.n, reporting progress.
   count: async (input, progress) => {

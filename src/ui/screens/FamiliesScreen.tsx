@@ -48,7 +48,7 @@ export function FamiliesScreen(props: ScreenProps) {
 
 function FamiliesView(props: ScreenProps & { families: readonly Family<unknown>[]; statsOf: (id: string) => readonly Statistic<unknown>[] }) {
   const theme = useTheme();
-  const [fi, setFi] = useState(0);
+  const [fi, setFi] = useState(() => Math.max(0, props.families.findIndex((f) => f.id === 'permutations')));
   const family = props.families[fi]!;
   const stats = props.statsOf(family.id);
   const [paramsBy, setParamsBy] = useState<Record<string, Params>>({});

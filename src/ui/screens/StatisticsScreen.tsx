@@ -3,7 +3,7 @@
  * the joint distribution of two as a shaded table; flags, definitions and sources.
  */
 import { Box, Text, useInput } from 'ink';
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import type { Poly } from '../../core/poly.js';
 import type { Family, Params, Statistic } from '../../enumerate/plugin.js';
 import { qtSeries } from '../../series/series.js';
@@ -14,7 +14,10 @@ import { LineInput } from '../components/LineInput.js';
 import { ShadedGrid } from '../components/ShadedGrid.js';
 import { Unavailable } from '../components/Unavailable.js';
 import { defaultParams, loadCatalog, statisticsOf } from '../engines/catalog.js';
-import { distribution, DISTRIBUTION_ENGINE_AVAILABLE } from '../engines/distribution.js';
+import { DISTRIBUTION_ENGINE_AVAILABLE, startDistribution, type DistView } from '../engines/distribution.js';
+import { ProgressBar } from '../components/ProgressBar.js';
+import { useTicker } from '../hooks.js';
+import { useJob } from '../useJob.js';
 import { bumpSize, paramsToText, parseParamsText } from '../engines/paramsText.js';
 import { errorText } from '../errorText.js';
 import type { ScreenProps } from '../ScreenProps.js';
@@ -39,7 +42,7 @@ function flagText(p: Poly, joint: boolean): string {
 
 function StatisticsView(props: ScreenProps & { families: readonly Family<unknown>[]; statsOf: (id: string) => readonly Statistic<unknown>[] }) {
   const theme = useTheme();
-  const [fi, setFi] = useState(0);
+  const [fi, setFi] = useState(() => Math.max(0, props.families.findIndex((f) => f.id === 'permutations')));
   const family = props.families[fi]!;
   const stats = props.statsOf(family.id);
   const [paramsBy, setParamsBy] = useState<Record<string, Params>>({});
@@ -54,13 +57,31 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
   const [draft, setDraft] = useState('');
   const [offset, setOffset] = useState(0);
 
-  const result = useMemo((): { poly?: Poly; error?: string } => {
+  const job = useJob<DistView>();
+  const now = useTicker(job.state.status === 'running');
+  const runKey = `${family.id} ${paramsToText(params)} ${s1.id} ${s2?.id ?? ''}`;
+  // The key of the run whose result is shown: a result never shows under other choices.
+  const [doneKey, setDoneKey] = useState('');
+  useEffect(() => {
+    let count: bigint;
     try {
-      return { poly: distribution(family, params, s1, s2) };
+      family.validate(params);
+      count = family.count(params);
     } catch (e) {
-      return { error: errorText(e) };
+      job.run(() => {
+        throw e;
+      });
+      return;
     }
-  }, [family, params, s1, s2]);
+    setDoneKey('');
+    job.run(
+      (onProgress) => startDistribution({ family: family.id, params, statistics: s2 ? [s1.id, s2.id] : [s1.id] }, count, onProgress),
+      () => setDoneKey(runKey),
+    );
+    // runKey names everything the run depends on.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [runKey]);
+  const result: { poly?: Poly; error?: string } = job.state.status === 'done' && doneKey === runKey ? { poly: job.state.result!.series } : job.state.status === 'error' ? { error: job.state.error! } : {};
 
   const setParams = (p: Params) => {
     setParamsBy({ ...paramsBy, [family.id]: p });
@@ -74,7 +95,12 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
         setOffset(0);
       } else if (key.upArrow) setABy({ ...aBy, [family.id]: (a + stats.length - 1) % stats.length });
       else if (key.downArrow) setABy({ ...aBy, [family.id]: (a + 1) % stats.length });
-      else if (input === 'j') setBBy({ ...bBy, [family.id]: b + 1 >= stats.length ? -1 : b + 1 });
+      else if (input === 'j') {
+        // Next statistic other than the first one; past the last, back to none.
+        let nb = b + 1;
+        if (nb === a) nb++;
+        setBBy({ ...bBy, [family.id]: nb >= stats.length ? -1 : nb });
+      }
       else if (input === '+' || input === '=' || input === '-') {
         try {
           const p = bumpSize(params, family.params, input === '-' ? -1 : 1);
@@ -93,7 +119,8 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
         const k = typeof params['k'] === 'number' ? params['k'] : undefined;
         props.addItem({ title, origin: 'statistics', target: makeTarget(title, [{ n, ...(k !== undefined ? { k } : {}), series: qtSeries(result.poly) }]) });
         props.go('search');
-      } else if (input === ']') setOffset((o) => o + 1);
+      } else if (input === 'x') job.cancel();
+      else if (input === ']') setOffset((o) => o + 1);
       else if (input === '[') setOffset((o) => Math.max(0, o - 1));
     },
     { isActive: props.active && field === undefined },
@@ -147,6 +174,8 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
         <Text wrap="wrap" {...theme.style('warn')}>
           The distribution engine (src/enumerate) is not available in this build; no distribution is shown.
         </Text>
+      ) : job.state.status === 'running' ? (
+        <ProgressBar state={{ label: 'objects', done: job.state.progress?.done ?? 0, total: job.state.progress?.total, elapsedMs: now - job.state.startedAt }} width={props.width} />
       ) : result.error ? (
         <Text wrap="wrap" {...theme.style('error')}>
           ✗ {result.error}
