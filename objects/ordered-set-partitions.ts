@@ -68,16 +68,12 @@ export function surjectionToBlocks(w: readonly number[], blocks: number[][], fro
   for (let i = from; i < w.length; i++) blocks[w[i]!]!.push(i + 1);
 }
 
-function firstWord(n: number, k: number, prefix: readonly number[]): { w: number[]; counts: number[] } | undefined {
+/** The first surjective word [n] → {0..k−1} and its letter counts (undefined when there is none). */
+export function firstSurjection(n: number, k: number): { w: number[]; counts: number[] } | undefined {
+  if (k > n || (n > 0 && k === 0)) return undefined;
   const w = new Array<number>(n).fill(0);
   const counts = new Array<number>(k).fill(0);
-  prefix.forEach((v, i) => {
-    w[i] = v;
-    counts[v]!++;
-  });
-  const missing = counts.filter((c) => c === 0).length;
-  if (missing > n - prefix.length || (n > 0 && k === 0)) return undefined;
-  completeSurjection(w, counts, k, prefix.length);
+  completeSurjection(w, counts, k, 0);
   return { w, counts };
 }
 
@@ -144,7 +140,7 @@ export const orderedSetPartitions: Family<OrderedSetPartition> = {
     validate(params);
     const n = intParam(params, 'n');
     const k = intParam(params, 'k');
-    const start = firstWord(n, k, []);
+    const start = firstSurjection(n, k);
     if (!start) return;
     const { w, counts } = start;
     do {
