@@ -59,7 +59,25 @@ function constantOf(f: SymFun): PolyQ | undefined {
   return undefined;
 }
 
+/** The largest degree the expression language handles (changes of basis need p(n)² entries). */
+export const EXPRESSION_MAX_DEGREE = 20;
+
+function limitDegree(n: number, col: number): void {
+  if (n > EXPRESSION_MAX_DEGREE) {
+    throw new LimitError(`column ${col}: degree ${n} is above ${EXPRESSION_MAX_DEGREE}, the largest degree handled here (changes of basis grow like p(n)²)`);
+  }
+}
+
+function checkSize(f: SymFun, col: number): SymFun {
+  limitDegree(Math.max(0, ...f.degrees()), col);
+  return f;
+}
+
 export function evaluateNode(node: Node, opts: EvalOptions): SymFun {
+  return checkSize(evaluateUnchecked(node, opts), node.col);
+}
+
+function evaluateUnchecked(node: Node, opts: EvalOptions): SymFun {
   const ev = (n: Node): SymFun => evaluateNode(n, opts);
   switch (node.kind) {
     case 'num':
@@ -71,7 +89,9 @@ export function evaluateNode(node: Node, opts: EvalOptions): SymFun {
     case 'pow': {
       const b = ev(node.base);
       const c = constantOf(b);
-      return c ? SymFun.scalar(PolyQ.of(c.num.pow(node.exp), c.den ** BigInt(node.exp))) : b.pow(node.exp);
+      if (c) return SymFun.scalar(PolyQ.of(c.num.pow(node.exp), c.den ** BigInt(node.exp)));
+      limitDegree(Math.max(0, ...b.degrees()) * node.exp, node.col);
+      return b.pow(node.exp);
     }
     case 'bin': {
       const a = ev(node.left);
@@ -83,6 +103,8 @@ export function evaluateNode(node: Node, opts: EvalOptions): SymFun {
         const cb = constantOf(b);
         if (cb) return a.scale(cb);
         if (ca) return b.scale(ca);
+        const deg = Math.max(0, ...a.degrees()) + Math.max(0, ...b.degrees());
+        limitDegree(deg, node.col);
         return a.mul(b);
       }
       const c = constantOf(b);
@@ -128,6 +150,8 @@ function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions):
   const name = node.name;
   if (BASIS_NAMES.has(name)) {
     const parts = partsOf(node);
+    const deg = parts.reduce((x, y) => x + y, 0);
+    limitDegree(deg, node.col);
     try {
       return SymFun.basisElement(name as Basis, parts);
     } catch (e) {

@@ -116,6 +116,13 @@ export class SymFun {
     const out: [Partition, PolyQ][] = [];
     for (const n of this.degrees()) {
       const ps = partitionList(n);
+      if (basis === 's') {
+        for (const l of ps) {
+          const c = this.schur.get(partitionKey(l));
+          if (c) out.push([l, c]);
+        }
+        continue;
+      }
       const acc: PolyQ[] = ps.map(() => PolyQ.zero);
       const mat = schurToBasis(basis, n);
       ps.forEach((l, i) => {
