@@ -3,6 +3,7 @@ import type { Family, ParamSpec, Params } from '../src/enumerate/plugin.js';
 import { drawDyckPath, firstDyckPath, nextDyckPath, randomDyckPath } from './support/dyck.js';
 import { catalan } from './support/numbers.js';
 import { intParam, validateBySpec } from './support/params.js';
+import { shardParts } from './support/shards.js';
 import type { DyckPath } from './types.js';
 
 const PARAMS: readonly ParamSpec[] = [{ name: 'n', kind: 'int', description: 'semilength n', min: 0, max: 30 }];
@@ -22,9 +23,11 @@ export const dyckPaths: Family<DyckPath> = {
   },
   visit(params, f, shard) {
     validate(params);
-    if (shard && shard.index !== 0) return; // one shard holds everything (paths are few)
+    // Every shard steps all paths (cheap) and keeps every count-th one for f.
+    const [index, count] = shardParts(shard);
     const a = firstDyckPath(intParam(params, 'n'));
-    do f(a);
+    let j = 0;
+    do if (j++ % count === index) f(a);
     while (nextDyckPath(a));
   },
   count(params) {

@@ -9,6 +9,7 @@ import type { Partition } from '../src/core/partitions.js';
 import type { Family, ParamSpec, Params } from '../src/enumerate/plugin.js';
 import { nextPermutationFrom } from './permutations.js';
 import { drawRows } from './support/diagram.js';
+import { visitRearrangements } from './support/multiset-visit.js';
 import { listParam, validateBySpec } from './support/params.js';
 import { shuffleInPlace } from './support/random.js';
 import type { Filling } from './types.js';
@@ -42,6 +43,18 @@ export const fillings: Family<Filling> = {
     const w = Array.from({ length: shape.reduce((a, b) => a + b, 0) }, (_, i) => i + 1);
     do yield fill(shape, w);
     while (nextPermutationFrom(w, 0));
+  },
+  visit(params, f, shard) {
+    validate(params);
+    const shape = listParam(params, 'shape');
+    const rows = shape.map((len) => new Array<number>(len).fill(0));
+    const obj: Filling = { shape, rows };
+    const n = shape.reduce((a, b) => a + b, 0);
+    visitRearrangements(Array.from({ length: n }, (_, i) => i + 1), (w) => {
+      let at = 0;
+      for (const row of rows) for (let c = 0; c < row.length; c++) row[c] = w[at++]!;
+      f(obj);
+    }, shard);
   },
   count(params) {
     validate(params);
