@@ -8,9 +8,9 @@ import { partitionKey } from '../core/partitions.js';
 import { Poly, packExponents } from '../core/poly.js';
 import type { Family, Statistic, Transform } from '../enumerate/plugin.js';
 import { qtSeries, schurSeries, type Series } from '../series/series.js';
-import { fundamentalToSchur } from '../symfun/quasisym.js';
 import type { Combine, DistributionRow } from './catalogue.js';
 import { descentMask, inverseDescentMask } from './descentMasks.js';
+import { fundamentalToSchurFast, type CountMap } from './fundamentalToSchurFast.js';
 
 /** A statistic as tallied: an own statistic, or one read after a transform. */
 export interface TallyStat {
@@ -46,12 +46,28 @@ export function tallyStats(family: Family<unknown>, statistics: readonly Statist
   return [...own, ...via];
 }
 
+/**
+ * Pairs tallied: own × own and own × transformed (a statistic against one read after a
+ * transform); Frobenius-level pairs only own × own. Singles and pairs use dense counters
+ * below a value bound V, with a map for any larger value.
+ */
 export function tallyUnit(family: Family<unknown>, params: Readonly<Record<string, number>>, stats: readonly TallyStat[]): UnitResult {
   const n = params['n'] ?? 0;
   const k = params['k'];
   const S = stats.length;
-  const single: Tally[] = stats.map(() => new Map());
-  const pairs: Tally[][] = stats.map(() => stats.map(() => new Map()));
+  const own = stats.filter((s) => s.transform === '').length;
+  const V = Math.max(64, (n * (n + 1)) / 2 + 2);
+  const pairList: [number, number][] = [];
+  for (let i = 0; i < own; i++) for (let j = i + 1; j < S; j++) pairList.push([i, j]);
+  const P = pairList.length;
+  const singleDense = new Float64Array(S * V);
+  const pairDense = new Float64Array(P * V * V);
+  const overflow = new Map<string, Tally>();
+  const over = (name: string, key: number) => {
+    let m = overflow.get(name);
+    if (!m) overflow.set(name, (m = new Map()));
+    bump(m, key);
+  };
   const hasShape = typeof family.shape === 'function';
   const hasWord = typeof family.readingWord === 'function' && n >= 1 && n <= 13;
   const shapeKeys = new Map<string, number>();
@@ -67,16 +83,23 @@ export function tallyUnit(family: Family<unknown>, params: Readonly<Record<strin
       const v = stats[i]!.compute(obj);
       if (!Number.isInteger(v) || v < 0 || v >= 4096) throw new Error(`statistic ${stats[i]!.id} gave ${v} (expected an integer from 0 to 4095)`);
       vals[i] = v;
-      bump(single[i]!, packExponents(v, 0));
+      if (v < V) singleDense[i * V + v]!++;
+      else over(`s${i}`, packExponents(v, 0));
     }
-    for (let i = 0; i < S; i++) for (let j = i + 1; j < S; j++) bump(pairs[i]![j]!, packExponents(vals[i]!, vals[j]!));
+    for (let p = 0; p < P; p++) {
+      const [i, j] = pairList[p]!;
+      const a = vals[i]!;
+      const b = vals[j]!;
+      if (a < V && b < V) pairDense[(p * V + a) * V + b]!++;
+      else over(`p${p}`, packExponents(a, b));
+    }
     if (hasShape) {
       const key = partitionKey(family.shape!(obj));
       let id = shapeKeys.get(key);
       if (id === undefined) shapeKeys.set(key, (id = shapeKeys.size));
       for (let i = 0; i < S; i++) {
         bump(shapeSingle[i]!, vals[i]! * 4096 + id);
-        for (let j = i + 1; j < S; j++) bump(shapePair[i]![j]!, packExponents(vals[i]!, vals[j]!) * 4096 + id);
+        if (i < own) for (let j = i + 1; j < own; j++) bump(shapePair[i]![j]!, packExponents(vals[i]!, vals[j]!) * 4096 + id);
       }
     }
     if (hasWord) {
@@ -86,7 +109,7 @@ export function tallyUnit(family: Family<unknown>, params: Readonly<Record<strin
         const m = masks[d]!;
         for (let i = 0; i < S; i++) {
           bump(wordSingle[d]![i]!, vals[i]! * WORD_BASE + m);
-          for (let j = i + 1; j < S; j++) bump(wordPair[d]![i]![j]!, packExponents(vals[i]!, vals[j]!) * WORD_BASE + m);
+          if (i < own) for (let j = i + 1; j < own; j++) bump(wordPair[d]![i]![j]!, packExponents(vals[i]!, vals[j]!) * WORD_BASE + m);
         }
       }
     }
@@ -94,20 +117,32 @@ export function tallyUnit(family: Family<unknown>, params: Readonly<Record<strin
   if (family.visit) family.visit(params, visit);
   else for (const o of family.generate(params)) visit(o);
 
+  const singleTally = (i: number): Tally => {
+    const t: Tally = new Map(overflow.get(`s${i}`) ?? []);
+    for (let v = 0; v < V; v++) if (singleDense[i * V + v]) t.set(packExponents(v, 0), singleDense[i * V + v]!);
+    return t;
+  };
+  const pairTally = (p: number): Tally => {
+    const t: Tally = new Map(overflow.get(`p${p}`) ?? []);
+    const base = p * V * V;
+    for (let a = 0; a < V; a++) for (let b = 0; b < V; b++) {
+      const c = pairDense[base + a * V + b]!;
+      if (c) t.set(packExponents(a, b), c);
+    }
+    return t;
+  };
   const rows: DistributionRow[] = [];
   const base = { family: family.id, params, n, ...(k === undefined ? {} : { k }) };
   const transformOf = (...ix: number[]) => [...new Set(ix.map((i) => stats[i]!.transform).filter(Boolean))].join('+');
   const push = (ids: number[], combine: Combine, series: Series | undefined) => {
     if (series) rows.push({ ...base, statistics: ids.map((i) => stats[i]!.id), combine, transform: transformOf(...ids), series });
   };
-  for (let i = 0; i < S; i++) {
-    push([i], 'single', qtSeries(polyOf(single[i]!)));
-    for (let j = i + 1; j < S; j++) {
-      const joint = polyOf(pairs[i]![j]!);
-      push([i, j], 'joint', { kind: 'qt', poly: joint });
-      push([i, j], 'sum', qtSeries(sumOf(pairs[i]![j]!)));
-    }
-  }
+  for (let i = 0; i < S; i++) push([i], 'single', qtSeries(polyOf(singleTally(i))));
+  pairList.forEach(([i, j], p) => {
+    const t = pairTally(p);
+    push([i, j], 'joint', { kind: 'qt', poly: polyOf(t) });
+    push([i, j], 'sum', qtSeries(sumOf(t)));
+  });
   if (hasShape) {
     const names = [...shapeKeys.keys()];
     const toSchur = (t: Tally, pair: boolean): Series => {
@@ -123,7 +158,7 @@ export function tallyUnit(family: Family<unknown>, params: Readonly<Record<strin
     };
     for (let i = 0; i < S; i++) {
       push([i], 'shape', toSchur(shapeSingle[i]!, false));
-      for (let j = i + 1; j < S; j++) push([i, j], 'shape', toSchur(shapePair[i]![j]!, true));
+      if (i < own) for (let j = i + 1; j < own; j++) push([i, j], 'shape', toSchur(shapePair[i]![j]!, true));
     }
   }
   if (hasWord) {
@@ -131,7 +166,7 @@ export function tallyUnit(family: Family<unknown>, params: Readonly<Record<strin
     for (let d = 0; d < 2; d++) {
       for (let i = 0; i < S; i++) {
         push([i], combos[d]!, fromFundamental(n, wordSingle[d]![i]!, false));
-        for (let j = i + 1; j < S; j++) push([i, j], combos[d]!, fromFundamental(n, wordPair[d]![i]![j]!, true));
+        if (i < own) for (let j = i + 1; j < own; j++) push([i, j], combos[d]!, fromFundamental(n, wordPair[d]![i]![j]!, true));
       }
     }
   }
@@ -152,18 +187,16 @@ function sumOf(t: Tally): Poly {
 
 /** Σ q^stat F_mask -> Schur; undefined when the sum is not symmetric. */
 function fromFundamental(n: number, t: Tally, pair: boolean): Series | undefined {
-  const byMask = new Map<number, Map<number, bigint>>();
+  const byMask = new Map<number, CountMap>();
   for (const [key, c] of t) {
     const mask = key % WORD_BASE;
     const e = (key - mask) / WORD_BASE;
-    const m = byMask.get(mask) ?? new Map<number, bigint>();
-    m.set(pair ? e : packExponents(e, 0), BigInt(c));
+    const m = byMask.get(mask) ?? new Map<number, number>();
+    const k = pair ? e : packExponents(e, 0);
+    m.set(k, (m.get(k) ?? 0) + c);
     byMask.set(mask, m);
   }
-  try {
-    const f = fundamentalToSchur(n, new Map([...byMask].map(([mask, m]) => [mask, Poly.fromPackedMap(m)])));
-    return schurSeries([...f.schurTerms()].map(([l, c]) => [l, c.toPoly()] as const));
-  } catch {
-    return undefined;
-  }
+  const f = fundamentalToSchurFast(n, byMask);
+  if (!f) return undefined;
+  return schurSeries([...f].map(([l, m]) => [l, polyOf(m)] as const));
 }
