@@ -12,7 +12,7 @@ const validate = (params: Params): void => validateBySpec('dyck-paths', PARAMS, 
 export const dyckPaths: Family<DyckPath> = {
   id: 'dyck-paths',
   description: 'Dyck paths of semilength n (north and east steps, never below the diagonal)',
-  source: 'standard (Stanley, EC2 Ex. 6.19; Haglund, The q,t-Catalan numbers, ch. 1)',
+  source: 'standard (Stanley, EC2 ch. 6 exercises on Catalan numbers; Haglund, The q,t-Catalan numbers, ch. 1)',
   params: PARAMS,
   validate,
   *generate(params) {

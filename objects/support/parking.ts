@@ -46,7 +46,7 @@ export function parkingReadingWord(p: LabelledDyckPath): number[] {
  * A uniform parking function: n cars with random preferred spots on a circle of n+1
  * spots park (moving on when taken); rotating so that the empty spot comes last gives a
  * parking function, each one from exactly n+1 preference lists (Pollak's argument, as in
- * Stanley EC2 Ex. 5.49). Car c's preference j puts it in column j of the path.
+ * Stanley EC2 ch. 5 exercises — from memory; the contract tests check fairness). Car c's preference j puts it in column j of the path.
  */
 export function randomParkingFunction(n: number, random: () => number): LabelledDyckPath {
   const pref = Array.from({ length: n }, () => randomBelow(random, n + 1));

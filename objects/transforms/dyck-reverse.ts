@@ -7,7 +7,7 @@ export const dyckReverse: Transform<DyckPath, DyckPath> = {
   from: 'dyck-paths',
   to: 'dyck-paths',
   description: 'the path read backwards with north and east exchanged (reflection in the antidiagonal; keeps the area)',
-  source: 'common practice (Stanley, EC2 Ex. 6.19)',
+  source: 'common practice',
   examples: [
     [[1, 1, 0, 1, 0, 0], [1, 1, 0, 1, 0, 0]],
     [[1, 1, 0, 0, 1, 0], [1, 0, 1, 1, 0, 0]],

@@ -81,7 +81,7 @@ export const rskRecording: Transform<Permutation, Tableau> = {
   from: 'permutations',
   to: 'standard-tableaux',
   description: 'the recording tableau Q(w) of Robinson–Schensted row insertion (Q(w) = P(w⁻¹))',
-  source: 'Schensted (1961); Stanley, EC2 §7.11 and Thm. 7.13.1',
+  source: 'Schensted (1961); Stanley, EC2 §7.11 and §7.13',
   examples: [
     [[3, 1, 2], [[1, 3], [2]]],
     [[2, 4, 1, 3], [[1, 2], [3, 4]]],

@@ -1,7 +1,7 @@
 /**
  * Haglund's zeta map on Dyck paths: dinv(π) = area(ζ(π)) and area(π) = bounce(ζ(π))
  * (Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, AMS 2008,
- * Thm. 3.15 — from memory; both identities and bijectivity are checked in the tests).
+ * ch. 3 — from memory; both identities and bijectivity are checked in the tests).
  * Recipe: with the area sequence a of π, for v = 0, 1, …, max+1 scan a from left to right
  * writing a north step for each a_i = v and an east step for each a_i = v − 1.
  */
@@ -27,7 +27,7 @@ export const zeta: Transform<DyckPath, DyckPath> = {
   from: 'dyck-paths',
   to: 'dyck-paths',
   description: "Haglund's zeta map: carries (dinv, area) to (area, bounce)",
-  source: 'Haglund, The q,t-Catalan numbers and the space of diagonal harmonics (AMS 2008), Thm. 3.15',
+  source: 'Haglund, The q,t-Catalan numbers and the space of diagonal harmonics (AMS 2008), ch. 3',
   examples: [
     [[1, 0, 1, 0], [1, 1, 0, 0]],
     [[1, 1, 0, 0], [1, 0, 1, 0]],

@@ -87,7 +87,7 @@ describe('counts against outside references', () => {
       expect(both('standard-tableaux', { shape })).toEqual([f, f]);
     }
   });
-  it('standard tableaux of size n: the involutions of [n] (Stanley EC2 Cor. 7.13.9), by a(n) = a(n−1) + (n−1)a(n−2)', () => {
+  it('standard tableaux of size n: the involutions of [n] (Stanley EC2 §7.13, from memory), by a(n) = a(n−1) + (n−1)a(n−2)', () => {
     const inv = [1, 1];
     for (let n = 2; n <= 9; n++) inv.push(inv[n - 1]! + (n - 1) * inv[n - 2]!);
     for (let n = 0; n <= 9; n++) expect(both('standard-tableaux', { n })).toEqual([inv[n], inv[n]]);
