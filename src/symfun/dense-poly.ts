@@ -69,33 +69,60 @@ export function divideDense(a: DensePoly, f: Poly): DensePoly | null {
  * when a bound on every partial sum (Σ_k max|a_k| · Σ|b_k|) stays below 2^53, so that
  * every step is exact, and in BigInt otherwise.
  */
+interface Flat {
+  readonly i: Int32Array;
+  readonly j: Int32Array;
+  readonly c: readonly bigint[];
+  readonly cn: Float64Array;
+  readonly maxAbs: number;
+  readonly l1: number;
+}
+
+const flatCache = new WeakMap<Poly, Flat>();
+
+/** Terms of p as parallel arrays (cached: a cofactor meets every Schur coefficient). */
+function flatten(p: Poly): Flat {
+  let hit = flatCache.get(p);
+  if (!hit) {
+    const ts = [...p.terms()];
+    const cn = Float64Array.from(ts, (t) => Number(t[2]));
+    let maxAbs = 0;
+    let l1 = 0;
+    for (const v of cn) {
+      maxAbs = Math.max(maxAbs, Math.abs(v));
+      l1 += Math.abs(v);
+    }
+    hit = { i: Int32Array.from(ts, (t) => t[0]), j: Int32Array.from(ts, (t) => t[1]), c: ts.map((t) => t[2]), cn, maxAbs, l1 };
+    flatCache.set(p, hit);
+  }
+  return hit;
+}
+
 export function sumOfProducts(pairs: readonly (readonly [Poly, Poly])[]): DensePoly {
   let rows = 1;
   let cols = 1;
   let bound = 0;
   const live = pairs.filter(([a, b]) => !a.isZero() && !b.isZero());
   for (const [a, b] of live) {
-    rows = Math.max(rows, a.degQ() + b.degQ() + 1);
-    cols = Math.max(cols, a.degT() + b.degT() + 1);
-    let maxA = 0;
-    for (const [, , c] of a.terms()) maxA = Math.max(maxA, Math.abs(Number(c)));
-    let l1 = 0;
-    for (const [, , c] of b.terms()) l1 += Math.abs(Number(c));
-    bound += maxA * l1;
+    const fa = flatten(a);
+    const fb = flatten(b);
+    rows = Math.max(rows, Math.max(...fa.i) + Math.max(...fb.i) + 1);
+    cols = Math.max(cols, Math.max(...fa.j) + Math.max(...fb.j) + 1);
+    bound += fa.maxAbs * fb.l1;
   }
   const flat = (p: Poly) => {
-    const ts = [...p.terms()];
-    return { off: ts.map(([i, j]) => i * cols + j), c: ts.map(([, , v]) => v) };
+    const f = flatten(p);
+    return { off: Int32Array.from(f.i, (i, x) => i * cols + f.j[x]!), c: f.c, cn: f.cn };
   };
   if (bound < 2 ** 52) {
     const acc = new Float64Array(rows * cols);
     for (const [a, b] of live) {
       const fa = flat(a);
       const fb = flat(b);
-      const ca = fa.c.map(Number);
+      const ca = fa.cn;
       for (let y = 0; y < fb.off.length; y++) {
         const ob = fb.off[y]!;
-        const cb = Number(fb.c[y]!);
+        const cb = fb.cn[y]!;
         for (let x = 0; x < fa.off.length; x++) acc[fa.off[x]! + ob]! += ca[x]! * cb;
       }
     }
