@@ -44,6 +44,11 @@ for (let k = 1; k <= 10; k++) {
 }
 console.log(`ordered-set-partitions n=10, all k: ${total} objects in ${(totalMs / 1000).toFixed(2)} s (one core, no statistic)`);
 time('parking-functions n=8, generate', () => generateCount('parking-functions', { n: 8 }));
+time('parking-functions n=8, visit', () => {
+  let c = 0;
+  familyById('parking-functions').visit!({ n: 8 }, () => c++);
+  return c;
+});
 time('dyck-paths n=15, generate', () => generateCount('dyck-paths', { n: 15 }));
 time('set-partitions n=11, generate', () => generateCount('set-partitions', { n: 11 }));
 time('standard-tableaux n=12, generate', () => generateCount('standard-tableaux', { n: 12 }));
