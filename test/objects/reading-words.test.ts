@@ -47,6 +47,17 @@ describe('parking functions: reading word of the shuffle theorem', () => {
     }
     return out;
   }
+  it('n = 3: Σ q^dinv t^area F_iDes = ∇e_3 = s_3 + (q²+qt+t²+q+t) s_21 + C_3(q,t) s_111 (Haglund 2008 ch. 2–5, from memory; sizes 1 + 2·5 + 5 = 16 = 4² check it)', () => {
+    const f = familyById('parking-functions');
+    const m = new Map<string, Map<string, number>>();
+    for (const p of f.generate({ n: 3 })) {
+      const [area, dinv] = areaAndDinv(p as LabelledDyckPath);
+      addTerm(m, iDes(f.readingWord!(p)), dinv, area);
+    }
+    const s21 = { '2,0': 1, '1,1': 1, '0,2': 1, '1,0': 1, '0,1': 1 };
+    const plain = Object.fromEntries([...m].map(([k, v]) => [k, Object.fromEntries(v)]));
+    expect(plain).toEqual({ '': { '0,0': 1 }, '1': s21, '2': s21, '1,2': { '3,0': 1, '2,1': 1, '1,2': 1, '0,3': 1, '1,1': 1 } });
+  });
   it('word n…1 selects C_3(q,t) = q³ + q²t + qt² + t³ + qt (MATH.md §3)', () => {
     expect(Object.fromEntries(catalanPart(3))).toEqual({ '3,0': 1, '2,1': 1, '1,2': 1, '0,3': 1, '1,1': 1 });
   });
