@@ -7,7 +7,8 @@
  * or the coefficient of s_(1^n) (sign, = ⟨F, e_n⟩) or of s_(n) (trivial, = ⟨F, h_n⟩).
  */
 import { InputError } from '../core/errors.js';
-import { hilbertOfSchur, keyToPartition, schurCoefficient, type Series } from './series.js';
+import { Poly } from '../core/poly.js';
+import { hilbertOfSchur, keyToPartition, qtSeries, schurCoefficient, schurSeries, type Series } from './series.js';
 import { seriesFromJson } from './seriesJson.js';
 
 export const TAKE_CHOICES = ['auto', 'frobenius', 'hilbert', 'sign', 'trivial'] as const;
@@ -38,6 +39,18 @@ export function seriesFromDocument(doc: unknown, take: Take, where: string): Ser
     else graded = s;
   }
   if (frob && frob.kind !== 'schur') frob = undefined;
+  const den = o['denominator'];
+  if (den !== undefined && den !== 1) {
+    throw new InputError(`${where}: the coefficients are not integral (denominator ${String(den)}); search needs integer series`, 'from');
+  }
+  // a scalar (degree 0, e.g. an inner product) is a q,t series
+  if (frob && frob.kind === 'schur' && [...frob.terms.keys()].every((key) => key === '')) {
+    graded = qtSeries(frob.terms.get('') ?? Poly.zero);
+    frob = undefined;
+  }
+  // an axis held at one degree (the θ-degree of a closure under x alone) carries no information
+  if (graded) graded = dropConstantT(graded);
+  if (frob) frob = dropConstantT(frob);
   switch (take) {
     case 'auto':
     case 'frobenius':
@@ -62,4 +75,18 @@ function degreeOf(s: Series): number {
   if (s.kind !== 'schur') return 0;
   for (const k of s.terms.keys()) return keyToPartition(k).reduce((a, b) => a + b, 0);
   return 0;
+}
+
+/** Divide out t^j when every term of the series has the same t-degree j > 0. */
+export function dropConstantT(s: Series): Series {
+  const polys = s.kind === 'schur' ? [...s.terms.values()] : s.kind === 'q' || s.kind === 'qt' ? [s.poly] : [];
+  const ts = new Set<number>();
+  for (const p of polys) for (const [, j] of p.terms()) ts.add(j);
+  if (ts.size !== 1) return s;
+  const j = [...ts][0]!;
+  if (j === 0) return s;
+  const down = (p: Poly) => Poly.fromTerms([...p.terms()].map(([a, b, c]) => [a, b - j, c] as const));
+  if (s.kind === 'schur') return schurSeries([...s.terms].map(([l, c]) => [l, down(c)] as const));
+  if (s.kind === 'q' || s.kind === 'qt') return qtSeries(down(s.poly));
+  return s;
 }

@@ -47,9 +47,10 @@ export function byPartitionKey(a: readonly [string, unknown], b: readonly [strin
   return 0;
 }
 
+/** Equality of series; a q,t series without t equals the same q-series. */
 export function seriesEquals(a: Series, b: Series): boolean {
-  if (a.kind !== b.kind) return false;
   if ((a.kind === 'q' || a.kind === 'qt') && (b.kind === 'q' || b.kind === 'qt')) return a.poly.equals(b.poly);
+  if (a.kind !== b.kind) return false;
   if (a.kind === 'schur' && b.kind === 'schur') {
     if (a.terms.size !== b.terms.size) return false;
     for (const [k, c] of a.terms) if (!b.terms.get(k)?.equals(c)) return false;
