@@ -3,7 +3,9 @@ import { conjugate, dominates, partitionKey, partitionList } from '../../src/cor
 import { Poly } from '../../src/core/poly.js';
 import { PolyQ } from '../../src/core/polyq.js';
 import { bigW } from '../../src/symfun/cell-data.js';
+import { frac } from '../../src/core/rational.js';
 import { modifiedMacdonald } from '../../src/symfun/macdonald.js';
+import { macdonaldByTriangularity } from '../../src/symfun/macdonald-triangular.js';
 import { starScalar } from '../../src/symfun/operators.js';
 import { plethysmTimes } from '../../src/symfun/plethysm.js';
 import { SymFun, keyToPartition } from '../../src/symfun/symfun.js';
@@ -57,5 +59,22 @@ describe('modified Macdonald polynomials by the filling formula', () => {
           expect(v.equals(partitionKey(a) === partitionKey(b) ? PolyQ.of(bigW(b)) : PolyQ.zero)).toBe(true);
         }
     }
+  });
+});
+
+describe('the triangularity route (solving, not checking; Haiman\'s characterisation, MATH.md §3)', () => {
+  it('the system has a unique solution equal to the filling formula at sample points, n ≤ 5', () => {
+    const points = [
+      [frac(2n), frac(-3n)],
+      [frac(1n, 3n), frac(5n, 2n)],
+    ] as const;
+    for (let n = 1; n <= 5; n++)
+      for (const mu of partitionList(n))
+        for (const [q0, t0] of points) {
+          const solved = macdonaldByTriangularity(mu, q0, t0);
+          expect(solved, partitionKey(mu)).not.toBeNull();
+          const h = modifiedMacdonald(mu);
+          partitionList(n).forEach((l, i) => expect(h.coeff(l).evaluate(q0, t0).equals(solved![i]!), `${partitionKey(mu)} at ${partitionKey(l)}`).toBe(true));
+        }
   });
 });
