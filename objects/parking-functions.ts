@@ -2,11 +2,12 @@
  * Parking functions of size n as labelled Dyck paths: for each Dyck path (lexicographic),
  * every way to put cars 1..n on its north steps increasing up each column. Car c lies in
  * column j exactly when c prefers spot j (0-based): the classical bijection.
- * Fast path: `visit` reuses the path and label buffers; shards take Dyck paths round-robin.
+ * Fast path: `visit` reuses the path and label buffers; shards take whole Dyck paths, balanced by their numbers of labellings.
  */
 import type { Family, ParamSpec, Params } from '../src/enumerate/plugin.js';
 import { nextPermutationFrom } from './permutations.js';
 import { drawDyckPath, firstDyckPath, nextDyckPath } from './support/dyck.js';
+import { multinomial } from './support/numbers.js';
 import { intParam, validateBySpec } from './support/params.js';
 import { shardParts } from './support/shards.js';
 import { labelRuns, northRuns, parkingReadingWord, randomParkingFunction } from './support/parking.js';
@@ -36,6 +37,27 @@ export function* labellings(path: DyckPath): Generator<number[]> {
   } while (nextPermutationFrom(runOf, 0));
 }
 
+/**
+ * Which shard takes each Dyck path (in generation order): paths weighted by their number
+ * of labellings, largest first, each to the least loaded shard — the same plan everywhere.
+ */
+function pathOwners(n: number, count: number): Uint16Array {
+  const weights: number[] = [];
+  const path = firstDyckPath(n);
+  do weights.push(Number(multinomial(northRuns(path))));
+  while (nextDyckPath(path));
+  const order = weights.map((_, i) => i).sort((a, b) => weights[b]! - weights[a]! || a - b);
+  const load = new Array<number>(count).fill(0);
+  const owner = new Uint16Array(weights.length);
+  for (const i of order) {
+    let target = 0;
+    for (let s = 1; s < count; s++) if (load[s]! < load[target]!) target = s;
+    load[target]! += weights[i]!;
+    owner[i] = target;
+  }
+  return owner;
+}
+
 export const parkingFunctions: Family<LabelledDyckPath> = {
   id: 'parking-functions',
   description: 'parking functions of size n, as Dyck paths with cars 1..n increasing up each column',
@@ -53,10 +75,12 @@ export const parkingFunctions: Family<LabelledDyckPath> = {
   visit(params, f, shard) {
     validate(params);
     const [index, count] = shardParts(shard);
-    const path = firstDyckPath(intParam(params, 'n'));
+    const n = intParam(params, 'n');
+    const owner = count === 1 ? undefined : pathOwners(n, count);
+    const path = firstDyckPath(n);
     let j = 0;
     do {
-      if (j++ % count !== index) continue;
+      if (owner && owner[j++] !== index) continue;
       const obj = { path, labels: [] as number[] };
       for (const labels of labellings(path)) {
         obj.labels = labels;

@@ -1,7 +1,7 @@
 /**
  * Permutations of [n] in one-line notation, in lexicographic order.
  * Fast path: `visit` steps one buffer with nextPermutationFrom (no allocation per object);
- * shards split by the first two letters, dealt round-robin (n(n−1) nearly equal parts).
+ * shards split by the first three letters (visitRearrangements).
  */
 import { factorial } from '../src/core/integers.js';
 import type { Family, ParamSpec, Params } from '../src/enumerate/plugin.js';
