@@ -32,4 +32,10 @@ describe('gradus sym (child process)', () => {
     expect(bad.code).toBe(2);
     expect(bad.stderr).toMatch(/--basis must be one of s, m, e, h, p/);
   }, 30_000);
+  it('--help documents the grammar and the functions', { timeout: 30_000 }, () => {
+    const r = runCli(['sym', '--help']);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('expression  := term');
+    for (const f of ['deltaprime(f, F)', 'nabla(F)', 'subs(F, t=0)', 'H(2,1)', 'omega(F)']) expect(r.stdout).toContain(f);
+  });
 });

@@ -22,7 +22,7 @@ export const symCommand: CommandSpec = {
     {
       name: 'max-degree',
       type: 'int',
-      description: `largest degree for nabla, delta, deltaprime (default ${DEFAULT_MAX_DEGREE}, about 5 s a call there; cost grows faster than n!)`,
+      description: `largest degree for nabla, delta, deltaprime (default ${DEFAULT_MAX_DEGREE}, about 2 s a call there; cost grows faster than n!)`,
       placeholder: 'N',
       min: 0,
       max: MACDONALD_MAX_N,
