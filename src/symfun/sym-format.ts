@@ -22,11 +22,14 @@ export function formatText(f: SymFun, basis: Basis): string {
       neg = true;
       coeff = c.neg();
     }
+    // a single term needs no parentheses: 3*q*s(2), q/2*s(2); a sum does: (q + t)/2*s(2)
+    const single = isSingleTerm(coeff);
+    const numText = single ? coeff.num.toString() : `(${coeff.num.toString()})`;
+    const scalar = coeff.den === 1n ? numText : `${numText}/${coeff.den}`;
     let body: string;
-    if (b === '') body = isSingleTerm(coeff) || idx === 0 ? coeff.toString() : `(${coeff.toString()})`;
+    if (b === '') body = single || idx === 0 ? scalar : `(${scalar})`;
     else if (coeff.equals(PolyQ.one)) body = b;
-    else if (isSingleTerm(coeff) && coeff.isIntegral()) body = `${coeff.toString()}*${b}`;
-    else body = `(${coeff.num.toString()})${coeff.den === 1n ? '' : `/${coeff.den}`}*${b}`;
+    else body = `${scalar}*${b}`;
     if (idx === 0) out = (neg ? '-' : '') + body;
     else out += (neg ? ' - ' : ' + ') + body;
   });
