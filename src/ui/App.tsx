@@ -3,7 +3,8 @@
  * keys of the current screen. Every screen stays mounted (hidden ones keep their state and
  * any running work); only the current one receives keys.
  */
-import { Box, Text, useApp, useInput, useStdout } from 'ink';
+import { Box, Text, useApp, useStdout } from 'ink';
+import { useKeys } from './hooks.js';
 import { useCallback, useEffect, useMemo, useState, type ReactElement } from 'react';
 import { ErrorBoundary } from './components/ErrorBoundary.js';
 import { HelpLine } from './components/HelpLine.js';
@@ -85,7 +86,7 @@ export function App(props: AppProps) {
   const setCurrent = useCallback((id: number) => setSession((s) => ({ ...s, current: id })), []);
   const notify = useCallback((text: string, kind: 'info' | 'error' = 'info') => setStatus({ text, kind }), []);
 
-  useInput((input, key) => {
+  useKeys((input, key) => {
     if (key.tab) {
       // Functional update: keys typed faster than a redraw still move one screen each.
       setEditing(false);
@@ -101,7 +102,7 @@ export function App(props: AppProps) {
     if (input === '?') return go(screen === 'help' ? 'tour' : 'help');
     const target = SCREENS.find((s) => s.jump === input);
     if (target) go(target.id);
-  });
+  }, true);
 
   // One line each for the tab bar, status and help line; one spare so the frame never
   // fills the terminal (a full frame makes ink clear the screen on every redraw).

@@ -1,5 +1,6 @@
 /** Small shared hooks. */
-import { useEffect, useState } from 'react';
+import { useInput, type Key } from 'ink';
+import { useCallback, useEffect, useRef, useState } from 'react';
 
 /** Re-render every `ms` while `on` (a clock for elapsed times and estimates). */
 export function useTicker(on: boolean, ms = 250): number {
@@ -10,4 +11,18 @@ export function useTicker(on: boolean, ms = 250): number {
     return () => clearInterval(id);
   }, [on, ms]);
   return now;
+}
+
+/**
+ * useInput whose handler and active flag are always those of the latest render. ink
+ * re-subscribes a changed handler (or active flag) only after React's effects run, so a
+ * key arriving just after a redraw would otherwise meet the previous render's state.
+ */
+export function useKeys(handler: (input: string, key: Key) => void, isActive: boolean): void {
+  const latest = useRef({ handler, isActive });
+  latest.current = { handler, isActive };
+  const stable = useCallback((input: string, key: Key) => {
+    if (latest.current.isActive) latest.current.handler(input, key);
+  }, []);
+  useInput(stable);
 }

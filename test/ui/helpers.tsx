@@ -26,13 +26,16 @@ export function frame(r: Rendered): string {
   return r.lastFrame() ?? '';
 }
 
-/** Type keys one at a time, letting ink handle each (input is processed asynchronously). */
+/**
+ * Type keys one at a time, as a quick typist would: ink handles input asynchronously,
+ * re-subscribes key handlers after each render and draws at most 30 frames a second.
+ */
 export async function press(r: Rendered, ...keys: string[]): Promise<void> {
   for (const k of keys) {
     r.stdin.write(k);
-    await sleep(15);
+    await sleep(40);
   }
-  await sleep(20);
+  await sleep(40);
 }
 
 /** Wait until the frame satisfies `ok` (engine work runs in a worker), or fail with the frame. */

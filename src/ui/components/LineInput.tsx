@@ -3,8 +3,9 @@
  * deletes, Enter submits, Esc leaves. Drawn with a visible cursor mark so it reads the
  * same with and without colour.
  */
-import { Text, useInput } from 'ink';
+import { Text } from 'ink';
 import { useRef, useState } from 'react';
+import { useKeys } from '../hooks.js';
 import { useTheme } from '../ThemeContext.js';
 
 export interface LineInputProps {
@@ -37,7 +38,7 @@ export function LineInput(props: LineInputProps) {
     live.current.value = v;
     props.onChange(v);
   };
-  useInput(
+  useKeys(
     (input, key) => {
       const v = live.current.value;
       const pos = Math.min(live.current.cursor, v.length);
@@ -64,7 +65,7 @@ export function LineInput(props: LineInputProps) {
       setCursor(pos + clean.length);
       change(v.slice(0, pos) + clean + v.slice(pos));
     },
-    { isActive: props.active },
+    props.active,
   );
   const room = Math.max(8, props.width - props.label.length - 3);
   // Keep the cursor in view when the text is longer than the field.

@@ -1,10 +1,11 @@
 /** Export: choose a result and a format, write the file, see where it went. */
-import { Box, Text, useInput } from 'ink';
+import { Box, Text } from 'ink';
 import { isAbsolute, resolve } from 'node:path';
 import { useState } from 'react';
 import { LineInput } from '../components/LineInput.js';
 import { defaultFileName, EXPORT_ENGINE_AVAILABLE, EXPORT_FORMATS, exportable, exportItem, type ExportDone } from '../engines/exporter.js';
 import { errorText } from '../errorText.js';
+import { useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
 import { useTheme } from '../ThemeContext.js';
 import { useEditField } from '../useEditField.js';
@@ -36,7 +37,7 @@ export function ExportScreen(props: ScreenProps) {
     }
   };
 
-  useInput(
+  useKeys(
     (input, key) => {
       if (key.upArrow) setSel((s) => Math.max(0, s - 1));
       if (key.downArrow) setSel((s) => Math.min(Math.max(0, items.length - 1), s + 1));
@@ -49,7 +50,7 @@ export function ExportScreen(props: ScreenProps) {
         setField('name');
       }
     },
-    { isActive: props.active && field === undefined },
+    props.active && field === undefined,
   );
 
   const listH = Math.max(2, props.height - 7);

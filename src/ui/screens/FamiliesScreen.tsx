@@ -2,7 +2,7 @@
  * Families: pick a family and its parameters; a scrolling list of its objects drawn by the
  * family's renderer, with the values of the chosen statistics beside each.
  */
-import { Box, Text, useInput } from 'ink';
+import { Box, Text } from 'ink';
 import { useMemo, useRef, useState } from 'react';
 import type { Family, Params, Statistic } from '../../enumerate/plugin.js';
 import { LineInput } from '../components/LineInput.js';
@@ -10,6 +10,7 @@ import { Unavailable } from '../components/Unavailable.js';
 import { defaultParams, loadCatalog, statisticsOf } from '../engines/catalog.js';
 import { paramsToText, parseParamsText } from '../engines/paramsText.js';
 import { errorText } from '../errorText.js';
+import { useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
 import { useTheme } from '../ThemeContext.js';
 import { useEditField } from '../useEditField.js';
@@ -97,7 +98,7 @@ function FamiliesView(props: ScreenProps & { families: readonly Family<unknown>[
     setChosen({ ...chosen, [family.id]: ids });
   };
 
-  useInput(
+  useKeys(
     (input, k) => {
       if (k.leftArrow || k.rightArrow) {
         setFi((fi + (k.leftArrow ? props.families.length - 1 : 1)) % props.families.length);
@@ -113,7 +114,7 @@ function FamiliesView(props: ScreenProps & { families: readonly Family<unknown>[
       else if (input === 'a') cycleStat(0);
       else if (input === 'd') setChosen({ ...chosen, [family.id]: chosenIds.slice(0, -1) });
     },
-    { isActive: props.active && field === undefined },
+    props.active && field === undefined,
   );
 
   const submitParams = (text: string) => {

@@ -1,7 +1,8 @@
 /** Every key of every screen, scrollable. */
-import { Box, Text, useInput } from 'ink';
+import { Box, Text } from 'ink';
 import { useState } from 'react';
 import { GLOBAL_KEYS, SCREENS } from '../screens.js';
+import { useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
 import { useTheme } from '../ThemeContext.js';
 
@@ -22,12 +23,12 @@ export function HelpScreen(props: ScreenProps) {
   const lines = helpLines();
   const room = props.height;
   const maxOff = Math.max(0, lines.length - room);
-  useInput(
+  useKeys(
     (_input, key) => {
       if (key.downArrow || key.pageDown) setOffset((o) => Math.min(maxOff, o + (key.pageDown ? room : 1)));
       if (key.upArrow || key.pageUp) setOffset((o) => Math.max(0, o - (key.pageUp ? room : 1)));
     },
-    { isActive: props.active },
+    props.active,
   );
   const keyW = Math.max(...lines.map((l) => l.key?.length ?? 0)) + 2;
   return (

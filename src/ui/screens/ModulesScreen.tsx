@@ -4,7 +4,7 @@
  * Hilbert table as a shaded grid, the Frobenius series of the selected cell, and the
  * findings.
  */
-import { Box, Text, useInput } from 'ink';
+import { Box, Text } from 'ink';
 import { useState } from 'react';
 import { Poly } from '../../core/poly.js';
 import { qSeries, qtSeries, type Series } from '../../series/series.js';
@@ -14,7 +14,7 @@ import { ProgressBar } from '../components/ProgressBar.js';
 import { ShadedGrid } from '../components/ShadedGrid.js';
 import { DEFAULT_MODULE_REQUEST, MODULE_ENGINE_AVAILABLE, startModule } from '../engines/modules.js';
 import { cellsAt, tableOf, type ModuleOutcome } from '../engines/moduleTypes.js';
-import { useTicker } from '../hooks.js';
+import { useTicker, useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
 import { useTheme } from '../ThemeContext.js';
 import { useEditField } from '../useEditField.js';
@@ -61,7 +61,7 @@ export function ModulesScreen(props: ScreenProps) {
     props.go('search');
   };
 
-  useInput(
+  useKeys(
     (input, key) => {
       if (key.return) return compute(request);
       if (input === 'e') {
@@ -85,7 +85,7 @@ export function ModulesScreen(props: ScreenProps) {
       if (key.leftArrow) setSel(([r, c]) => [r, Math.max(0, c - 1)]);
       if (key.rightArrow) setSel(([r, c]) => [r, Math.min(cols - 1, c + 1)]);
     },
-    { isActive: props.active && field === undefined },
+    props.active && field === undefined,
   );
 
   const st = job.state;

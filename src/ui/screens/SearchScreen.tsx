@@ -3,7 +3,7 @@
  * coefficients), run the search in a worker, and browse the candidates with their
  * verified range and formula.
  */
-import { Box, Text, useInput } from 'ink';
+import { Box, Text } from 'ink';
 import { useState } from 'react';
 import { parseCoeffs } from '../../series/parseCoeffs.js';
 import { LineInput } from '../components/LineInput.js';
@@ -13,7 +13,7 @@ import { APP_CATALOGUE_N_MAX, SEARCH_ENGINE_AVAILABLE, startCatalogueBuild, star
 import type { SearchOutcome } from '../engines/searchTypes.js';
 import { targetLines } from '../engines/seriesText.js';
 import { errorText } from '../errorText.js';
-import { useTicker } from '../hooks.js';
+import { useTicker, useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
 import { currentItem } from '../session.js';
 import { useTheme } from '../ThemeContext.js';
@@ -46,7 +46,7 @@ export function SearchScreen(props: ScreenProps) {
     );
   };
 
-  useInput(
+  useKeys(
     (input, key) => {
       if (key.return) return run();
       if (input === 'e') return setField('coeffs');
@@ -71,7 +71,7 @@ export function SearchScreen(props: ScreenProps) {
       if (key.downArrow) setSel((s) => Math.min(Math.max(0, n - 1), s + 1));
       if (key.upArrow) setSel((s) => Math.max(0, s - 1));
     },
-    { isActive: props.active && field === undefined },
+    props.active && field === undefined,
   );
 
   const submitCoeffs = (text: string) => {
@@ -131,7 +131,7 @@ export function SearchScreen(props: ScreenProps) {
       ) : st.status === 'running' ? (
         <ProgressBar state={{ label: st.progress?.label ?? 'searching', done: st.progress?.done ?? 0, total: st.progress?.total, elapsedMs: now - st.startedAt }} width={w} />
       ) : st.status === 'error' ? (
-        <Text wrap="truncate" {...theme.style('error')}>
+        <Text wrap="wrap" {...theme.style('error')}>
           ✗ {st.error}
         </Text>
       ) : st.status === 'cancelled' ? (

@@ -2,7 +2,7 @@
  * Statistics: for a family and size, the distribution of one statistic as a bar chart, or
  * the joint distribution of two as a shaded table; flags, definitions and sources.
  */
-import { Box, Text, useInput } from 'ink';
+import { Box, Text } from 'ink';
 import { useEffect, useMemo, useState } from 'react';
 import type { Poly } from '../../core/poly.js';
 import type { Family, Params, Statistic } from '../../enumerate/plugin.js';
@@ -16,7 +16,7 @@ import { Unavailable } from '../components/Unavailable.js';
 import { defaultParams, loadCatalog, statisticsOf } from '../engines/catalog.js';
 import { DISTRIBUTION_ENGINE_AVAILABLE, startDistribution, type DistView } from '../engines/distribution.js';
 import { ProgressBar } from '../components/ProgressBar.js';
-import { useTicker } from '../hooks.js';
+import { useTicker, useKeys } from '../hooks.js';
 import { useJob } from '../useJob.js';
 import { bumpSize, paramsToText, parseParamsText } from '../engines/paramsText.js';
 import { errorText } from '../errorText.js';
@@ -88,7 +88,7 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
     setOffset(0);
   };
 
-  useInput(
+  useKeys(
     (input, key) => {
       if (key.leftArrow || key.rightArrow) {
         setFi((fi + (key.leftArrow ? props.families.length - 1 : 1)) % props.families.length);
@@ -123,7 +123,7 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
       else if (input === ']') setOffset((o) => o + 1);
       else if (input === '[') setOffset((o) => Math.max(0, o - 1));
     },
-    { isActive: props.active && field === undefined },
+    props.active && field === undefined,
   );
 
   const submit = (text: string) => {

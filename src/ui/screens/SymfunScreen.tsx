@@ -2,13 +2,14 @@
  * Symmetric functions: type an expression of the `gradus sym` language, see the result in
  * the Schur basis; a parse error is pointed at its column under the expression.
  */
-import { Box, Text, useInput } from 'ink';
+import { Box, Text } from 'ink';
 import { useState } from 'react';
 import { seriesFromJson } from '../../series/seriesJson.js';
 import { makeTarget } from '../../series/target.js';
 import { LineInput } from '../components/LineInput.js';
 import { errorColumn, startSym, SYMFUN_ENGINE_AVAILABLE, type SymOutcome } from '../engines/symfun.js';
 import { errorText } from '../errorText.js';
+import { useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
 import { useTheme } from '../ThemeContext.js';
 import { useEditField } from '../useEditField.js';
@@ -47,7 +48,7 @@ export function SymfunScreen(props: ScreenProps) {
     }
   };
 
-  useInput(
+  useKeys(
     (input, key) => {
       if (key.return) return evaluate(expr);
       if (input === 'e') return setField('expr');
@@ -56,7 +57,7 @@ export function SymfunScreen(props: ScreenProps) {
       if (key.downArrow) setOffset((o) => o + 1);
       if (key.upArrow) setOffset((o) => Math.max(0, o - 1));
     },
-    { isActive: props.active && field === undefined },
+    props.active && field === undefined,
   );
 
   const st = job.state;

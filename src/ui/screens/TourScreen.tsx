@@ -3,7 +3,7 @@
  * the search, and an export. Each step runs the engines live (in a worker, with progress
  * and cancel) and hands its result to the other screens.
  */
-import { Box, Text, useInput } from 'ink';
+import { Box, Text } from 'ink';
 import { useRef, useState } from 'react';
 import { ProgressBar } from '../components/ProgressBar.js';
 import { ShadedGrid } from '../components/ShadedGrid.js';
@@ -12,7 +12,7 @@ import { DEMO_STEPS, type DemoState } from '../demo/demoSession.js';
 import { DEMO_SHOWN_N } from '../demo/demoSeed.js';
 import { tableOf } from '../engines/moduleTypes.js';
 import { JobCancelled, type Job, type JobProgress } from '../engines/workerJob.js';
-import { useTicker } from '../hooks.js';
+import { useTicker, useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
 import { useTheme } from '../ThemeContext.js';
 import { jobErrorText } from '../useJob.js';
@@ -84,7 +84,7 @@ export function TourScreen(props: ScreenProps) {
     setError(undefined);
   };
 
-  useInput(
+  useKeys(
     (input, key) => {
       if (key.return) return next();
       if (input === 'x' && run) return current.current?.cancel();
@@ -92,7 +92,7 @@ export function TourScreen(props: ScreenProps) {
       if (key.leftArrow) setView((v) => Math.max(0, v - 1));
       if (key.rightArrow) setView((v) => Math.min(Math.max(0, done - 1), v + 1));
     },
-    { isActive: props.active },
+    props.active,
   );
 
   const w = props.width;
