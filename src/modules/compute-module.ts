@@ -10,7 +10,8 @@ import { toBigIntExact } from '../core/rational.js';
 import { VERSION } from '../version.js';
 import { moduleChecks } from './checks.js';
 import { primeCoeffs, rationalCoeffs } from './coefficients.js';
-import { derivativeClosure } from './derivative-closure.js';
+import { cellsFromRanks, derivativeRanks } from './derivative-closure.js';
+import { integerSeedSupport } from './integer-seed.js';
 import { exactClosure } from './exact-closure.js';
 import { iteratedClosure } from './iterated-closure.js';
 import type { ModuleCell } from './module-cell.js';
@@ -84,15 +85,26 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
     field = 'Q';
     methodText = 'closure over Q in reduced echelon form; characters by traces on the echelon basis';
   } else {
+    const dops = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
+    const chiOf = (c: string): -1 | 0 | 1 => (c === 'sign' ? -1 : c === 'trivial' ? 1 : 0);
+    const hooks = { onProgress: options.onProgress, signal: options.signal };
+    const cache = new Map<number, readonly ModuleCell[]>();
+    const exactSeed = method === 'young' ? integerSeedSupport(probeSupport, terms) : undefined;
+    if (exactSeed) notes.push('matrix entries are exact integers below 2^53: one enumeration serves both primes');
     const run = (p: number): readonly ModuleCell[] => {
+      const hit = cache.get(p);
+      if (hit) return hit;
       const sp = p === p1 ? probe : buildSeedPolynomial(spec.n, terms, primeCoeffs(p), needs);
-      const chi = sp.character === 'sign' ? -1 : sp.character === 'trivial' ? 1 : 0;
+      const chi = chiOf(sp.character);
       if (method === 'young') {
+        if (exactSeed && (p === p1 || p === p2)) {
+          const ranks = derivativeRanks(exactSeed, dops, chi, [p1, p2], 0, hooks);
+          cache.set(p1, cellsFromRanks(exactSeed, dops, chi, ranks[0]!));
+          cache.set(p2, cellsFromRanks(exactSeed, dops, chi, ranks[1]!));
+          return cache.get(p)!;
+        }
         const support = p === p1 ? probeSupport : seedSupport(sp.alg.space, p, sp.f);
-        return derivativeClosure(support, { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') }, chi, {
-          onProgress: options.onProgress,
-          signal: options.signal,
-        });
+        return cellsFromRanks(support, dops, chi, derivativeRanks(support, dops, chi, [p], p, hooks)[0]!);
       }
       return iteratedClosure(sp.alg, sp.f, probeSupport.degree, ops, { frobenius: chi !== 0, p, onProgress: options.onProgress, signal: options.signal });
     };

@@ -2,13 +2,15 @@
  * Derivative closures (operators ∂x, ∂y, ∂θ only): every graded piece is the image of the
  * map g ↦ g(∂)f; its Frobenius multiplicities come from Young-subgroup ranks (young-plan),
  * its dimension as Σ_λ f^λ m_λ. For a seed that is neither symmetric nor antisymmetric only
- * the plain rank (no symmetry reduction, no Frobenius series) is computed.
+ * the plain rank (no symmetry reduction, no Frobenius series) is computed. One enumeration
+ * of the matrices serves every prime when the entries are exact integers below 2^53.
  */
 import { fLambda, partitionList } from '../core/partitions.js';
-import { derivativeCellRank, type SeedChi } from './derivative-rank.js';
+import { EchelonModP } from './echelon-mod-p.js';
+import { derivativeMatrices, type CellMatrix, type SeedChi } from './derivative-matrices.js';
 import type { ModuleCell } from './module-cell.js';
 import type { SeedSupport } from './seed-support.js';
-import { solveMultiplicities, youngPlan } from './young-plan.js';
+import { solveMultiplicities, youngPlan, type YoungTask } from './young-plan.js';
 
 export interface DerivativeOps {
   readonly x: boolean;
@@ -21,38 +23,86 @@ export interface ClosureHooks {
   readonly signal?: AbortSignal;
 }
 
-export function derivativeClosure(seed: SeedSupport, ops: DerivativeOps, chi: SeedChi, hooks: ClosureHooks = {}): ModuleCell[] {
+export function closurePlan(n: number, chi: SeedChi): readonly YoungTask[] {
+  return chi === 0 ? [{ lambda: [], blocks: new Array<number>(n).fill(1), mode: 'sym' }] : youngPlan(n);
+}
+
+/**
+ * Ranks of every cell for every task, one array per prime: ranks[prime][task][cell].
+ * `seed` holds exact integers (modulus 0) or residues mod the single prime given.
+ */
+export function derivativeRanks(
+  seed: SeedSupport,
+  ops: DerivativeOps,
+  chi: SeedChi,
+  primes: readonly number[],
+  modulus: number,
+  hooks: ClosureHooks = {},
+  tasks?: readonly number[],
+): number[][][] {
   const n = seed.space.n;
   const [Dx, Dy, Dt] = seed.degree;
-  const aMax = ops.x ? Dx : 0;
-  const bMax = ops.y ? Dy : 0;
-  const cMax = ops.theta ? Dt : 0;
-  const plan = chi === 0 ? [{ lambda: [] as number[], blocks: new Array<number>(n).fill(1), mode: 'sym' as const }] : youngPlan(n);
-  const shapes = partitionList(n);
-  const fl = shapes.map((l) => Number(fLambda(l)));
-  const total = (aMax + 1) * (bMax + 1) * (cMax + 1) * plan.length;
+  const range = { x: ops.x ? Dx : 0, y: ops.y ? Dy : 0, theta: ops.theta ? Dt : 0 };
+  const plan = closurePlan(n, chi);
+  const which = tasks ?? plan.map((_, i) => i);
+  const out = primes.map(() => plan.map(() => [] as number[]));
   let done = 0;
+  for (const ti of which) {
+    hooks.signal?.throwIfAborted();
+    const mats = derivativeMatrices(seed, range, plan[ti]!, chi, modulus);
+    primes.forEach((p, pi) => {
+      out[pi]![ti] = mats.map((m) => matrixRank(m, p));
+    });
+    done++;
+    hooks.onProgress?.(done, which.length, `task ${plan[ti]!.blocks.join(',')} ${plan[ti]!.mode}`);
+  }
+  return out;
+}
+
+/** Cells from the ranks of one prime. */
+export function cellsFromRanks(seed: SeedSupport, ops: DerivativeOps, chi: SeedChi, ranks: readonly (readonly number[])[]): ModuleCell[] {
+  const n = seed.space.n;
+  const [Dx, Dy, Dt] = seed.degree;
+  const plan = closurePlan(n, chi);
+  const fl = partitionList(n).map((l) => Number(fLambda(l)));
   const cells: ModuleCell[] = [];
-  for (let a = 0; a <= aMax; a++) {
-    for (let b = 0; b <= bMax; b++) {
-      for (let c = 0; c <= cMax; c++) {
-        const values: number[] = [];
-        for (const task of plan) {
-          hooks.signal?.throwIfAborted();
-          values.push(derivativeCellRank(seed, [a, b, c], task, chi).rank);
-          done++;
-          hooks.onProgress?.(done, total, `degree ${Dx - a}/${Dy - b}/${Dt - c}`);
-        }
+  let idx = 0;
+  for (let a = 0; a <= (ops.x ? Dx : 0); a++)
+    for (let b = 0; b <= (ops.y ? Dy : 0); b++)
+      for (let c = 0; c <= (ops.theta ? Dt : 0); c++, idx++) {
         const degree: [number, number, number] = [Dx - a, Dy - b, Dt - c];
+        const values = plan.map((_, ti) => ranks[ti]![idx]!);
         if (chi === 0) {
           cells.push({ degree, dim: values[0]! });
           continue;
         }
         const mult = solveMultiplicities(n, plan, values);
-        const dim = mult.reduce((s, m, i) => s + m * fl[i]!, 0);
-        cells.push({ degree, dim, multiplicities: mult });
+        cells.push({ degree, dim: mult.reduce((s, m, i) => s + m * fl[i]!, 0), multiplicities: mult });
       }
-    }
-  }
   return cells;
+}
+
+/** Rank mod p of one cell matrix, sparse rows first, stopping at full column rank. */
+export function matrixRank(m: CellMatrix, p: number): number {
+  const nRows = m.rows;
+  const nCols = m.cols;
+  if (nRows === 0 || nCols === 0) return 0;
+  const start = new Int32Array(nRows + 1);
+  for (let e = 0; e < m.len; e++) start[m.r[e]! + 1]!++;
+  for (let r = 0; r < nRows; r++) start[r + 1]! += start[r]!;
+  const fill = start.slice(0, nRows);
+  const cols = new Int32Array(m.len);
+  const vals = new Float64Array(m.len);
+  for (let e = 0; e < m.len; e++) {
+    const at = fill[m.r[e]!]!++;
+    cols[at] = m.c[e]!;
+    vals[at] = m.v[e]!;
+  }
+  const order = Array.from({ length: nRows }, (_, r) => r).sort((a, b) => start[a + 1]! - start[a]! - (start[b + 1]! - start[b]!));
+  const ech = new EchelonModP(p, nCols);
+  for (const r of order) {
+    ech.insert(cols.subarray(start[r]!), vals.subarray(start[r]!), start[r + 1]! - start[r]!);
+    if (ech.rank === Math.min(nCols, nRows)) break;
+  }
+  return ech.rank;
 }

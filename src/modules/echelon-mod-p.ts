@@ -69,8 +69,9 @@ export class EchelonModP {
     w.fill(0);
     let any = false;
     for (let i = 0; i < len; i++) {
-      const v = vals[i]! % p;
+      let v = vals[i]! % p;
       if (v === 0) continue;
+      if (v < 0) v += p;
       const c = cols[i]!;
       w[c] = (w[c]! + v) % p;
       any = true;

@@ -1,6 +1,6 @@
 /**
  * Super-monomials x^a y^b θ_S in n variables of each kind, packed into one number:
- * key = (Σ a_i R^i + Σ b_i R^(n+i)) · 2^n + mask(S), with a radix R above every exponent
+ * key = (Σ a_i R^i + Σ b_i R^(n+i)) · 2^n + mask(S) (no mask bits without θ), with a radix R above every exponent
  * that can occur. Keys stay below 2^53 (checked), so Maps and typed arrays can hold them.
  */
 import { InputError, LimitError } from '../core/errors.js';
@@ -19,7 +19,7 @@ export class SuperSpace {
   ) {
     if (!Number.isInteger(n) || n < 1 || n > MAX_N) throw new InputError(`n must be an integer from 1 to ${MAX_N} (got ${n})`, 'n');
     if (!Number.isInteger(radix) || radix < 2) throw new RangeError(`radix ${radix}`);
-    this.maskBase = 2 ** n;
+    this.maskBase = hasTheta ? 2 ** n : 1; // no θ: keys carry no mask bits
     const kinds = hasY ? 2 : 1;
     const pw: number[] = [];
     let r = 1;

@@ -59,6 +59,20 @@ export class YoungFolder {
   }
 
   private compute(key: number): number {
+    const r = this.repOf(key);
+    if (r < 0) return -1;
+    const parity = r % 2;
+    const rep = (r - parity) / 2;
+    let col = this.repIndex.get(rep);
+    if (col === undefined) {
+      col = this.repIndex.size;
+      this.repIndex.set(rep, col);
+    }
+    return 2 * col + parity;
+  }
+
+  /** 2·(representative key) + (1 when the sign is −1), or −1 when the monomial folds to nothing. Uncached. */
+  repOf(key: number): number {
     const sp = this.space;
     const n = sp.n;
     const R = sp.radix;
@@ -110,12 +124,6 @@ export class YoungFolder {
       if (sp.hasY) lin += yv * sp.powers[n + i]!;
       if (t) repMask |= 1 << i;
     }
-    const rep = lin * sp.maskBase + repMask;
-    let col = this.repIndex.get(rep);
-    if (col === undefined) {
-      col = this.repIndex.size;
-      this.repIndex.set(rep, col);
-    }
-    return 2 * col + parity;
+    return 2 * (lin * sp.maskBase + repMask) + parity;
   }
 }
