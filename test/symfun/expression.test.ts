@@ -63,6 +63,20 @@ describe('expression language', () => {
       expect(() => evaluateExpression(text), text).toThrow(re);
     }
   });
+  it('random token strings either evaluate or raise a user error, never an internal one', () => {
+    const tokens = ['s(', 'e(', 'h(', 'p(', 'm(', 'H(', 'nabla(', 'omega(', 'subs(', 'q', 't', '=', '1', '2', '0', ',', '(', ')', '+', '-', '*', '/', '^', ' '];
+    fc.assert(
+      fc.property(fc.array(fc.constantFrom(...tokens), { maxLength: 10 }), (parts) => {
+        const text = parts.join('');
+        try {
+          evaluateExpression(text, { maxDegree: 3 });
+        } catch (e) {
+          expect(e instanceof InputError || e instanceof LimitError, `${text}: ${String(e)}`).toBe(true);
+        }
+      }),
+      { numRuns: 300 },
+    );
+  });
   it('refuses operators past the degree limit with a LimitError naming --max-degree', () => {
     expect(() => evaluateExpression('nabla(e(5))', { maxDegree: 4 })).toThrow(LimitError);
     expect(() => evaluateExpression('deltaprime(e(1), e(5))', { maxDegree: 4 })).toThrow(/--max-degree/);
