@@ -52,3 +52,8 @@ time('parking-functions n=8, visit', () => {
 time('dyck-paths n=15, generate', () => generateCount('dyck-paths', { n: 15 }));
 time('set-partitions n=11, generate', () => generateCount('set-partitions', { n: 11 }));
 time('standard-tableaux n=12, generate', () => generateCount('standard-tableaux', { n: 12 }));
+time('standard-tableaux n=14, visit', () => {
+  let c = 0;
+  familyById('standard-tableaux').visit!({ n: 14 }, () => c++);
+  return c;
+});

@@ -2,6 +2,7 @@
  * Standard Young tableaux (English): of one shape λ (param shape), or of every shape of
  * size n (param n; shapes in reverse lexicographic order). Exactly one of the two is given.
  * Within a shape, tableaux come in lexicographic order of the word "row of 1, row of 2, …".
+ * Fast path: `visit` steps one tableau in place (SytWalk); shards deal tableaux round-robin.
  */
 import { InputError } from '../src/core/errors.js';
 import { partitions as streamPartitions, type Partition } from '../src/core/partitions.js';
@@ -9,6 +10,8 @@ import type { Family, ParamSpec, Params } from '../src/enumerate/plugin.js';
 import { drawRows } from './support/diagram.js';
 import { intParam, listParam, optIntParam, validateBySpec } from './support/params.js';
 import { weightedIndex } from './support/random.js';
+import { shardParts } from './support/shards.js';
+import { SytWalk } from './support/syt-walk.js';
 import { randomSyt, rowReadingWord, sytCount } from './support/tableaux.js';
 import type { Tableau } from './types.js';
 
@@ -59,6 +62,16 @@ export const standardTableaux: Family<Tableau> = {
   *generate(params) {
     validate(params);
     for (const shape of shapesOf(params)) yield* standardTableauxOfShape(shape);
+  },
+  visit(params, f, shard) {
+    validate(params);
+    const [index, count] = shardParts(shard);
+    let j = 0;
+    for (const shape of shapesOf(params)) {
+      const walk = new SytWalk(shape);
+      do if (j++ % count === index) f(walk.rows);
+      while (walk.next());
+    }
   },
   count(params) {
     validate(params);
