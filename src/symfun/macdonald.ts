@@ -73,6 +73,7 @@ function tally(L: Layout): Float64Array {
   // a descent at an upper cell is decided when the cell below is filled
   const rec = (idx: number, inv: number, maj: number, mask: number): void => {
     if (idx === n) {
+      if (inv < 0 || inv > invMax) throw new Error(`internal: inv = ${inv} outside 0..${invMax}`);
       acc[(mask * H + inv) * W + maj]! += 1;
       return;
     }
