@@ -129,10 +129,10 @@ export const showCommand: CommandSpec = {
       stats: Object.fromEntries(stats.map((s) => [s.id, s.compute(x)])),
     }));
     if (flagOpt(args, 'json')) {
-      io.out(toJsonText({ family: family.id, params, count: total, order: sample ? 'random' : 'generation', shown: rows.length, objects: rows }));
+      io.out(toJsonText({ family: family.id, params, count: total, order: sample ? 'random' : 'generation', ...(sample ? { seed: intOpt(args, 'seed') ?? 1 } : {}), shown: rows.length, objects: rows }));
       return;
     }
-    const how = sample ? `${rows.length} drawn at random (seed ${intOpt(args, 'seed') ?? 1})` : `showing ${rows.length === Number(total) ? 'all' : `the first ${rows.length}`}`;
+    const how = sample ? `${rows.length} drawn at random (seed ${intOpt(args, 'seed') ?? 1})` : `showing ${BigInt(rows.length) === total ? 'all' : `the first ${rows.length}`}`;
     io.out(`${family.id} ${describeParams(params)}: ${total} objects; ${how}`);
     const multiLine = rows.some((r) => r.text.includes('\n'));
     const width = Math.max(0, ...rows.map((r) => r.text.length));
