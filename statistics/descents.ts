@@ -13,6 +13,7 @@ export const descents: Statistic<Permutation> = {
     [[3, 1, 4, 2], 2],
     [[4, 3, 2, 1], 3],
   ],
+  step: (_at, v, prev) => (prev > v ? 1 : 0),
   compute(w) {
     let s = 0;
     for (let i = 1; i < w.length; i++) if (w[i - 1]! > w[i]!) s++;
@@ -31,6 +32,7 @@ export const ascents: Statistic<Permutation> = {
     [[3, 1, 4, 2], 1],
     [[4, 3, 2, 1], 0],
   ],
+  step: (at, v, prev) => (at > 0 && prev < v ? 1 : 0),
   compute(w) {
     let s = 0;
     for (let i = 1; i < w.length; i++) if (w[i - 1]! < w[i]!) s++;
@@ -49,6 +51,7 @@ export const inverseDescents: Statistic<Permutation> = {
     [[3, 1, 4, 2], 1],
     [[4, 3, 2, 1], 3],
   ],
+  step: (_at, v, _prev, _rank, placed) => (placed >>> v) & 1,
   compute(w) {
     const n = w.length;
     const pos = new Int32Array(n + 2);

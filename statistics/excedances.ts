@@ -13,6 +13,7 @@ export const excedances: Statistic<Permutation> = {
     [[3, 1, 4, 2], 2],
     [[4, 3, 2, 1], 2],
   ],
+  step: (at, v) => (v > at + 1 ? 1 : 0),
   compute(w) {
     let s = 0;
     for (let i = 0; i < w.length; i++) if (w[i]! > i + 1) s++;
@@ -31,6 +32,7 @@ export const weakExcedances: Statistic<Permutation> = {
     [[3, 1, 4, 2], 2],
     [[4, 3, 2, 1], 2],
   ],
+  step: (at, v) => (v >= at + 1 ? 1 : 0),
   compute(w) {
     let s = 0;
     for (let i = 0; i < w.length; i++) if (w[i]! >= i + 1) s++;

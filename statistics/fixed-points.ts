@@ -13,6 +13,7 @@ export const fixedPoints: Statistic<Permutation> = {
     [[2, 3, 1], 0],
     [[1, 3, 2, 4], 2],
   ],
+  step: (at, v) => (v === at + 1 ? 1 : 0),
   compute(w) {
     let s = 0;
     for (let i = 0; i < w.length; i++) if (w[i] === i + 1) s++;

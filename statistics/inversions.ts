@@ -14,6 +14,7 @@ export const inversions: Statistic<Permutation> = {
     [[3, 1, 4, 2], 3],
     [[4, 3, 2, 1], 6],
   ],
+  step: (_at, _v, _prev, rank) => rank, // values below v placed later
   compute(w) {
     const n = w.length;
     let s = 0;

@@ -13,6 +13,7 @@ export const majorIndex: Statistic<Permutation> = {
     [[3, 1, 4, 2], 4],
     [[4, 3, 2, 1], 6],
   ],
+  step: (at, v, prev) => (prev > v ? at : 0),
   compute(w) {
     let s = 0;
     for (let i = 1; i < w.length; i++) if (w[i - 1]! > w[i]!) s += i;
@@ -31,6 +32,7 @@ export const inverseMajorIndex: Statistic<Permutation> = {
     [[3, 1, 4, 2], 2],
     [[4, 3, 2, 1], 6],
   ],
+  step: (_at, v, _prev, _rank, placed) => ((placed >>> v) & 1 ? v : 0), // v+1 placed before v
   compute(w) {
     const n = w.length;
     const pos = new Int32Array(n + 2);

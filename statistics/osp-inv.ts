@@ -7,6 +7,12 @@
 import type { Statistic } from '../src/enumerate/plugin.js';
 import type { OrderedSetPartition } from '../objects/types.js';
 
+function popcount(x: number): number {
+  let c = 0;
+  for (; x; x &= x - 1) c++;
+  return c;
+}
+
 export const ospInv: Statistic<OrderedSetPartition> = {
   id: 'osp-inv',
   family: 'ordered-set-partitions',
@@ -20,6 +26,7 @@ export const ospInv: Statistic<OrderedSetPartition> = {
     [[[1, 2], [3, 4]], 0],
     [[[3, 4], [1, 2]], 2],
   ],
+  step: (_at, b, _prev, _rank, placed) => popcount(placed >>> b), // later blocks already opened by smaller elements
   compute(p) {
     // For each later block B_j, count the letters of earlier blocks above its minimum.
     let s = 0;

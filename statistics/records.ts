@@ -15,6 +15,7 @@ export const leftToRightMinima: Statistic<Permutation> = {
     [[3, 1, 4, 2], 2],
     [[4, 3, 2, 1], 4],
   ],
+  step: (_at, v, _prev, rank) => (rank === v - 1 ? 1 : 0), // nothing smaller placed yet
   compute(w) {
     let m = Infinity;
     let s = 0;
@@ -34,6 +35,7 @@ export const leftToRightMaxima: Statistic<Permutation> = {
     [[3, 1, 4, 2], 2],
     [[4, 3, 2, 1], 1],
   ],
+  step: (_at, v, _prev, _rank, placed) => (placed >>> (v - 1) === 0 ? 1 : 0), // nothing larger placed yet
   compute(w) {
     let m = -Infinity;
     let s = 0;
@@ -52,6 +54,7 @@ export const rightToLeftMinima: Statistic<Permutation> = {
     [[3, 1, 4, 2], 2],
     [[4, 3, 2, 1], 1],
   ],
+  step: (_at, v, _prev, rank) => (rank === 0 ? 1 : 0), // every later value is larger
   compute(w) {
     let m = Infinity;
     let s = 0;

@@ -13,7 +13,7 @@ import { descentSetOfKey } from './descent-key.js';
 import { runParallel } from './parallel.js';
 import type { Params } from './plugin.js';
 import { resolveRequest, type DistRequest, type FrobeniusKind } from './request.js';
-import { runShard, type ShardOutcome } from './run-shard.js';
+import { runShard, walkOf, type ShardOutcome } from './run-shard.js';
 import { Tally } from './tally.js';
 
 export const DEFAULT_MAX_OBJECTS = 2_000_000_000n;
@@ -103,7 +103,7 @@ export async function computeDistribution(request: DistRequest, options: DistOpt
     count: expected,
     ...(frobenius ? { frobenius } : {}),
     provenance: {
-      method: `exhaustive enumeration (${family.visit ? 'reused-buffer visit' : 'stream'}${workers > 1 ? `, ${workers} worker threads` : ''})`,
+      method: `exhaustive enumeration (${walkOf(resolved) ? 'prefix walk with per-step increments' : family.visit ? 'reused-buffer visit' : 'stream'}${workers > 1 ? `, ${workers} worker threads` : ''})`,
       workers,
       ms: Math.round(performance.now() - t0),
       version: VERSION,

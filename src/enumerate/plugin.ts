@@ -63,7 +63,20 @@ export interface Statistic<T> {
   /** Worked examples [object, value] checked by the contract tests. */
   readonly examples: readonly (readonly [T, number])[];
   compute(obj: T): number;
+  /**
+   * Optional fast path for the engine's prefix walks (src/enumerate/fast): the statistic as
+   * a sum of increments, one per step of the walk, checked against compute by the tests.
+   */
+  readonly step?: PrefixStep;
 }
+
+/**
+ * One step of a prefix walk: `value` is placed at position `at` (0-based) after `prev`
+ * (0 at the start); `placed` has bit v−1 set for each value v placed before; `rank` counts
+ * the values not yet placed that are below `value`. Permutations place w(at+1) = value;
+ * ordered set partitions place element at+1 in block `value` (placed = non-empty blocks).
+ */
+export type PrefixStep = (at: number, value: number, prev: number, rank: number, placed: number) => number;
 
 export interface Transform<A, B> {
   readonly id: string;

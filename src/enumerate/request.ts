@@ -21,6 +21,8 @@ export interface DistRequest {
   /** A transform applied to each object before every statistic. */
   readonly transform?: string;
   readonly frobenius?: FrobeniusKind;
+  /** Never take a prefix walk (src/enumerate/fast); the tests compare both paths. */
+  readonly generic?: boolean;
 }
 
 export interface ResolvedRequest {
@@ -51,7 +53,9 @@ function statisticFor(id: string, familyId: string): { stat: Statistic<unknown>;
 
 function composed(stat: Statistic<unknown>, via: Transform<unknown, unknown> | undefined): Statistic<unknown> {
   if (!via) return stat;
-  return { ...stat, id: `${via.id}:${stat.id}`, family: via.from, compute: (x) => stat.compute(via.apply(x)) };
+  // No step: the per-step increments belong to the statistic, not to its composite.
+  const { id, description, source } = stat;
+  return { id: `${via.id}:${id}`, family: via.from, description, source, examples: [], compute: (x) => stat.compute(via.apply(x)) };
 }
 
 export function resolveRequest(request: DistRequest): ResolvedRequest {

@@ -7,6 +7,7 @@ import type { Shard } from './plugin.js';
 import type { ResolvedRequest } from './request.js';
 import { inverseDescentKey } from './descent-key.js';
 import { Tally, type TallyTriples } from './tally.js';
+import { walkFor, zeroStep, type Walk } from './fast/walks.js';
 
 export interface ShardOutcome {
   readonly series: TallyTriples;
@@ -17,6 +18,12 @@ export interface ShardOutcome {
 
 /** How often (in objects) the loop reports progress. */
 export const TICK = 1 << 16;
+
+/** The prefix walk this request can take, if any: no transform or Frobenius sum, and a step for each statistic. */
+export function walkOf(r: ResolvedRequest): Walk | undefined {
+  if (r.request.generic || r.transform || r.request.frobenius || !r.statistics.every((s) => s.step)) return undefined;
+  return walkFor(r.family.id, r.request.params);
+}
 
 export function runShard(r: ResolvedRequest, shard?: Shard, tick?: (visited: number) => void): ShardOutcome {
   const { family, transform, statistics } = r;
@@ -54,7 +61,22 @@ export function runShard(r: ResolvedRequest, shard?: Shard, tick?: (visited: num
         }
       }
     : record;
-  if (family.visit) family.visit(r.request.params, f, shard);
+  const walk = walkOf(r);
+  if (walk) {
+    walk(
+      r.request.params,
+      s1.step!,
+      s2?.step ?? zeroStep,
+      (a, b) => {
+        series.add(a, b);
+        if (++visited === next) {
+          next += TICK;
+          tick?.(visited);
+        }
+      },
+      shard,
+    );
+  } else if (family.visit) family.visit(r.request.params, f, shard);
   else {
     // No sharded visit: every shard streams the family and keeps every count-th object.
     const count = shard?.count ?? 1;
