@@ -13,6 +13,7 @@ import { foata, wordFoata } from './foata.js';
 import { inverse } from './inverse.js';
 import { reverse, wordReverse } from './reverse.js';
 import { rskInsertion, rskRecording } from './rsk.js';
+import { standardize } from './standardize.js';
 import { subsetComplement } from './subset-complement.js';
 import { transpose } from './transpose.js';
 import { zeta } from './zeta.js';
@@ -30,6 +31,7 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   wordReverse,
   rskInsertion,
   rskRecording,
+  standardize,
   subsetComplement,
   transpose,
   zeta,

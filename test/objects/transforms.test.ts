@@ -14,6 +14,7 @@ import type { Statistic } from '../../src/enumerate/plugin.js';
 import { TRANSFORMS } from '../../objects/transforms/index.js';
 import { evacuate } from '../../objects/transforms/evacuation.js';
 import { rsk, rskInverse } from '../../objects/transforms/rsk.js';
+import { standardizeWord } from '../../objects/transforms/standardize.js';
 import { zetaMap } from '../../objects/transforms/zeta.js';
 import type { DyckPath } from '../../objects/types.js';
 
@@ -165,5 +166,15 @@ describe('specific transforms', () => {
       const sharp = [...(w as number[])].reverse().map((x) => 7 - x);
       expect(rsk(sharp)[0]).toEqual(evacuate(rsk(w as number[])[0]));
     }
+  });
+  it('standardization keeps inversions and the major index, and gives a permutation (fast-check)', () => {
+    fc.assert(
+      fc.property(wordArb, (w) => {
+        const p = standardizeWord(w);
+        expect([...p].sort((a, b) => a - b)).toEqual(w.map((_, i) => i + 1));
+        expect(inv(p)).toBe(inv(w));
+        expect(maj(p)).toBe(maj(w));
+      }),
+    );
   });
 });
