@@ -119,8 +119,10 @@ export class Catalogue {
     const provText = JSON.stringify(prov);
     this.db.transaction(() => {
       for (const r of rows) {
+        // each row carries its own inputs; the unit row keeps the full list of statistics
+        const rowProv = JSON.stringify({ ...prov, inputs: { family: r.family, params: r.params, statistics: r.statistics, combine: r.combine, transform: r.transform } });
         ins.run(r.family, paramsKey(r.params), r.n, r.k ?? null, r.statistics.join(','), r.combine, r.transform, r.series.kind,
-          toJsonText(seriesToJson(r.series)), seriesAtOne(r.series).toString(), seriesHash(r.series), provText);
+          toJsonText(seriesToJson(r.series)), seriesAtOne(r.series).toString(), seriesHash(r.series), rowProv);
       }
       unit.run(family, paramsKey(params), params['n'] ?? 0, params['k'] ?? null, objects.toString(), seconds, provText);
     })();

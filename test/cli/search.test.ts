@@ -1,0 +1,86 @@
+/**
+ * Acceptance through the command line (child processes): the search finds the known
+ * combinatorial formulas of MATH.md from the module and symmetric-function engines.
+ */
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { runCli } from '../helpers/cli.js';
+
+let dir: string;
+let cat: string;
+
+beforeAll(() => {
+  dir = mkdtempSync(join(tmpdir(), 'gradus-search-'));
+  cat = join(dir, 'catalogue.sqlite');
+  const r = runCli(['catalogue', 'build', '--n-max', '6', '--catalogue', cat]);
+  expect(r.code, r.stderr).toBe(0);
+}, 120_000);
+
+interface Match {
+  family: string;
+  statistics: string[];
+  combine: string;
+  transform: string;
+  variant: string;
+  verified: string;
+  complete: boolean;
+}
+
+function search(args: string[]): { code: number; doc: { matches: Match[]; recognition: { recurrences: { text: string; name?: string }[] }; tried: { candidates: number } }; stderr: string } {
+  const r = runCli(['search', ...args, '--catalogue', cat, '--json']);
+  return { code: r.code, doc: r.code === 0 ? JSON.parse(r.stdout) : null, stderr: r.stderr };
+}
+
+describe('gradus search (acceptance)', () => {
+  it('δ_{n,k} under x-derivatives, n ≤ 6, all k: an ordered-set-partition statistic and the q-Stirling recurrence (MATH.md §4)', () => {
+    const r = search(['--n-range', '1..6', '--from', 'module --seed superspace-vandermonde --ops x --n {n} --k {k}', '--take', 'hilbert']);
+    expect(r.code, r.stderr).toBe(0);
+    const m = r.doc.matches.find((x) => x.family === 'ordered-set-partitions' && x.combine === 'single' && x.variant === 'as-given');
+    expect(m).toBeDefined();
+    expect(m!.verified).toBe('n = 1..6, all k = 1..n');
+    expect(m!.complete).toBe(true);
+    expect(r.doc.recognition.recurrences[0]!.name).toBe('q-Stirling recurrence');
+  }, 60_000);
+  it('the Vandermonde module, n ≤ 6: Σ q^maj s_shape over standard Young tableaux first (Lusztig–Stanley, MATH.md §4)', () => {
+    const r = search(['--n-range', '1..6', '--from', 'module --seed vandermonde --ops x --n {n} --frobenius']);
+    expect(r.code, r.stderr).toBe(0);
+    const first = r.doc.matches[0]!;
+    expect([first.family, first.statistics.join(), first.combine, first.variant]).toEqual(['standard-tableaux', 'tableau-major-index', 'shape', 'as-given']);
+    expect(first.verified).toBe('n = 1..6');
+  }, 60_000);
+  it('⟨∇e_n, e_n⟩, n ≤ 6: a pair of Dyck-path statistics, area with dinv or bounce (MATH.md §3, q,t-Catalan)', () => {
+    const r = search(['--n-range', '1..6', '--from', 'sym "nabla(e({n}))"', '--take', 'sign']);
+    expect(r.code, r.stderr).toBe(0);
+    const pairs = r.doc.matches.filter((x) => x.family === 'dyck-paths' && x.transform === '' && x.combine === 'joint').map((x) => x.statistics.join('&'));
+    expect(pairs).toContain('dyck-area&dyck-bounce');
+    expect(pairs).toContain('dyck-area&dyck-dinv');
+    expect(r.doc.matches[0]!.verified).toBe('n = 1..6');
+  }, 60_000);
+  it('a typed target that nothing explains: "no match" and what was tried', { timeout: 30_000 }, () => {
+    const r = runCli(['search', '--coeffs', 'n=3:1,3,1,1;n=4:2,0,5,1,7', '--catalogue', cat]);
+    expect(r.code, r.stderr).toBe(0);
+    expect(r.stdout).toContain('no match');
+    expect(r.stdout).toMatch(/tried \d+ candidates/);
+    expect(r.stdout).toContain('variants as-given, q-reversed');
+    const j = search(['--coeffs', 'n=3:1,3,1,1;n=4:2,0,5,1,7']);
+    expect(j.doc.matches).toEqual([]);
+    expect(j.doc.tried.candidates).toBeGreaterThan(0);
+  });
+  it('typed q-factorials are found as inversions/major index on permutations, reversed ones too', { timeout: 30_000 }, () => {
+    const r = search(['--coeffs', 'n=3:1,2,2,1;n=4:1,3,5,6,5,3,1']);
+    const perm = r.doc.matches.filter((x) => x.family === 'permutations' && x.combine === 'single' && x.transform === '').map((x) => x.statistics[0]);
+    expect(perm).toContain('inversions');
+    expect(perm).toContain('major-index');
+  });
+  it('bad input: two target sources, a bad range, a missing catalogue', { timeout: 30_000 }, () => {
+    expect(runCli(['search', '--coeffs', 'n=1:1', '--target-file', 'x.json', '--catalogue', cat]).code).toBe(2);
+    const r = runCli(['search', '--n-range', '5..2', '--from', 'qseries integer --n {n}', '--catalogue', cat]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('--n-range');
+    const m = runCli(['search', '--coeffs', 'n=1:1', '--catalogue', join(dir, 'none.sqlite')]);
+    expect(m.code).toBe(2);
+    expect(m.stderr).toContain('catalogue build');
+  });
+});
