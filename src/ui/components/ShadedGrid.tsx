@@ -30,7 +30,11 @@ export function ShadedGrid(props: ShadedGridProps) {
   for (const row of table) for (const v of row) if (v > max) max = v;
   const cols = Math.max(0, ...table.map((r) => r.length));
   const cellW = Math.max(2, max.toString().length, String(cols - 1).length) + 3;
-  const labelW = Math.max(props.rowLabel.length + String(table.length - 1).length + 1, 3);
+  // One axis: a single row of dimensions, labelled as such.
+  const single = props.rowLabel === '';
+  const rowName = (i: number) => (single ? 'dim' : `${props.rowLabel}${i}`);
+  const corner = single ? `${props.colLabel}-deg` : `${props.rowLabel}\\${props.colLabel}`;
+  const labelW = Math.max(corner.length, props.rowLabel.length + String(table.length - 1).length + 1, 3);
   const fitCols = Math.max(1, Math.floor((props.width - labelW - 1) / cellW));
   const fitRows = Math.max(1, props.height - 1);
   // Scroll so the selected cell stays visible.
@@ -41,11 +45,11 @@ export function ShadedGrid(props: ShadedGridProps) {
   return (
     <Box flexDirection="column">
       <Text wrap="truncate" {...theme.style('dim')}>
-        {`${props.rowLabel}\\${props.colLabel}`.padEnd(labelW)} {colIdx.map((j) => String(j).padStart(cellW - 1) + ' ').join('')}
+        {corner.padEnd(labelW)} {colIdx.map((j) => String(j).padStart(cellW - 1) + ' ').join('')}
       </Text>
       {rowIdx.map((i) => (
         <Text key={i} wrap="truncate">
-          <Text {...theme.style('dim')}>{`${props.rowLabel}${i}`.padEnd(labelW)}</Text>{' '}
+          <Text {...theme.style('dim')}>{rowName(i).padEnd(labelW)}</Text>{' '}
           {colIdx.map((j) => {
             const v = table[i]?.[j] ?? 0n;
             const isSel = selected !== undefined && selected[0] === i && selected[1] === j;

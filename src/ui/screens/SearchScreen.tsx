@@ -87,7 +87,7 @@ export function SearchScreen(props: ScreenProps) {
 
   const st = job.state;
   const w = props.width;
-  const previewN = 2;
+  const previewN = props.height >= 20 ? 3 : 2;
   const cands = outcome?.candidates ?? [];
   const detail = cands[sel];
   const detailLines = detail ? [`verified ${detail.range}${detail.formula ? `   formula ${detail.formula}` : ''}`, ...detail.detail].slice(0, 4) : [];
