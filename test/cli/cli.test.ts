@@ -56,3 +56,16 @@ describe('gradus command line (child process)', () => {
     expect(doc.atOne).toBe('265252859812191058636308480000000');
   });
 });
+
+describe('gradus in a pipeline', () => {
+  it('a reader that closes early ends the run quietly (no EPIPE stack trace)', async () => {
+    const { spawnSync } = await import('node:child_process');
+    const bin = new URL('../../bin/gradus.mjs', import.meta.url).pathname;
+    const r = spawnSync('bash', ['-c', `node ${bin} qseries factorial --n 120 | head -c 10 >/dev/null; echo "rc=\${PIPESTATUS[0]}"`], {
+      encoding: 'utf8',
+      timeout: 120_000,
+    });
+    expect(r.stderr).not.toMatch(/EPIPE|\s+at\s/);
+    expect(r.stdout).toContain('rc=0');
+  });
+});
