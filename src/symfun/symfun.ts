@@ -7,6 +7,7 @@ import { InputError } from '../core/errors.js';
 import { checkPartition, conjugate, fLambda, partitionKey, partitionList, size, type Partition } from '../core/partitions.js';
 import { Poly } from '../core/poly.js';
 import { PolyQ } from '../core/polyq.js';
+import { lrProduct } from './littlewood-richardson.js';
 import { basisToSchur, schurToBasis, type Basis } from './transitions.js';
 
 export function keyToPartition(key: string): Partition {
@@ -162,21 +163,16 @@ export class SymFun {
     }
     return new SymFun(m);
   }
-  /** Product, through the power sums (p_ρ p_σ = p_{ρ∪σ}). */
+  /** Product, by the Littlewood–Richardson rule on the Schur terms. */
   mul(o: SymFun): SymFun {
     if (this.isZero() || o.isZero()) return SymFun.zero;
-    const a = this.toBasis('p');
-    const b = o.toBasis('p');
-    const prod = new Map<string, [Partition, PolyQ]>();
-    for (const [r, cr] of a)
-      for (const [s, cs] of b) {
-        const merged = [...r, ...s].sort((x, y) => y - x);
-        const k = partitionKey(merged);
-        const prev = prod.get(k);
-        const c = cr.mul(cs);
-        prod.set(k, [merged, prev ? prev[1].add(c) : c]);
+    const m = new Map<string, PolyQ>();
+    for (const [k1, c1] of this.schur)
+      for (const [k2, c2] of o.schur) {
+        const c = c1.mul(c2);
+        for (const [nu, mult] of lrProduct(keyToPartition(k1), keyToPartition(k2))) addInto(m, nu, c.scale(mult));
       }
-    return SymFun.fromBasis('p', prod.values());
+    return new SymFun(m);
   }
   pow(e: number): SymFun {
     let r: SymFun = SymFun.one;

@@ -53,6 +53,23 @@ describe('SymFun bases and operations', () => {
       { numRuns: 60 },
     );
   });
+  it('the Littlewood–Richardson product agrees with the product of power sums (p_ρ p_σ = p_{ρ∪σ}), degrees ≤ 7', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 4 }), fc.integer({ min: 0, max: 3 }), fc.nat(), fc.nat(), (n1, n2, i, j) => {
+        const a = s(...partitionList(n1)[i % partitionList(n1).length]!);
+        const b = s(...partitionList(n2)[j % partitionList(n2).length]!);
+        const prod = new Map<string, [number[], PolyQ]>();
+        for (const [r, cr] of a.toBasis('p'))
+          for (const [t, ct] of b.toBasis('p')) {
+            const merged = [...r, ...t].sort((x, y) => y - x);
+            const k = merged.join(',');
+            prod.set(k, [merged, (prod.get(k)?.[1] ?? PolyQ.zero).add(cr.mul(ct))]);
+          }
+        expect(a.mul(b).equals(SymFun.fromBasis('p', prod.values()))).toBe(true);
+      }),
+      { numRuns: 40 },
+    );
+  });
   it('products are associative and commutative on random small elements', () => {
     const arb = fc.tuple(fc.integer({ min: 0, max: 3 }), fc.nat(), fc.integer({ min: -3, max: 3 }));
     fc.assert(
