@@ -60,7 +60,7 @@ function constantOf(f: SymFun): PolyQ | undefined {
 }
 
 /** The largest degree the expression language handles (changes of basis need p(n)² entries). */
-export const EXPRESSION_MAX_DEGREE = 20;
+export const EXPRESSION_MAX_DEGREE = 16;
 
 function limitDegree(n: number, col: number): void {
   if (n > EXPRESSION_MAX_DEGREE) {
