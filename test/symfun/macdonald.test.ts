@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { conjugate, dominates, partitionKey, partitionList } from '../../src/core/partitions.js';
 import { Poly } from '../../src/core/poly.js';
 import { PolyQ } from '../../src/core/polyq.js';
-import { bigW } from '../../src/symfun/cell-data.js';
+import { bigT, bigW } from '../../src/symfun/cell-data.js';
 import { frac } from '../../src/core/rational.js';
 import { modifiedMacdonald } from '../../src/symfun/macdonald.js';
 import { macdonaldByTriangularity } from '../../src/symfun/macdonald-triangular.js';
@@ -29,6 +29,17 @@ describe('modified Macdonald polynomials by the filling formula', () => {
         expect(h.specialize({ q: 1, t: 1 }).equals(h1n)).toBe(true);
       }
     }
+  });
+  it('ω H̃_μ(X;q,t) = T_μ H̃_μ(X;1/q,1/t) for n ≤ 6 (Garsia–Haiman — from memory; an identity the filling formula does not show)', () => {
+    for (let n = 1; n <= 6; n++)
+      for (const mu of partitionList(n)) {
+        const a = bigT(mu).degQ();
+        const b = bigT(mu).degT();
+        const flipped = modifiedMacdonald(mu).mapCoefficients((c) =>
+          PolyQ.of(Poly.fromTerms([...c.num.terms()].map(([i, j, v]) => [a - i, b - j, v] as const)), c.den),
+        );
+        expect(flipped.equals(modifiedMacdonald(mu).omega()), partitionKey(mu)).toBe(true);
+      }
   });
   it('independent route: the triangularity characterisation holds for n ≤ 5 (Haiman; MATH.md §3)', () => {
     // H̃_μ[X(1−q)] ∈ span{s_λ : λ ≥ μ}, H̃_μ[X(1−t)] ∈ span{s_λ : λ ≥ μ′}, ⟨H̃_μ, s_(n)⟩ = 1
