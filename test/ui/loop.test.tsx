@@ -2,7 +2,8 @@
  * The whole loop with the keys shown on screen: type a series, search it, browse the
  * match, export it, and check the file; and the demo tour end to end.
  */
-import { existsSync, readFileSync, rmSync } from 'node:fs';
+import { readdirSync, readFileSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { fits, frame, KEYS, press, renderApp, waitForFrame, type Rendered } from './helpers.js';
 import { tinyCatalogue } from './tinyCatalogue.js';
@@ -34,10 +35,35 @@ describe('search and export loop', () => {
     await press(r, KEYS.down);
     f = frame(r);
     expect(f).toMatch(/▶ 2\. /);
-    // To the export screen: the search result is listed there.
+    // To the export screen: the search result is listed there, newest first.
     await press(r, '7');
     f = frame(r);
-    expect(f).toContain('search: typed n=3:1,2,2,1');
+    expect(f).toContain('▶ search     search: typed n=3:1,2,2,1');
+    expect(f).toContain('[markdown]');
+    expect(f.replace(/\n/g, " ")).toContain(`file ${cat.dir}`);
+    await press(r, KEYS.enter);
+    f = await waitForFrame(r, (x) => x.includes('✓ wrote'));
+    const written = readdirSync(cat.dir).filter((x) => x.endsWith('.md'));
+    expect(written.length).toBe(1);
+    const path = join(cat.dir, written[0]!);
+    expect(f.replace(/\n/g, '')).toContain(path);
+    const md = readFileSync(path, 'utf8');
+    expect(md).toContain('inversions');
+    expect(md).toContain('major-index');
+    // Writing again does not overwrite without f.
+    await press(r, KEYS.enter);
+    f = await waitForFrame(r, (x) => x.includes('exists'));
+    expect(f).toContain('f overwrites');
+    await press(r, 'f');
+    f = await waitForFrame(r, (x) => x.includes('✓ wrote'));
+    // JSON: our versioned export schema.
+    await press(r, KEYS.right);
+    expect(frame(r)).toContain('[json]');
+    await press(r, KEYS.enter);
+    f = await waitForFrame(r, (x) => x.includes('✓ wrote') && x.includes('.json'));
+    const json = JSON.parse(readFileSync(path.replace(/\.md$/, '.json'), 'utf8')) as { format: string; matches: unknown[] };
+    expect(json.format).toBe('gradus-export');
+    expect(json.matches.length).toBe(2);
   }, 40_000);
 
   it('says plainly when nothing matches, and what was tried', async () => {

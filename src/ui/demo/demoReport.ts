@@ -38,7 +38,11 @@ export function stepReport(step: number, s: DemoState, withTable: boolean): Repo
     out.push({ text: `tried: ${s.search.tried}`, tone: 'dim' });
   }
   if (step === 3) {
-    if (s.exported) out.push({ text: `wrote ${s.exported.bytes} bytes to ${s.exported.path}`, tone: 'ok' });
+    if (s.exported) {
+      out.push({ text: `wrote ${s.exported.bytes} bytes of Markdown (the matches with definitions and sources, or what was tried) to`, tone: 'ok' });
+      out.push({ text: `  ${s.exported.path}`, tone: 'ok' });
+      out.push({ text: 'The Export screen (7) writes any result of the session, in Markdown or JSON, where you choose.', tone: 'dim' });
+    }
     else if (s.exportNote) out.push({ text: s.exportNote, tone: 'warn' });
   }
   return out;

@@ -1,28 +1,62 @@
 /**
- * Writing a session result to a file with the export engine (src/export), the same
- * functions `gradus export` calls. Until that engine exists this reports itself unavailable.
+ * Writing a session result to a file with the export engine (src/export): a search result
+ * through the same model and renderers as `gradus export`, written atomically; a module or
+ * expression result as the JSON document its own command prints with --json.
  */
+import { existsSync } from 'node:fs';
 import { InputError } from '../../core/errors.js';
+import { toJsonText } from '../../cli/json-output.js';
+import { atomicWrite } from '../../export/atomicWrite.js';
+import { exportModel } from '../../export/exportModel.js';
+import { renderJson } from '../../export/renderJson.js';
+import { renderMarkdown } from '../../export/renderMarkdown.js';
+import { checkSearchDocument } from '../../match/searchDocument.js';
 import type { SessionItem } from '../session.js';
 
-export const EXPORT_ENGINE_AVAILABLE = false;
-export const EXPORT_FORMATS = ['latex', 'markdown', 'json'] as const;
+export const EXPORT_ENGINE_AVAILABLE = true;
+export const EXPORT_FORMATS = ['markdown', 'json'] as const;
 export type ExportFormat = (typeof EXPORT_FORMATS)[number];
 
-export const FORMAT_EXTENSION: Readonly<Record<ExportFormat, string>> = { latex: 'tex', markdown: 'md', json: 'json' };
+export const FORMAT_EXTENSION: Readonly<Record<ExportFormat, string>> = { markdown: 'md', json: 'json' };
+
+/** How many matches an export lists (as `gradus export` does by default). */
+const EXPORT_MATCH_LIMIT = 10;
 
 export interface ExportDone {
   readonly path: string;
   readonly bytes: number;
 }
 
-/** Whether this item can be exported (it must carry an engine result). */
-export function exportable(item: SessionItem): boolean {
-  return item.payload !== undefined || item.target !== undefined;
+/** The engine JSON a session item carries: a saved-search document, or a module/expression document. */
+function documentOf(item: SessionItem): { kind: 'search' | 'plain'; doc: unknown } | undefined {
+  const p = item.payload as { json?: unknown } | undefined;
+  if (!p || p.json === undefined) return undefined;
+  return { kind: item.origin === 'search' ? 'search' : 'plain', doc: p.json };
 }
 
-export function exportItem(_item: SessionItem, _format: ExportFormat, _path: string, _force: boolean): ExportDone {
-  throw new InputError('the export engine is not available in this build');
+export function exportable(item: SessionItem): boolean {
+  return documentOf(item) !== undefined;
+}
+
+/** Formats this item can be written in. */
+export function formatsFor(item: SessionItem): readonly ExportFormat[] {
+  return documentOf(item)?.kind === 'search' ? EXPORT_FORMATS : ['json'];
+}
+
+export function exportItem(item: SessionItem, format: ExportFormat, path: string, force: boolean): ExportDone {
+  const d = documentOf(item);
+  if (!d) throw new InputError('this result carries nothing to export');
+  let text: string;
+  if (d.kind === 'search') {
+    const model = exportModel(checkSearchDocument(d.doc, item.title), EXPORT_MATCH_LIMIT);
+    text = format === 'markdown' ? renderMarkdown(model) : renderJson(model);
+  } else {
+    if (format !== 'json') throw new InputError(`a ${item.origin} result is exported as JSON (its command's --json document); ${format} is for search results`, 'format');
+    text = toJsonText(d.doc) + '\n';
+  }
+  if (existsSync(path) && !force) throw new InputError(`${path} exists; not overwritten (f overwrites it)`, 'out');
+  atomicWrite(path, text, force);
+  return { path, bytes: Buffer.byteLength(text) };
 }
 
 /** A default file name from the item's title: plain letters, digits and dashes. */

@@ -3,7 +3,7 @@ import { Box, Text } from 'ink';
 import { isAbsolute, resolve } from 'node:path';
 import { useState } from 'react';
 import { LineInput } from '../components/LineInput.js';
-import { defaultFileName, EXPORT_ENGINE_AVAILABLE, EXPORT_FORMATS, exportable, exportItem, type ExportDone } from '../engines/exporter.js';
+import { defaultFileName, EXPORT_ENGINE_AVAILABLE, exportable, exportItem, formatsFor, type ExportDone } from '../engines/exporter.js';
 import { errorText } from '../errorText.js';
 import { useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
@@ -20,7 +20,8 @@ export function ExportScreen(props: ScreenProps) {
   const [draft, setDraft] = useState('');
   const [last, setLast] = useState<{ done?: ExportDone; error?: string } | undefined>(undefined);
   const item = items[Math.min(sel, items.length - 1)];
-  const format = EXPORT_FORMATS[fi]!;
+  const formats = item ? formatsFor(item) : [];
+  const format = formats[Math.min(fi, formats.length - 1)] ?? 'json';
   const nameKey = item ? `${item.id}:${format}` : '';
   const fileName = item ? (names[nameKey] ?? defaultFileName(item, format)) : '';
   const path = fileName === '' ? '' : isAbsolute(fileName) ? fileName : resolve(props.cwd, fileName);
@@ -41,8 +42,9 @@ export function ExportScreen(props: ScreenProps) {
     (input, key) => {
       if (key.upArrow) setSel((s) => Math.max(0, s - 1));
       if (key.downArrow) setSel((s) => Math.min(Math.max(0, items.length - 1), s + 1));
-      if (key.leftArrow) setFi((f) => (f + EXPORT_FORMATS.length - 1) % EXPORT_FORMATS.length);
-      if (key.rightArrow) setFi((f) => (f + 1) % EXPORT_FORMATS.length);
+      const nf = Math.max(1, formats.length);
+      if (key.leftArrow) setFi((f) => (Math.min(f, nf - 1) + nf - 1) % nf);
+      if (key.rightArrow) setFi((f) => (Math.min(f, nf - 1) + 1) % nf);
       if (key.return) write(false);
       if (input === 'f') write(true);
       if (input === 'e' && item) {
@@ -64,7 +66,7 @@ export function ExportScreen(props: ScreenProps) {
       ) : null}
       <Text wrap="truncate">
         <Text {...theme.style('dim')}>format </Text>
-        {EXPORT_FORMATS.map((f) => (
+        {formats.map((f) => (
           <Text key={f} {...(f === format ? theme.style('selected') : theme.style('dim'))}>
             {f === format && !theme.color ? `[${f}]` : ` ${f} `}
           </Text>
@@ -84,7 +86,7 @@ export function ExportScreen(props: ScreenProps) {
           onLeave={() => setField(undefined)}
         />
       ) : (
-        <Text wrap="truncate">
+        <Text wrap="wrap">
           <Text {...theme.style('dim')}>file </Text>
           {path || '—'}
         </Text>
@@ -101,11 +103,11 @@ export function ExportScreen(props: ScreenProps) {
         );
       })}
       {last?.done ? (
-        <Text wrap="truncate" {...theme.style('ok')}>
+        <Text wrap="wrap" {...theme.style('ok')}>
           ✓ wrote {last.done.bytes} bytes to {last.done.path}
         </Text>
       ) : last?.error ? (
-        <Text wrap="truncate" {...theme.style('error')}>
+        <Text wrap="wrap" {...theme.style('error')}>
           ✗ {last.error}
         </Text>
       ) : null}
