@@ -23,7 +23,7 @@ export const binaryInversions: Statistic<BinaryWord> = {
   id: 'binary-inversions',
   family: 'subsets',
   description: 'pairs i < j with w(i) = 1 and w(j) = 0 (q-binomial for a fixed number of 1s)',
-  source: 'standard (Stanley, EC1 Prop. 1.7.1, case of two letters)',
+  source: 'standard (Stanley, EC1 §1.7, case of two letters)',
   examples: [
     [[0, 1], 0],
     [[1, 0], 1],

@@ -1,6 +1,6 @@
 /**
  * Statistics on Dyck paths (1 = north, 0 = east, never below the diagonal), following
- * Haglund, "The q,t-Catalan numbers and the space of diagonal harmonics", AMS 2008, ch. 1, 3.
+ * Haglund, "The q,t-Catalan numbers and the space of diagonal harmonics", AMS 2008.
  * Rows are counted bottom to top; a_i (the area sequence) is the number of whole cells
  * between the diagonal and the path in row i.
  */
@@ -25,7 +25,7 @@ export const dyckArea: Statistic<DyckPath> = {
   id: 'dyck-area',
   family: 'dyck-paths',
   description: 'number of whole cells between the path and the diagonal',
-  source: `${HAGLUND}, ch. 1`,
+  source: HAGLUND,
   examples: [
     [[], 0],
     [[1, 0, 1, 0], 0],
@@ -44,7 +44,7 @@ export const dyckDinv: Statistic<DyckPath> = {
   id: 'dyck-dinv',
   family: 'dyck-paths',
   description: 'pairs of rows i < j with a_i = a_j or a_i = a_j + 1',
-  source: `${HAGLUND}, ch. 3`,
+  source: HAGLUND,
   examples: [
     [[1, 0, 1, 0], 1],
     [[1, 1, 0, 0], 0],
@@ -69,7 +69,7 @@ export const dyckBounce: Statistic<DyckPath> = {
   id: 'dyck-bounce',
   family: 'dyck-paths',
   description: 'bounce path from (0,0): sum of n − j over the points (j, j) where it touches the diagonal before (n, n)',
-  source: `${HAGLUND}, ch. 3 (Haglund's bounce statistic)`,
+  source: `${HAGLUND} (Haglund's bounce statistic)`,
   examples: [
     [[1, 0, 1, 0], 1],
     [[1, 1, 0, 0], 0],
@@ -126,7 +126,7 @@ export const dyckPeaks: Statistic<DyckPath> = {
   id: 'dyck-peaks',
   family: 'dyck-paths',
   description: 'number of north steps followed by an east step (Narayana numbers)',
-  source: 'standard (Stanley, EC2 Ex. 6.36; Narayana numbers)',
+  source: 'standard (Narayana numbers; Deutsch, Discrete Math. 204 (1999))',
   examples: [
     [[], 0],
     [[1, 0, 1, 0], 2],

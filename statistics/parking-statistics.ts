@@ -1,7 +1,7 @@
 /**
  * area and dinv of parking functions (labelled Dyck paths), as in the shuffle theorem
  * (MATH.md §3): ∇e_n = Σ q^{dinv} t^{area} F_{iDes(reading word)} (Carlsson–Mellit,
- * J. Amer. Math. Soc. 31 (2018); statistics from Haglund's book, AMS 2008, ch. 5).
+ * J. Amer. Math. Soc. 31 (2018); statistics from Haglund's book, AMS 2008).
  * Rows are counted bottom to top; a_i is the area of row i and l_i its car. dinv counts
  * pairs of rows i < j with a_i = a_j and l_i < l_j, or a_i = a_j + 1 and l_i > l_j.
  */
@@ -31,7 +31,7 @@ function dinvOf(a: Int32Array, l: readonly number[]): number {
   return s;
 }
 
-const SOURCE = 'Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, AMS 2008, ch. 5; MATH.md §3';
+const SOURCE = 'Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, AMS 2008; MATH.md §3';
 
 export const parkingArea: Statistic<LabelledDyckPath> = {
   id: 'parking-area',

@@ -51,7 +51,7 @@ export const durfeeSquare: Statistic<PartitionObj> = {
   id: 'durfee-square',
   family: 'partitions',
   description: 'side of the Durfee square: the largest d with λ_d ≥ d',
-  source: 'standard (Andrews, The Theory of Partitions, §2.3)',
+  source: 'standard (Andrews, The Theory of Partitions, ch. 2)',
   examples: [
     [[], 0],
     [[5], 1],

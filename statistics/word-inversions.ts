@@ -6,7 +6,7 @@ export const wordInversions: Statistic<Word> = {
   id: 'word-inversions',
   family: 'words',
   description: 'pairs i < j with w(i) > w(j) (equal letters are no inversion)',
-  source: 'MacMahon, Combinatory Analysis (1915); Stanley, EC1 Prop. 1.7.1',
+  source: 'MacMahon, Combinatory Analysis (1915); Stanley, EC1 §1.7',
   examples: [
     [[], 0],
     [[1, 1, 2], 0],

@@ -6,7 +6,7 @@ export const wordMajorIndex: Statistic<Word> = {
   id: 'word-major-index',
   family: 'words',
   description: 'sum of the i with w(i) > w(i+1)',
-  source: 'MacMahon, Combinatory Analysis (1915); Stanley, EC1 Prop. 1.7.1',
+  source: 'MacMahon, Combinatory Analysis (1915); Stanley, EC1 §1.7',
   examples: [
     [[1, 1, 2], 0],
     [[2, 1, 1], 1],

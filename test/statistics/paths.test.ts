@@ -9,7 +9,7 @@ import { dist } from './dist-helper.js';
 const symmetric = (p: Poly): boolean => p.equals(p.swapQT());
 
 describe('Dyck path statistics', () => {
-  it('(area, bounce) and (dinv, area) are jointly symmetric for n ≤ 8, and equal as q,t-series (Haglund, AMS 2008, ch. 3, from memory; checked here)', async () => {
+  it('(area, bounce) and (dinv, area) are jointly symmetric for n ≤ 8, and equal as q,t-series (Haglund, AMS 2008, from memory; checked here)', async () => {
     for (let n = 0; n <= 8; n++) {
       const ab = (await dist('dyck-paths', { n }, ['dyck-area', 'dyck-bounce'])).series;
       const da = (await dist('dyck-paths', { n }, ['dyck-dinv', 'dyck-area'])).series;
@@ -25,7 +25,7 @@ describe('Dyck path statistics', () => {
     expect((await dist('dyck-paths', { n: 3 }, ['dyck-dinv', 'dyck-area'])).series.equals(c3)).toBe(true);
   });
 
-  it('peaks are counted by the Narayana numbers C(n,k)C(n,k−1)/n; returns by the ballot numbers k/(2n−k)·C(2n−k, n) (Stanley EC2 Ex. 6.36; Deutsch 1999, from memory)', async () => {
+  it('peaks are counted by the Narayana numbers C(n,k)C(n,k−1)/n; returns by the ballot numbers k/(2n−k)·C(2n−k, n) (Narayana numbers; Deutsch, Discrete Math. 1999; from memory, independent of the code)', async () => {
     for (let n = 1; n <= 8; n++) {
       const peaks = (await dist('dyck-paths', { n }, ['dyck-peaks'])).series;
       const returns = (await dist('dyck-paths', { n }, ['dyck-returns'])).series;
@@ -38,7 +38,7 @@ describe('Dyck path statistics', () => {
 });
 
 describe('parking functions', () => {
-  it('(n+1)^{n−1} of them (Konheim–Weiss), Σ q^dinv t^area symmetric in q,t (Haglund ch. 5, from memory), n ≤ 6', async () => {
+  it('(n+1)^{n−1} of them (Konheim–Weiss), Σ q^dinv t^area symmetric in q,t (Haglund, AMS 2008, from memory), n ≤ 6', async () => {
     for (let n = 1; n <= 6; n++) {
       const d = await dist('parking-functions', { n }, ['parking-dinv', 'parking-area']);
       expect(d.series.sumCoefficients()).toBe(BigInt((n + 1) ** (n - 1)));

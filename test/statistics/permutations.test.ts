@@ -12,7 +12,7 @@ import { dist } from './dist-helper.js';
 const swap = (p: Poly): Poly => p.swapQT();
 
 describe('permutation statistics', () => {
-  it('inv, maj, imaj and den are Mahonian: Σ q^stat = [n]_q! for n ≤ 7 (MacMahon; Stanley EC1 Cor. 1.3.13, Prop. 1.4.6)', async () => {
+  it('inv, maj, imaj and den are Mahonian: Σ q^stat = [n]_q! for n ≤ 7 (MacMahon 1915; Stanley, EC1 §1.3–1.4)', async () => {
     for (let n = 0; n <= 7; n++) {
       for (const s of ['inversions', 'major-index', 'inverse-major-index', 'denert']) {
         expect((await dist('permutations', { n }, [s])).series.equals(qFactorial(n)), `${s}, n=${n}`).toBe(true);
@@ -38,7 +38,7 @@ describe('permutation statistics', () => {
     expect((await dist('permutations', { n: 4 }, ['descents'])).series.toQArray()).toEqual([1n, 11n, 11n, 1n]);
   });
 
-  it('cycles and left-to-right minima have distribution q(q+1)…(q+n−1) (Stanley EC1 Prop. 1.3.7)', async () => {
+  it('cycles and left-to-right minima have distribution q(q+1)…(q+n−1) (Stanley, EC1 §1.3)', async () => {
     for (let n = 1; n <= 7; n++) {
       let rising = Poly.one;
       for (let i = 0; i < n; i++) rising = rising.mul(Poly.q.add(Poly.constant(i)));
@@ -48,7 +48,7 @@ describe('permutation statistics', () => {
     }
   });
 
-  it('(inv, maj) is symmetric and (maj, imaj) is symmetric (Foata–Schützenberger 1978) for n ≤ 6', async () => {
+  it('(inv, maj) is symmetric (Foata–Schützenberger, Math. Nachr. 1978) and so is (maj, imaj) (by w ↦ w⁻¹), n ≤ 6', async () => {
     for (let n = 1; n <= 6; n++) {
       const a = (await dist('permutations', { n }, ['inversions', 'major-index'])).series;
       expect(a.equals(swap(a))).toBe(true);

@@ -22,7 +22,7 @@ function qHook(l: readonly number[]): Poly {
 const arbContent = fc.array(fc.integer({ min: 0, max: 3 }), { minLength: 1, maxLength: 4 }).filter((c) => c.reduce((a, b) => a + b, 0) <= 8);
 
 describe('statistics on words', () => {
-  it('inv and maj on words of any content have the q-multinomial distribution (MacMahon; Stanley EC1 Prop. 1.7.1)', async () => {
+  it('inv and maj on words of any content have the q-multinomial distribution (MacMahon 1915; Stanley, EC1 §1.7)', async () => {
     await fc.assert(
       fc.asyncProperty(arbContent, async (content) => {
         const target = qMultinomial(content);
@@ -60,8 +60,8 @@ describe('statistics on tableaux', () => {
     }
   });
 
-  it('Σ_λ f^λ Σ_{T ∈ SYT(λ)} q^{maj T} = [n]_q! for n ≤ 6 (RSK; Stanley, EC2 Lemma 7.23.1)', async () => {
-    // RSK: Σ_w q^{imaj w} = Σ_λ f^λ Σ_{T∈SYT(λ)} q^{maj T} (Stanley, EC2 Lemma 7.23.1), and imaj is Mahonian.
+  it('Σ_λ f^λ Σ_{T ∈ SYT(λ)} q^{maj T} = [n]_q! for n ≤ 6 (RSK and descents; Stanley, EC2 §7.23)', async () => {
+    // RSK: Σ_w q^{imaj w} = Σ_λ f^λ Σ_{T∈SYT(λ)} q^{maj T} (Stanley, EC2 §7.23), and imaj is Mahonian.
     for (let n = 1; n <= 6; n++) {
       let sum = Poly.zero;
       for (const l of partitions(n)) {
