@@ -9,7 +9,7 @@ import { unknownNameMessage } from '../core/suggest.js';
 import type { Arg, Node } from './expression-parser.js';
 import { HALL_LITTLEWOOD_MAX_N, modifiedHallLittlewood } from './hall-littlewood.js';
 import { MACDONALD_MAX_N, modifiedMacdonald } from './macdonald.js';
-import { delta, deltaPrime, deltaPrimeOfEn, nabla } from './operators.js';
+import { delta, deltaPrime, deltaPrimeOfEn, nabla, starScalar } from './operators.js';
 import { plethysmTimes } from './plethysm.js';
 import { SymFun } from './symfun.js';
 import type { Basis } from './transitions.js';
@@ -44,6 +44,7 @@ export const EXPRESSION_FUNCTIONS: readonly FunctionDoc[] = [
   { name: 'pleth', signature: 'pleth(F, 1-q)', description: 'plethysm F[X·A] by a q,t-polynomial A with integer coefficients' },
   { name: 'inner', signature: 'inner(F, G)', description: 'Hall scalar product ⟨F, G⟩ (a scalar)' },
   { name: 'hilbert', signature: 'hilbert(F)', description: 'Hilbert series ⟨F, p_1^n⟩ (a scalar)' },
+  { name: 'star', signature: 'star(F, G)', description: '*-scalar product, ⟨H̃_λ, H̃_μ⟩_* = δ w_μ (a scalar)' },
 ];
 
 const BASIS_NAMES = new Set(['s', 'm', 'e', 'h', 'p']);
@@ -223,6 +224,10 @@ function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions):
     case 'inner': {
       const [a, b] = exprArgs(node, 2, 'inner(F, G)');
       return SymFun.scalar(ev(a!).hallInner(ev(b!)));
+    }
+    case 'star': {
+      const [a, b] = exprArgs(node, 2, 'star(F, G)');
+      return SymFun.scalar(starScalar(ev(a!), ev(b!)));
     }
     case 'hilbert': {
       const [a] = exprArgs(node, 1, 'hilbert(F)');
