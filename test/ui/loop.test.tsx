@@ -56,7 +56,11 @@ describe('search and export loop', () => {
     expect(f).toContain('f overwrites');
     await press(r, 'f');
     f = await waitForFrame(r, (x) => x.includes('✓ wrote'));
-    // JSON: our versioned export schema.
+    // LaTeX, then JSON (our versioned export schema).
+    await press(r, KEYS.right);
+    expect(frame(r)).toContain('[latex]');
+    await press(r, KEYS.enter);
+    f = await waitForFrame(r, (x) => x.includes('✓ wrote') && x.includes('.tex'));
     await press(r, KEYS.right);
     expect(frame(r)).toContain('[json]');
     await press(r, KEYS.enter);

@@ -9,15 +9,16 @@ import { toJsonText } from '../../cli/json-output.js';
 import { atomicWrite } from '../../export/atomicWrite.js';
 import { exportModel } from '../../export/exportModel.js';
 import { renderJson } from '../../export/renderJson.js';
+import { renderLatex } from '../../export/renderLatex.js';
 import { renderMarkdown } from '../../export/renderMarkdown.js';
 import { checkSearchDocument } from '../../match/searchDocument.js';
 import type { SessionItem } from '../session.js';
 
 export const EXPORT_ENGINE_AVAILABLE = true;
-export const EXPORT_FORMATS = ['markdown', 'json'] as const;
+export const EXPORT_FORMATS = ['markdown', 'latex', 'json'] as const;
 export type ExportFormat = (typeof EXPORT_FORMATS)[number];
 
-export const FORMAT_EXTENSION: Readonly<Record<ExportFormat, string>> = { markdown: 'md', json: 'json' };
+export const FORMAT_EXTENSION: Readonly<Record<ExportFormat, string>> = { markdown: 'md', latex: 'tex', json: 'json' };
 
 /** How many matches an export lists (as `gradus export` does by default). */
 const EXPORT_MATCH_LIMIT = 10;
@@ -49,7 +50,7 @@ export function exportItem(item: SessionItem, format: ExportFormat, path: string
   let text: string;
   if (d.kind === 'search') {
     const model = exportModel(checkSearchDocument(d.doc, item.title), EXPORT_MATCH_LIMIT);
-    text = format === 'markdown' ? renderMarkdown(model) : renderJson(model);
+    text = format === 'markdown' ? renderMarkdown(model) : format === 'latex' ? renderLatex(model) : renderJson(model);
   } else {
     if (format !== 'json') throw new InputError(`a ${item.origin} result is exported as JSON (its command's --json document); ${format} is for search results`, 'format');
     text = toJsonText(d.doc) + '\n';
