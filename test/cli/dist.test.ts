@@ -1,5 +1,6 @@
 /** `gradus dist` and `gradus statistics` as users meet them (child processes). */
 import { describe, expect, it } from 'vitest';
+import { qOrderedStirling } from '../../src/core/qanalogs.js';
 import { runCli } from '../helpers/cli.js';
 
 describe('gradus dist', { timeout: 60_000 }, () => {
@@ -47,6 +48,16 @@ describe('gradus dist', { timeout: 60_000 }, () => {
     const o = runCli(['dist', 'ordered-set-partitions', 'osp-minimaj', '--n', '4', '--k', '2', '--json']);
     // [2]_q Stir_q(4,2) = (1+q)(3 + 3q + q²) = 3 + 6q + 4q² + q³ (MATH.md §1 recurrence, by hand)
     expect(JSON.parse(o.stdout).series).toEqual([3, 6, 4, 1]);
+  });
+
+  it('--workers 2 starts worker threads from the command line and gives the same series', () => {
+    const r = runCli(['dist', 'ordered-set-partitions', 'osp-dinv', '--n', '5', '--k', '3', '--workers', '2', '--json']);
+    expect(r.code).toBe(0);
+    const doc = JSON.parse(r.stdout);
+    expect(doc.provenance.workers).toBe(2);
+    // [3]_q! Stir_q(5,3) (MATH.md §4), at q = 1: 3!·S(5,3) = 150
+    expect(doc.count).toBe(150);
+    expect(doc.series).toEqual(qOrderedStirling(5, 3).toQArray().map(Number));
   });
 
   it('bad input exits 2 with one line naming the nearest names or the limit option', () => {
