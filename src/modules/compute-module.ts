@@ -22,6 +22,7 @@ import { buildSeedPolynomial } from './seed-polynomial.js';
 import { seedSupport } from './seed-support.js';
 import { seedTerms, type SeedSpec } from './seeds.js';
 import { mergeRuns } from './merge-runs.js';
+import { parallelRanks } from './parallel-ranks.js';
 
 export interface ModuleSpec extends SeedSpec {
   /** Operator family names: x, y, theta, polar1, polar2, … */
@@ -39,6 +40,8 @@ export interface ModuleOptions {
   readonly onEstimate?: (units: number, seconds: number) => void;
   readonly onProgress?: (done: number, total: number, label: string) => void;
   readonly signal?: AbortSignal;
+  /** Ranks computed elsewhere (parallel workers) for the exact-integer seed: [prime][task][cell]. */
+  readonly youngRanks?: { readonly primes: readonly number[]; readonly ranks: readonly (readonly (readonly number[])[])[] };
 }
 
 export const DEFAULT_MAX_WORK = 2e9;
@@ -98,7 +101,8 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
       const chi = chiOf(sp.character);
       if (method === 'young') {
         if (exactSeed && (p === p1 || p === p2)) {
-          const ranks = derivativeRanks(exactSeed, dops, chi, [p1, p2], 0, hooks);
+          const given = options.youngRanks;
+          const ranks = given && given.primes[0] === p1 && given.primes[1] === p2 ? given.ranks : derivativeRanks(exactSeed, dops, chi, [p1, p2], 0, hooks);
           cache.set(p1, cellsFromRanks(exactSeed, dops, chi, ranks[0]!));
           cache.set(p2, cellsFromRanks(exactSeed, dops, chi, ranks[1]!));
           return cache.get(p)!;
@@ -137,5 +141,39 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
     frobenius: frobOk,
     checks: moduleChecks(spec.n, live, axes),
     provenance: { primes, field, method: methodText, confirmation, notes, seconds: (performance.now() - t0) / 1000, version: VERSION },
+  };
+}
+
+/** Seconds of estimated work above which the derivative route uses worker threads. */
+export const PARALLEL_THRESHOLD_SECONDS = 3;
+
+/**
+ * computeModule on both cores: for large derivative closures with exact-integer entries the
+ * Young-subgroup tasks run in worker threads; everything else runs as computeModule.
+ */
+export async function computeModuleAsync(spec: ModuleSpec, options: ModuleOptions = {}): Promise<ModuleResult> {
+  const ops = parseOperatorFamilies(spec.ops);
+  const method = options.method ?? 'auto';
+  if (!isDerivativeOnly(ops) || (method !== 'auto' && method !== 'young')) return computeModule(spec, options);
+  const terms = seedTerms(spec);
+  const needs = { y: ops.some((o) => o.kind === 'y'), polar: false };
+  const p1 = options.prime ?? DEFAULT_PRIME;
+  const p2 = p1 === CONFIRM_PRIME ? DEFAULT_PRIME : CONFIRM_PRIME;
+  const probe = buildSeedPolynomial(spec.n, terms, primeCoeffs(p1), needs);
+  const support = seedSupport(probe.alg.space, p1, probe.f);
+  const est = estimateModuleWork(support, ops, 'young');
+  const exact = integerSeedSupport(support, terms);
+  const limit = options.maxWork ?? DEFAULT_MAX_WORK;
+  if (!exact || est.seconds < PARALLEL_THRESHOLD_SECONDS || est.units > limit) return computeModule(spec, options);
+  options.onEstimate?.(est.units, est.seconds);
+  const chi = probe.character === 'sign' ? -1 : probe.character === 'trivial' ? 1 : 0;
+  const dops = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
+  const t0 = performance.now();
+  const ranks = await parallelRanks(exact, dops, chi, [p1, p2], { onProgress: options.onProgress, signal: options.signal });
+  const result = computeModule(spec, { ...options, onEstimate: undefined, youngRanks: { primes: [p1, p2], ranks } });
+  const seconds = (performance.now() - t0) / 1000;
+  return {
+    ...result,
+    provenance: { ...result.provenance, seconds, notes: [...result.provenance.notes, 'Young-subgroup tasks ran in parallel worker threads'] },
   };
 }

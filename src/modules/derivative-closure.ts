@@ -82,11 +82,27 @@ export function cellsFromRanks(seed: SeedSupport, ops: DerivativeOps, chi: SeedC
   return cells;
 }
 
-/** Rank mod p of one cell matrix, sparse rows first, stopping at full column rank. */
+/**
+ * Rank mod p of one cell matrix. Tall matrices of small rank are first compressed by random
+ * row combinations (rank(R·A) = rank(A) with probability ≥ 1 − k/p when rank(A) < k; it is
+ * never larger), doubling k until the compressed rank falls below k.
+ */
 export function matrixRank(m: CellMatrix, p: number): number {
   const nRows = m.rows;
   const nCols = m.cols;
   if (nRows === 0 || nCols === 0) return 0;
+  const limit = Math.min(nRows, nCols);
+  // compression pays only when rows are sparse relative to the rank (measured: rarely here)
+  for (let k = 32; 2 * k <= limit && m.len < (nRows * nCols) / 64; k *= 2) {
+    const rk = compressedRank(m, p, k);
+    if (rk < k) return rk;
+  }
+  return directRank(m, p);
+}
+
+function directRank(m: CellMatrix, p: number): number {
+  const nRows = m.rows;
+  const nCols = m.cols;
   const start = new Int32Array(nRows + 1);
   for (let e = 0; e < m.len; e++) start[m.r[e]! + 1]!++;
   for (let r = 0; r < nRows; r++) start[r + 1]! += start[r]!;
@@ -103,6 +119,39 @@ export function matrixRank(m: CellMatrix, p: number): number {
   for (const r of order) {
     ech.insert(cols.subarray(start[r]!), vals.subarray(start[r]!), start[r + 1]! - start[r]!);
     if (ech.rank === Math.min(nCols, nRows)) break;
+  }
+  return ech.rank;
+}
+
+/** Rank of R·A for a k × rows random R (deterministic generator, so runs repeat exactly). */
+function compressedRank(m: CellMatrix, p: number, k: number): number {
+  const nCols = m.cols;
+  let state = (0x9e3779b9 ^ (k * 2654435761) ^ m.rows) >>> 0;
+  const rand = new Float64Array(m.rows * k);
+  for (let i = 0; i < rand.length; i++) {
+    // xorshift32, two draws per residue (p < 2^26)
+    state ^= state << 13;
+    state >>>= 0;
+    state ^= state >>> 17;
+    state ^= state << 5;
+    state >>>= 0;
+    const hi = state & 0x3ffffff;
+    rand[i] = hi % p;
+  }
+  const bt = new Float64Array(nCols * k); // transposed: bt[c·k + j]
+  for (let e = 0; e < m.len; e++) {
+    let v = m.v[e]! % p;
+    if (v < 0) v += p;
+    if (v === 0) continue;
+    const rOff = m.r[e]! * k;
+    const cOff = m.c[e]! * k;
+    for (let j = 0; j < k; j++) bt[cOff + j] = (bt[cOff + j]! + rand[rOff + j]! * v) % p;
+  }
+  const ech = new EchelonModP(p, nCols);
+  const row = new Float64Array(nCols);
+  for (let j = 0; j < k; j++) {
+    for (let c = 0; c < nCols; c++) row[c] = bt[c * k + j]!;
+    ech.insertDense(row);
   }
   return ech.rank;
 }

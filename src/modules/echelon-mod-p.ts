@@ -11,12 +11,14 @@ export class EchelonModP {
   private width: number;
   private work: Float64Array;
   private isPivot: Uint8Array;
+  private readonly invP: number;
 
   constructor(
     readonly p: number,
     width = 16,
   ) {
     this.width = Math.max(1, width);
+    this.invP = 1 / p;
     this.work = new Float64Array(this.width);
     this.isPivot = new Uint8Array(this.width);
   }
@@ -99,9 +101,14 @@ export class EchelonModP {
       if (a === 0) continue;
       const row = rows[r]!;
       const m = p - a;
+      const inv = this.invP;
       for (let j = pcs[r]!; j < width; j++) {
         const b = row[j]!;
-        if (b !== 0) w[j] = (w[j]! + m * b) % p;
+        if (b === 0) continue;
+        // x < 2^53 exactly; the floor estimate may be off by one, fixed below (much faster than %)
+        const x = w[j]! + m * b;
+        const y = x - Math.floor(x * inv) * p;
+        w[j] = y < 0 ? y + p : y >= p ? y - p : y;
       }
       // entries left of the pivot column are zero in every stored row by construction
     }

@@ -1,7 +1,7 @@
 /** `gradus module`: closure of a seed under operator families, with Hilbert and Frobenius series. */
 import { InputError } from '../../core/errors.js';
 import { unknownNameMessage } from '../../core/suggest.js';
-import { computeModule, DEFAULT_MAX_WORK, type ModuleMethod } from '../../modules/compute-module.js';
+import { computeModuleAsync, DEFAULT_MAX_WORK, type ModuleMethod } from '../../modules/compute-module.js';
 import { resultToJson, resultToText } from '../../modules/format-result.js';
 import { SEED_NAMES, type SeedName } from '../../modules/seeds.js';
 import { formatDuration } from '../progress.js';
@@ -60,7 +60,7 @@ export const moduleCommand: CommandSpec = {
     '  poly                     --poly "<superpolynomial>" as typed (or --symmetrize / --antisymmetrize)',
     'example: gradus module --seed superspace-vandermonde --n 4 --k 2 --ops x,theta --frobenius',
   ].join('\n'),
-  run(args, io) {
+  async run(args, io) {
     const seedName = strOpt(args, 'seed');
     if (!seedName) throw new InputError(`module needs --seed NAME (${SEED_NAMES.join(', ')})`, 'seed');
     if (!(SEED_NAMES as readonly string[]).includes(seedName)) throw new InputError(`--seed: ${unknownNameMessage('seed', seedName, SEED_NAMES)}`, 'seed');
@@ -79,7 +79,7 @@ export const moduleCommand: CommandSpec = {
     const th = intList(args, 'theta');
     const poly = strOpt(args, 'poly');
     const prime = intOpt(args, 'prime');
-    const result = computeModule(
+    const result = await computeModuleAsync(
       {
         seed: seedName as SeedName,
         n,

@@ -1,0 +1,64 @@
+/**
+ * Young-subgroup ranks on both cores: worker threads take tasks from a queue (largest
+ * groups' complements first, i.e. the costliest first), each computing every prime.
+ * Only for exact-integer seeds (one enumeration per task serves all primes).
+ */
+import { availableParallelism } from 'node:os';
+import { Worker } from 'node:worker_threads';
+import { closurePlan, type DerivativeOps } from './derivative-closure.js';
+import type { SeedChi } from './derivative-matrices.js';
+import type { RankWorkerData } from './rank-worker.js';
+import type { SeedSupport } from './seed-support.js';
+
+function groupOrder(blocks: readonly number[]): number {
+  let s = 1;
+  for (const b of blocks) for (let i = 2; i <= b; i++) s *= i;
+  return s;
+}
+
+export async function parallelRanks(
+  seed: SeedSupport,
+  ops: DerivativeOps,
+  chi: SeedChi,
+  primes: readonly number[],
+  hooks: { onProgress?: (done: number, total: number, label: string) => void; signal?: AbortSignal } = {},
+  threads = Math.min(2, availableParallelism()),
+): Promise<number[][][]> {
+  const plan = closurePlan(seed.space.n, chi);
+  const queue = plan.map((_, i) => i).sort((a, b) => groupOrder(plan[a]!.blocks) - groupOrder(plan[b]!.blocks));
+  const out = primes.map(() => plan.map(() => [] as number[]));
+  const { space, ...rest } = seed;
+  const data: RankWorkerData = { space: { n: space.n, hasY: space.hasY, hasTheta: space.hasTheta, radix: space.radix }, seed: rest, ops, chi, primes };
+  let done = 0;
+  const workers: Worker[] = [];
+  try {
+    await Promise.all(
+      Array.from({ length: threads }, () => {
+        const w = new Worker(new URL('./rank-worker-entry.mjs', import.meta.url), { workerData: data });
+        workers.push(w);
+        return new Promise<void>((resolve, reject) => {
+          const next = (): void => {
+            if (hooks.signal?.aborted) {
+              reject(hooks.signal.reason ?? new Error('aborted'));
+              return;
+            }
+            const t = queue.shift();
+            w.postMessage(t === undefined ? null : t);
+            if (t === undefined) resolve();
+          };
+          w.on('message', (msg: { task: number; ranks: number[][] }) => {
+            msg.ranks.forEach((r, pi) => (out[pi]![msg.task] = r));
+            done++;
+            hooks.onProgress?.(done, plan.length, `task ${plan[msg.task]!.blocks.join(',')}`);
+            next();
+          });
+          w.on('error', reject);
+          next();
+        });
+      }),
+    );
+  } finally {
+    await Promise.all(workers.map((w) => w.terminate()));
+  }
+  return out;
+}
