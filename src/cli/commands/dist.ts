@@ -55,6 +55,7 @@ function printText(d: Distribution, out: (s: string) => void): void {
       for (const t of d.frobenius.terms) out(`  s(${t.shape!.join(',')}): ${t.series.toString()}`);
     }
   }
+  out(`(${d.provenance.method}; ${d.provenance.ms} ms; gradus ${d.provenance.version})`);
 }
 
 export const distCommand: CommandSpec = {

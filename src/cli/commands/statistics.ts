@@ -15,7 +15,7 @@ export const statisticsCommand: CommandSpec = {
     if (familyId !== undefined) familyById(familyId); // unknown family: InputError with the nearest ids
     const list = STATISTICS.filter((s) => familyId === undefined || s.family === familyId);
     if (args.options['json']) {
-      io.out(toJsonText(list.map((s) => ({ id: s.id, family: s.family, description: s.description, source: s.source }))));
+      io.out(toJsonText(list.map((s) => ({ id: s.id, family: s.family, description: s.description, source: s.source, fastPath: s.step !== undefined }))));
       return;
     }
     const families = [...new Set(list.map((s) => s.family))].sort();
