@@ -27,6 +27,7 @@ describe('Tour screen (demo session)', () => {
     await press(r, KEYS.enter);
     f = await waitForFrame(r, (x) => x.includes('✓ 3.'), 30_000);
     expect(f).toMatch(/no match|candidate/);
+    expect(f).toContain('θ-degree 0 row');
     expect(f).toContain('tried:');
     expect(fits(f, 80, 24)).toBe(true);
     await press(r, KEYS.enter);

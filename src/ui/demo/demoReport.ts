@@ -24,9 +24,16 @@ export function stepReport(step: number, s: DemoState, withTable: boolean): Repo
   if (step === 1 && s.target) {
     out.push({ text: s.target.label, tone: 'dim' });
     for (const e of s.target.entries) out.push({ text: `  ${entryKey(e.n, e.k)}: ${seriesText(e.series)}` });
+    const more = (s.targets ?? []).slice(1);
+    if (more.length) out.push({ text: `and ${more.length} more: ${more.map((t) => t.label.split(' of ')[0]).join('; ')}`, tone: 'dim' });
   }
   if (step === 2 && s.search) {
     if (s.catalogue) out.push({ text: `catalogue: ${s.catalogue.note}`, tone: 'dim' });
+    for (const x of s.searches ?? []) {
+      const what = x.targetLabel.split(' of ')[0];
+      out.push({ text: `${x.candidates.length ? '✓' : '·'} ${what}: ${x.candidates.length ? `${x.candidates.length} candidate(s)` : 'no match'}`, tone: x.candidates.length ? 'ok' : 'dim' });
+    }
+    out.push({ text: `In detail — ${s.search.targetLabel.split(' of ')[0]}:` });
     for (const r of s.search.recognition) out.push({ text: r, tone: 'accent' });
     const c = s.search.candidates;
     if (c.length === 0) {

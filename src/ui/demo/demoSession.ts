@@ -9,14 +9,14 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Poly } from '../../core/poly.js';
-import { qSeries } from '../../series/series.js';
+import { qSeries, qtSeries } from '../../series/series.js';
 import { makeTarget, type Target } from '../../series/target.js';
 import { Catalogue } from '../../store/catalogue.js';
 import { cataloguePath } from '../../store/cataloguePath.js';
 import { exportItem, EXPORT_ENGINE_AVAILABLE, type ExportDone } from '../engines/exporter.js';
 import { startModule } from '../engines/modules.js';
 import { tableOf, type ModuleOutcome } from '../engines/moduleTypes.js';
-import { APP_CATALOGUE_N_MAX, startCatalogueBuild, startSearch } from '../engines/search.js';
+import { APP_CATALOGUE_N_MAX, startCatalogueBuild, startSearches } from '../engines/search.js';
 import type { SearchOutcome } from '../engines/searchTypes.js';
 import type { Job, JobProgress } from '../engines/workerJob.js';
 import { DEMO_NS, demoRequest, demoSeedText, DEMO_SHOWN_N } from './demoSeed.js';
@@ -24,6 +24,9 @@ import { DEMO_NS, demoRequest, demoSeedText, DEMO_SHOWN_N } from './demoSeed.js'
 export interface DemoState {
   readonly modules?: readonly ModuleOutcome[];
   readonly target?: Target;
+  /** Every series tried, the Hilbert series first. */
+  readonly targets?: readonly Target[];
+  readonly searches?: readonly SearchOutcome[];
   readonly catalogue?: { readonly path: string; readonly note: string };
   readonly search?: SearchOutcome;
   readonly exported?: ExportDone;
@@ -47,13 +50,29 @@ export interface DemoStep {
 
 /** The Hilbert series by x-degree (summed over θ) of each module, as a target over n. */
 export function demoTarget(modules: readonly ModuleOutcome[]): Target {
-  const entries = modules.map((m) => {
-    const table = tableOf(m);
-    const cols = table[0]?.length ?? 0;
-    const sums = Array.from({ length: cols }, (_, j) => table.reduce((s, row) => s + (row[j] ?? 0n), 0n));
-    return { n: m.n, series: qSeries(Poly.fromQCoeffs(sums)) };
+  return demoTargets(modules)[0]!;
+}
+
+/**
+ * The series of the demo's modules that the search tries, over n: the Hilbert series by
+ * x-degree, each θ-degree row alone, and the whole (x, θ) table as a q,t series.
+ */
+export function demoTargets(modules: readonly ModuleOutcome[]): Target[] {
+  const seed = `${demoSeedText(DEMO_SHOWN_N)} and its family`;
+  const tables = modules.map((m) => ({ n: m.n, table: tableOf(m) }));
+  const rows = Math.max(...tables.map((t) => t.table.length));
+  const byX = tables.map(({ n, table }) => {
+    const cols = Math.max(...table.map((r) => r.length));
+    return { n, series: qSeries(Poly.fromQCoeffs(Array.from({ length: cols }, (_, j) => table.reduce((s, row) => s + (row[j] ?? 0n), 0n)))) };
   });
-  return makeTarget(`Hilbert series by x-degree of ${demoSeedText(DEMO_SHOWN_N)} and its family, under ∂x and ∂θ`, entries);
+  const out = [makeTarget(`Hilbert series by x-degree of ${seed}, under ∂x and ∂θ`, byX)];
+  for (let i = 0; i < rows; i++) {
+    out.push(makeTarget(`θ-degree ${i} row of ${seed}`, tables.map(({ n, table }) => ({ n, series: qSeries(Poly.fromQCoeffs(table[i] ?? [])) }))));
+  }
+  // Table rows are θ-degrees and columns x-degrees: q marks x, t marks θ.
+  const qt = tables.map(({ n, table }) => ({ n, series: qtSeries(Poly.fromQTTable((table[0] ?? []).map((_, j) => table.map((r) => r[j] ?? 0n)))) }));
+  out.push(makeTarget(`(x, θ) Hilbert table of ${seed} (q marks x, t marks θ)`, qt));
+  return out;
 }
 
 /** The user's catalogue when there is one; otherwise a demo catalogue in the temp folder (built once). */
@@ -83,21 +102,24 @@ export const DEMO_STEPS: readonly DemoStep[] = [
     },
   },
   {
-    title: 'Take its Hilbert series by x-degree as a search target',
+    title: 'Take its series as search targets: by x-degree, each θ row, the (x, θ) table',
     async run(state) {
       if (!state.modules) throw new Error('the module step has not run');
-      return { ...state, target: demoTarget(state.modules) };
+      const targets = demoTargets(state.modules);
+      return { ...state, target: targets[0], targets };
     },
   },
   {
-    title: 'Search the catalogue for statistics with that distribution',
+    title: 'Search the catalogue for statistics with those distributions',
     async run(state, env, runJob, onProgress) {
-      if (!state.target) throw new Error('the series step has not run');
+      if (!state.targets) throw new Error('the series step has not run');
       const choice = chooseCatalogue(env);
       // Building resumes where it stopped, so an existing demo catalogue costs nothing.
       if (!choice.ready) await runJob(startCatalogueBuild(choice.path, APP_CATALOGUE_N_MAX, onProgress));
-      const search = await runJob(startSearch(state.target, choice.path, onProgress));
-      return { ...state, catalogue: { path: choice.path, note: choice.note }, search };
+      const searches = await runJob(startSearches(state.targets, choice.path, onProgress));
+      // The result to export: the first series with a match, else the Hilbert series' report.
+      const search = searches.find((x) => x.candidates.length > 0) ?? searches[0]!;
+      return { ...state, catalogue: { path: choice.path, note: choice.note }, searches, search };
     },
   },
   {

@@ -6,7 +6,7 @@ import { computeModule } from '../../modules/compute-module.js';
 import { resultToJson } from '../../modules/format-result.js';
 import { recognise } from '../../match/recognise.js';
 import { searchCatalogue } from '../../match/search.js';
-import { searchDocument } from '../../match/searchDocument.js';
+import { searchDocument, type SearchDocument } from '../../match/searchDocument.js';
 import { rangeText } from '../../series/target.js';
 import { targetFromJson } from '../../series/targetFile.js';
 import { buildCatalogue } from '../../store/buildCatalogue.js';
@@ -24,6 +24,26 @@ import type { ModuleRequest } from './moduleRequest.js';
 export type ProgressFn = (label: string, done: number, total?: number) => void;
 export type JobTask = (input: unknown, progress: ProgressFn) => unknown | Promise<unknown>;
 
+function searchMany(targets: readonly unknown[], catalogue: string, progress: ProgressFn): { doc: SearchDocument; id: number; ms: number }[] {
+  const cat = Catalogue.open(catalogue, { readonly: true });
+  try {
+    return targets.map((tj, i) => {
+      progress('searching the catalogue', i, targets.length);
+      const target = targetFromJson(tj);
+      const t0 = Date.now();
+      const outcome = searchCatalogue(cat, target);
+      const rec = recognise(target);
+      const ms = Date.now() - t0;
+      const prov = provenance({ target: target.label, catalogue }, 'exact look-up of series hashes in the catalogue, then exact comparison on every entry', [], ms / 1000);
+      const doc = searchDocument(target, rangeText(target.entries), rec, outcome, prov);
+      const id = cat.saveSearch(target.label, doc, prov);
+      return { doc, id, ms };
+    });
+  } finally {
+    cat.close();
+  }
+}
+
 export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
   // The same engine entry `gradus module` calls; the result is plain data.
   module: (input, progress) => {
@@ -40,22 +60,13 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
   },
   // The same calls `gradus search` makes, and the search is kept in the catalogue.
   search: (input, progress) => {
-    const { target: tj, catalogue } = input as { target: unknown; catalogue: string };
-    const target = targetFromJson(tj);
-    progress('searching the catalogue', 0);
-    const cat = Catalogue.open(catalogue, { readonly: true });
-    try {
-      const t0 = Date.now();
-      const outcome = searchCatalogue(cat, target);
-      const rec = recognise(target);
-      const ms = Date.now() - t0;
-      const prov = provenance({ target: target.label, catalogue }, 'exact look-up of series hashes in the catalogue, then exact comparison on every entry', [], ms / 1000);
-      const doc = searchDocument(target, rangeText(target.entries), rec, outcome, prov);
-      const id = cat.saveSearch(target.label, doc, prov);
-      return { doc, id, ms };
-    } finally {
-      cat.close();
-    }
+    const { target, catalogue } = input as { target: unknown; catalogue: string };
+    return searchMany([target], catalogue, progress)[0];
+  },
+  // Several targets in one go (the demo tries a module's series one after another).
+  'search-many': (input, progress) => {
+    const { targets, catalogue } = input as { targets: unknown[]; catalogue: string };
+    return searchMany(targets, catalogue, progress);
   },
   // The same engine call as `gradus catalogue build`.
   'catalogue-build': (input, progress) => {

@@ -20,6 +20,12 @@ export function startSearch(target: Target, cataloguePath: string, onProgress: (
   return { result: job.result.then((r) => searchOutcome(r.doc, r.id, r.ms)), cancel: job.cancel };
 }
 
+/** Several targets searched in one worker, in order. */
+export function startSearches(targets: readonly Target[], cataloguePath: string, onProgress: (p: JobProgress) => void): Job<SearchOutcome[]> {
+  const job = startJob<{ doc: SearchDocument; id: number; ms: number }[]>('search-many', { targets: targets.map(targetToJson), catalogue: cataloguePath }, onProgress);
+  return { result: job.result.then((rs) => rs.map((r) => searchOutcome(r.doc, r.id, r.ms))), cancel: job.cancel };
+}
+
 export interface BuildSummary {
   readonly text: string;
 }
