@@ -14,6 +14,7 @@ export const wordInversions: Statistic<Word> = {
     [[1, 2, 1, 2], 1],
     [[2, 2, 1, 1], 4],
   ],
+  step: (_at, _v, _prev, rank) => rank, // smaller letters still to come,
   compute(w) {
     const n = w.length;
     let s = 0;

@@ -13,6 +13,7 @@ export const wordMajorIndex: Statistic<Word> = {
     [[1, 2, 1, 2], 2],
     [[2, 2, 1, 1], 2],
   ],
+  step: (at, v, prev) => (prev > v ? at : 0),
   compute(w) {
     let s = 0;
     for (let i = 1; i < w.length; i++) if (w[i - 1]! > w[i]!) s += i;
@@ -30,6 +31,7 @@ export const wordDescents: Statistic<Word> = {
     [[2, 1, 2, 1], 2],
     [[2, 2, 1, 1], 1],
   ],
+  step: (_at, v, prev) => (prev > v ? 1 : 0),
   compute(w) {
     let s = 0;
     for (let i = 1; i < w.length; i++) if (w[i - 1]! > w[i]!) s++;

@@ -4,6 +4,7 @@ import { Tally } from '../../src/enumerate/tally.js';
 import { computeDistribution } from '../../src/enumerate/distribution.js';
 import { walkOrderedSetPartitions } from '../../src/enumerate/fast/osp-walk.js';
 import { walkPermutations } from '../../src/enumerate/fast/permutation-walk.js';
+import { walkWords } from '../../src/enumerate/fast/word-walk.js';
 import { STATISTICS } from '../../statistics/index.js';
 import { inversions } from '../../statistics/inversions.js';
 import { majorIndex } from '../../statistics/major-index.js';
@@ -26,6 +27,13 @@ describe('prefix walks', () => {
           const [a, b, method] = await both('permutations', { n }, [s.id]);
           expect(a, `${s.id} n=${n}`).toBe(b);
           expect(method).toContain('prefix walk');
+        }
+      } else if (s.family === 'words') {
+        for (const content of [[], [2], [2, 1], [1, 2, 2], [3, 0, 2], [2, 2, 1, 1]]) {
+          const fast = await computeDistribution({ family: 'words', params: { content }, statistics: [s.id] }, { workers: 1 });
+          const slow = await computeDistribution({ family: 'words', params: { content }, statistics: [s.id], generic: true }, { workers: 1 });
+          expect(fast.series.toString(), `${s.id} ${content.join(',')}`).toBe(slow.series.toString());
+          expect(fast.provenance.method).toContain('prefix walk');
         }
       } else {
         expect(s.family).toBe('ordered-set-partitions');
@@ -61,6 +69,12 @@ describe('prefix walks', () => {
       for (let index = 0; index < count; index++) walkOrderedSetPartitions(6, 3, ospInv.step!, () => 0, (a, b) => op.add(a, b), { index, count });
       expect(op.toPoly().equals(ow.toPoly())).toBe(true);
       expect(op.total).toBe(540); // 3!·S(6,3) = 6·90
+      const ww = new Tally();
+      walkWords([2, 1, 2], inversions.step!, majorIndex.step!, (a, b) => ww.add(a, b));
+      const wp = new Tally();
+      for (let index = 0; index < count; index++) walkWords([2, 1, 2], inversions.step!, majorIndex.step!, (a, b) => wp.add(a, b), { index, count });
+      expect(wp.toPoly().equals(ww.toPoly())).toBe(true);
+      expect(wp.total).toBe(30); // 5!/(2!·1!·2!)
     }
   });
 });
