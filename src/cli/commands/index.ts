@@ -3,6 +3,7 @@ import type { CommandSpec } from '../command.js';
 import { appCommand } from './app.js';
 import { catalogueCommand } from './catalogue.js';
 import { searchCommand } from './search.js';
+import { exportCommand } from './export.js';
 import { demoCommand } from './demo.js';
 import { distCommand } from './dist.js';
 import { familiesCommand } from './families.js';
@@ -14,4 +15,4 @@ import { statisticsCommand } from './statistics.js';
 import { symCommand } from './sym.js';
 import { versionCommand } from './version.js';
 
-export const COMMANDS: readonly CommandSpec[] = [qseriesCommand, demoCommand, versionCommand, appCommand, catalogueCommand, searchCommand, moduleCommand, quotientCommand, familiesCommand, showCommand, statisticsCommand, distCommand, symCommand];
+export const COMMANDS: readonly CommandSpec[] = [qseriesCommand, demoCommand, versionCommand, appCommand, catalogueCommand, searchCommand, exportCommand, moduleCommand, quotientCommand, familiesCommand, showCommand, statisticsCommand, distCommand, symCommand];

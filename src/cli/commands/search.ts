@@ -2,6 +2,7 @@
 import { resolve } from 'node:path';
 import { InputError } from '../../core/errors.js';
 import { atomicWrite } from '../../export/atomicWrite.js';
+import { flagsText } from '../../export/flagsText.js';
 import { recognise } from '../../match/recognise.js';
 import { targetFromCommand } from '../../match/runFrom.js';
 import { searchCatalogue } from '../../match/search.js';
@@ -100,8 +101,7 @@ function printText(io: CommandIO, d: SearchDocument, id: number, limit: number):
   const r = d.recognition;
   if (r.formula) io.out(`formula: f = ${r.formula}  (verified on ${d.range})`);
   for (const x of r.recurrences) io.out(`recurrence: ${x.text}${x.name ? `  [${x.name}]` : ''}  (checked on ${x.checked} entries)`);
-  const flags = [r.palindromic ? 'palindromic' : 'not palindromic', r.unimodal ? 'unimodal' : 'not unimodal'];
-  io.out(`every entry: ${flags.join(', ')}`);
+  io.out(flagsText(r));
   const t = d.tried;
   const triedLine = `tried ${t.candidates} candidates at n = ${t.anchor?.n ?? '-'}${t.anchor?.k === undefined ? '' : `, k = ${t.anchor.k}`} (${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there) over ${t.families.length} families [${t.families.join(', ')}], ${t.statistics.length} statistics, forms ${t.combines.join('/')}, variants ${t.variants.join(', ')}; catalogue n ≤ ${t.catalogueMaxN}`;
   if (d.matches.length === 0) {
