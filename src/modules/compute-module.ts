@@ -10,7 +10,7 @@ import { toBigIntExact } from '../core/rational.js';
 import { VERSION } from '../version.js';
 import { moduleChecks } from './checks.js';
 import { primeCoeffs, rationalCoeffs } from './coefficients.js';
-import { cellsFromRanks, derivativeRanks } from './derivative-closure.js';
+import { cellsFromRanks, degreeBox, derivativeRanks } from './derivative-closure.js';
 import { integerSeedSupport } from './integer-seed.js';
 import { exactClosure } from './exact-closure.js';
 import { iteratedClosure } from './iterated-closure.js';
@@ -102,13 +102,14 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
       if (method === 'young') {
         if (exactSeed && (p === p1 || p === p2)) {
           const given = options.youngRanks;
-          const ranks = given && given.primes[0] === p1 && given.primes[1] === p2 ? given.ranks : derivativeRanks(exactSeed, dops, chi, [p1, p2], 0, hooks);
-          cache.set(p1, cellsFromRanks(exactSeed, dops, chi, ranks[0]!));
-          cache.set(p2, cellsFromRanks(exactSeed, dops, chi, ranks[1]!));
+          const ranks = given && given.primes[0] === p1 && given.primes[1] === p2 ? given.ranks : derivativeRanks([exactSeed], dops, chi, [p1, p2], 0, hooks);
+          const box = degreeBox([exactSeed]);
+          cache.set(p1, cellsFromRanks(spec.n, box, chi, ranks[0]!));
+          cache.set(p2, cellsFromRanks(spec.n, box, chi, ranks[1]!));
           return cache.get(p)!;
         }
         const support = p === p1 ? probeSupport : seedSupport(sp.alg.space, p, sp.f);
-        return cellsFromRanks(support, dops, chi, derivativeRanks(support, dops, chi, [p], p, hooks)[0]!);
+        return cellsFromRanks(spec.n, degreeBox([support]), chi, derivativeRanks([support], dops, chi, [p], p, hooks)[0]!);
       }
       return iteratedClosure(sp.alg, sp.f, probeSupport.degree, ops, { frobenius: chi !== 0, p, onProgress: options.onProgress, signal: options.signal });
     };

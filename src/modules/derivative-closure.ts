@@ -7,7 +7,7 @@
  */
 import { fLambda, partitionList } from '../core/partitions.js';
 import { EchelonModP } from './echelon-mod-p.js';
-import { derivativeMatrices, type CellMatrix, type SeedChi } from './derivative-matrices.js';
+import { boxIndex, DerivativeMatrixBuilder, type CellMatrix, type DegreeBox, type SeedChi } from './derivative-matrices.js';
 import type { ModuleCell } from './module-cell.js';
 import type { SeedSupport } from './seed-support.js';
 import { solveMultiplicities, youngPlan, type YoungTask } from './young-plan.js';
@@ -27,12 +27,22 @@ export function closurePlan(n: number, chi: SeedChi): readonly YoungTask[] {
   return chi === 0 ? [{ lambda: [], blocks: new Array<number>(n).fill(1), mode: 'sym' }] : youngPlan(n);
 }
 
+/** The box of target degrees reached from the seeds (ranges start at 0). */
+export function degreeBox(seeds: readonly SeedSupport[]): DegreeBox {
+  return {
+    x: Math.max(...seeds.map((s) => s.degree[0])) + 1,
+    y: Math.max(...seeds.map((s) => s.degree[1])) + 1,
+    theta: Math.max(...seeds.map((s) => s.degree[2])) + 1,
+  };
+}
+
 /**
- * Ranks of every cell for every task, one array per prime: ranks[prime][task][cell].
- * `seed` holds exact integers (modulus 0) or residues mod the single prime given.
+ * Ranks of every cell for every task, one array per prime: ranks[prime][task][cell], cells in
+ * the degree box of the seeds. The seeds hold exact integers (modulus 0) or residues mod the
+ * single prime given.
  */
 export function derivativeRanks(
-  seed: SeedSupport,
+  seeds: readonly SeedSupport[],
   ops: DerivativeOps,
   chi: SeedChi,
   primes: readonly number[],
@@ -40,18 +50,18 @@ export function derivativeRanks(
   hooks: ClosureHooks = {},
   tasks?: readonly number[],
 ): number[][][] {
-  const n = seed.space.n;
-  const [Dx, Dy, Dt] = seed.degree;
-  const range = { x: ops.x ? Dx : 0, y: ops.y ? Dy : 0, theta: ops.theta ? Dt : 0 };
-  const plan = closurePlan(n, chi);
+  const space = seeds[0]!.space;
+  const plan = closurePlan(space.n, chi);
+  const box = degreeBox(seeds);
   const which = tasks ?? plan.map((_, i) => i);
   const out = primes.map(() => plan.map(() => [] as number[]));
   let done = 0;
   for (const ti of which) {
     hooks.signal?.throwIfAborted();
-    const mats = derivativeMatrices(seed, range, plan[ti]!, chi, modulus);
+    const builder = new DerivativeMatrixBuilder(space, box, plan[ti]!, chi, modulus, seeds.length === 1);
+    for (const seed of seeds) builder.addSeed(seed, ops);
     primes.forEach((p, pi) => {
-      out[pi]![ti] = mats.map((m) => matrixRank(m, p));
+      out[pi]![ti] = builder.cells.map((m) => matrixRank(m, p));
     });
     done++;
     hooks.onProgress?.(done, which.length, `task ${plan[ti]!.blocks.join(',')} ${plan[ti]!.mode}`);
@@ -59,18 +69,16 @@ export function derivativeRanks(
   return out;
 }
 
-/** Cells from the ranks of one prime. */
-export function cellsFromRanks(seed: SeedSupport, ops: DerivativeOps, chi: SeedChi, ranks: readonly (readonly number[])[]): ModuleCell[] {
-  const n = seed.space.n;
-  const [Dx, Dy, Dt] = seed.degree;
+/** Cells from the ranks of one prime (all cells of the box, zero ones included). */
+export function cellsFromRanks(n: number, box: DegreeBox, chi: SeedChi, ranks: readonly (readonly number[])[]): ModuleCell[] {
   const plan = closurePlan(n, chi);
   const fl = partitionList(n).map((l) => Number(fLambda(l)));
   const cells: ModuleCell[] = [];
-  let idx = 0;
-  for (let a = 0; a <= (ops.x ? Dx : 0); a++)
-    for (let b = 0; b <= (ops.y ? Dy : 0); b++)
-      for (let c = 0; c <= (ops.theta ? Dt : 0); c++, idx++) {
-        const degree: [number, number, number] = [Dx - a, Dy - b, Dt - c];
+  for (let dx = box.x - 1; dx >= 0; dx--)
+    for (let dy = box.y - 1; dy >= 0; dy--)
+      for (let dt = box.theta - 1; dt >= 0; dt--) {
+        const idx = boxIndex(box, dx, dy, dt);
+        const degree: [number, number, number] = [dx, dy, dt];
         const values = plan.map((_, ti) => ranks[ti]![idx]!);
         if (chi === 0) {
           cells.push({ degree, dim: values[0]! });

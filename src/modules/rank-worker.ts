@@ -23,6 +23,6 @@ parentPort!.on('message', (task: number | null) => {
     parentPort!.close();
     return;
   }
-  const ranks = derivativeRanks(seed, data.ops, data.chi, data.primes, 0, {}, [task]);
+  const ranks = derivativeRanks([seed], data.ops, data.chi, data.primes, 0, {}, [task]);
   parentPort!.postMessage({ task, ranks: ranks.map((perPrime) => perPrime[task]!) });
 });
