@@ -12,8 +12,25 @@ describe('Modules screen', () => {
     r = renderApp({ initialScreen: 'modules' });
     expect(frame(r)).toContain('--seed monomial --n 3 --x-exponents 2,1,0 --theta 3 --ops x,theta');
     await press(r, KEYS.enter);
-    const f = await waitForFrame(r, (x) => x.includes('dimension 24'));
-    console.log(f);
+    let f = await waitForFrame(r, (x) => x.includes('dimension 24'));
+    expect(f).toContain('closure of ε(x1^2 x2 θ3) under ∂x, ∂θ, n=3');
+    // The Hilbert table of our seed at n = 3 (computed by the engine with two primes):
+    // θ-degree 0 row 1 3 5 3, θ-degree 1 row 3 5 3 1 — total 24 = 4!.
+    expect(f).toMatch(/θ0 +\[. 1\] +. 3 +. 5 +. 3/);
+    expect(f).toMatch(/θ1 +. 3 +. 5 +. 3 +. 1/);
+    expect(f).toContain('Frob(θ0 x0) s[3]');
+    expect(f).toContain('✓ holds Frobenius table invariant under ω with a half-turn');
     expect(fits(f, 80, 24)).toBe(true);
+    // Arrows move the selected cell; its Frobenius series follows.
+    await press(r, KEYS.down, KEYS.right);
+    f = frame(r);
+    expect(f).toMatch(/θ1 +. 3 +\[. 5\]/);
+    expect(f).toContain('Frob(θ1 x1)');
+    // g sends the selected row (θ = 1) to the search screen as its target.
+    await press(r, 'g');
+    f = frame(r);
+    expect(f).toContain('[6Search]');
+    expect(f).toContain('row θ=1 (q=x) of closure of ε(x1^2 x2 θ3)');
+    expect(f).toContain('n=3: q^3 + 3*q^2 + 5*q + 3');
   }, 30_000);
 });

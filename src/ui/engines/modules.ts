@@ -22,5 +22,5 @@ export function checkModuleRequest(line: string): void {
 export function startModule(line: string, onProgress: (p: JobProgress) => void): Job<ModuleOutcome> {
   const req = parseModuleRequest(line);
   const job = startJob<{ result: ModuleResult; json: unknown }>('module', req, onProgress);
-  return { result: job.result.then((r) => moduleOutcome(r.result, r.json)), cancel: job.cancel };
+  return { result: job.result.then((r) => moduleOutcome(r.result, r.json, req.spec)), cancel: job.cancel };
 }

@@ -92,8 +92,9 @@ export function ModulesScreen(props: ScreenProps) {
   const w = props.width;
   const selCells = outcome ? cellsAt(outcome, sel[0], sel[1]) : [];
   const frob = selCells.map((c) => c.frobenius).filter((f) => f !== '').join(' + ') || '0';
-  const findingsH = outcome ? Math.min(outcome.findings.length, 4) : 0;
-  const gridH = Math.max(3, props.height - 6 - findingsH);
+  const findingsH = outcome ? Math.min(outcome.findings.length, Math.max(2, props.height - 12)) : 0;
+  const frobH = props.height >= 24 ? 3 : 2;
+  const gridH = Math.max(3, props.height - 4 - frobH - findingsH);
   return (
     <Box flexDirection="column">
       {field === 'request' ? (
@@ -146,12 +147,14 @@ export function ModulesScreen(props: ScreenProps) {
             {outcome.axes.length > 2 ? ` (summed over ${outcome.axes.slice(2).join(', ')})` : ''}
           </Text>
           <ShadedGrid table={table} rowLabel={outcome.axes[1] ?? ''} colLabel={outcome.axes[0] ?? 'x'} selected={sel} width={w} height={gridH} />
-          <Text wrap="truncate">
+          <Box height={frobH} overflow="hidden">
+          <Text wrap="wrap">
             <Text {...theme.style('accent')}>Frob</Text>
             <Text {...theme.style('dim')}>({outcome.axes.length > 1 ? `${outcome.axes[1]}${sel[0]} ` : ''}{outcome.axes[0]}{sel[1]}) </Text>
             {frob}
           </Text>
-          <ModuleFindings findings={outcome.findings.slice(0, 4)} width={w} />
+          </Box>
+          <ModuleFindings findings={outcome.findings.slice(0, findingsH)} width={w} />
         </>
       ) : null}
     </Box>
