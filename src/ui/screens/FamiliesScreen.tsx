@@ -24,6 +24,7 @@ interface Stream {
 
 /** Objects 0..upTo−1 of the family, generated lazily and kept for scrolling back. */
 function take(stream: Stream, family: Family<unknown>, params: Params, upTo: number): void {
+  if (stream.error !== undefined || stream.seen[stream.seen.length - 1] === DONE) return;
   try {
     stream.iterator ??= family.generate(params)[Symbol.iterator]();
     while (stream.seen.length < upTo) {
