@@ -23,6 +23,7 @@ import { seedSupport } from './seed-support.js';
 import { seedTerms, type SeedSpec } from './seeds.js';
 import { mergeRuns } from './merge-runs.js';
 import { parallelRanks } from './parallel-ranks.js';
+import { polarizationReducible, polarizedSeeds } from './polarized-seeds.js';
 
 export interface ModuleSpec extends SeedSpec {
   /** Operator family names: x, y, theta, polar1, polar2, … */
@@ -54,15 +55,18 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
   const polar = ops.some((o) => o.kind === 'polar');
   const needs = { y: polar || ops.some((o) => o.kind === 'y'), polar };
   const derivOnly = isDerivativeOnly(ops);
-  const method = options.method === undefined || options.method === 'auto' ? (derivOnly ? 'young' : 'iterated') : options.method;
-  if (method === 'young' && !derivOnly) throw new LimitError('the young method handles derivative operators only (x, y, theta); use --method iterated', 'method');
+  const reducible = polarizationReducible(ops);
+  const method = options.method === undefined || options.method === 'auto' ? (derivOnly || reducible ? 'young' : 'iterated') : options.method;
+  if (method === 'young' && !derivOnly && !reducible) {
+    throw new LimitError('the young method needs derivative operators, or polarizations together with x (use --method iterated)', 'method');
+  }
   const frob = options.frobenius ?? false;
   const p1 = options.prime ?? DEFAULT_PRIME;
   const p2 = p1 === CONFIRM_PRIME ? DEFAULT_PRIME : CONFIRM_PRIME;
 
   const probe = buildSeedPolynomial(spec.n, terms, primeCoeffs(p1), needs);
   const probeSupport = seedSupport(probe.alg.space, p1, probe.f);
-  const est = estimateModuleWork(probeSupport, ops, method === 'young' ? 'young' : 'iterated');
+  const est = estimateModuleWork(probeSupport, ops, method === 'young' && derivOnly ? 'young' : 'iterated');
   options.onEstimate?.(est.units, est.seconds);
   const limit = method === 'exact' ? EXACT_MAX_WORK : options.maxWork ?? DEFAULT_MAX_WORK;
   if (est.units > limit) {
@@ -92,13 +96,18 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
     const chiOf = (c: string): -1 | 0 | 1 => (c === 'sign' ? -1 : c === 'trivial' ? 1 : 0);
     const hooks = { onProgress: options.onProgress, signal: options.signal };
     const cache = new Map<number, readonly ModuleCell[]>();
-    const exactSeed = method === 'young' ? integerSeedSupport(probeSupport, terms) : undefined;
+    const exactSeed = method === 'young' && derivOnly ? integerSeedSupport(probeSupport, terms) : undefined;
     if (exactSeed) notes.push('matrix entries are exact integers below 2^53: one enumeration serves both primes');
     const run = (p: number): readonly ModuleCell[] => {
       const hit = cache.get(p);
       if (hit) return hit;
       const sp = p === p1 ? probe : buildSeedPolynomial(spec.n, terms, primeCoeffs(p), needs);
       const chi = chiOf(sp.character);
+      if (method === 'young' && !derivOnly) {
+        const orders = ops.flatMap((o) => (o.kind === 'polar' ? [o.order] : []));
+        const seeds = polarizedSeeds(sp.alg, sp.f, orders).map((g) => seedSupport(sp.alg.space, p, g));
+        return cellsFromRanks(spec.n, degreeBox(seeds), chi, derivativeRanks(seeds, dops, chi, [p], p, hooks)[0]!);
+      }
       if (method === 'young') {
         if (exactSeed && (p === p1 || p === p2)) {
           const given = options.youngRanks;
@@ -119,7 +128,9 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
     confirmation = merged.confirmation;
     field = `F_p for p in {${primes.join(', ')}}`;
     methodText =
-      method === 'young'
+      method === 'young' && !derivOnly
+        ? 'polarized closure as the sum of the derivative closures of the polarized seeds P_J f (normal ordering); Schur multiplicities from ranks of Young-subgroup invariants (h) and anti-invariants (e) solved with Kostka numbers'
+        : method === 'young'
         ? 'derivative closure: graded pieces as images of the seed-coefficient maps; Schur multiplicities from ranks of Young-subgroup invariants (h) and anti-invariants (e) solved with Kostka numbers'
         : 'iterated closure degree by degree (semi-echelon form mod p); Schur multiplicities from ranks of Young-subgroup folds of each basis';
     notes.push('ranks mod p are lower bounds of ranks over Q; multiplicities are integer combinations of ranks, so no character value is lifted from F_p');
