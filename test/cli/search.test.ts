@@ -6,6 +6,8 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { checkFixture, latexBalanced, searchCore } from '../export/fixtures.js';
 import { runCli } from '../helpers/cli.js';
 
 let dir: string;
@@ -28,6 +30,22 @@ interface Match {
   complete: boolean;
 }
 
+/** Save the search, export it in our three formats, and compare with test/fixtures/search. */
+function exportFixtures(name: string, args: string[]): void {
+  const saved = join(dir, `${name}.search.json`);
+  const r = runCli(['search', ...args, '--catalogue', cat, '--save', saved]);
+  expect(r.code, r.stderr).toBe(0);
+  checkFixture(`${name}.search.json`, searchCore(readFileSync(saved, 'utf8')));
+  for (const [format, ext] of [['latex', 'tex'], ['markdown', 'md'], ['json', 'export.json']] as const) {
+    const out = join(dir, `${name}.${ext}`);
+    const e = runCli(['export', saved, '--format', format, '--out', out, '--limit', '1']);
+    expect(e.code, e.stderr).toBe(0);
+    const text = readFileSync(out, 'utf8');
+    if (format === 'latex') expect(latexBalanced(text)).toBe(true);
+    checkFixture(`${name}.${ext}`, text);
+  }
+}
+
 function search(args: string[]): { code: number; doc: { matches: Match[]; recognition: { recurrences: { text: string; name?: string }[] }; tried: { candidates: number } }; stderr: string } {
   const r = runCli(['search', ...args, '--catalogue', cat, '--json']);
   return { code: r.code, doc: r.code === 0 ? JSON.parse(r.stdout) : null, stderr: r.stderr };
@@ -42,14 +60,16 @@ describe('gradus search (acceptance)', () => {
     expect(m!.verified).toBe('n = 1..6, all k = 1..n');
     expect(m!.complete).toBe(true);
     expect(r.doc.recognition.recurrences[0]!.name).toBe('q-Stirling recurrence');
-  }, 60_000);
+    exportFixtures('delta-x-hilbert', ['--n-range', '1..6', '--from', 'module --seed superspace-vandermonde --ops x --n {n} --k {k}', '--take', 'hilbert']);
+  }, 120_000);
   it('the Vandermonde module, n ≤ 6: Σ q^maj s_shape over standard Young tableaux first (Lusztig–Stanley, MATH.md §4)', () => {
     const r = search(['--n-range', '1..6', '--from', 'module --seed vandermonde --ops x --n {n} --frobenius']);
     expect(r.code, r.stderr).toBe(0);
     const first = r.doc.matches[0]!;
     expect([first.family, first.statistics.join(), first.combine, first.variant]).toEqual(['standard-tableaux', 'tableau-major-index', 'shape', 'as-given']);
     expect(first.verified).toBe('n = 1..6');
-  }, 60_000);
+    exportFixtures('vandermonde-frobenius', ['--n-range', '1..6', '--from', 'module --seed vandermonde --ops x --n {n} --frobenius']);
+  }, 120_000);
   it('⟨∇e_n, e_n⟩, n ≤ 6: a pair of Dyck-path statistics, area with dinv or bounce (MATH.md §3, q,t-Catalan)', () => {
     const r = search(['--n-range', '1..6', '--from', 'sym "nabla(e({n}))"', '--take', 'sign']);
     expect(r.code, r.stderr).toBe(0);
@@ -57,7 +77,8 @@ describe('gradus search (acceptance)', () => {
     expect(pairs).toContain('dyck-area&dyck-bounce');
     expect(pairs).toContain('dyck-area&dyck-dinv');
     expect(r.doc.matches[0]!.verified).toBe('n = 1..6');
-  }, 60_000);
+    exportFixtures('nabla-en-sign', ['--n-range', '1..6', '--from', 'sym "nabla(e({n}))"', '--take', 'sign']);
+  }, 120_000);
   it('a typed target that nothing explains: "no match" and what was tried', { timeout: 30_000 }, () => {
     const r = runCli(['search', '--coeffs', 'n=3:1,3,1,1;n=4:2,0,5,1,7', '--catalogue', cat]);
     expect(r.code, r.stderr).toBe(0);
