@@ -29,6 +29,8 @@ console.log(`cores: ${availableParallelism()}, load average ${loadavg().map((x) 
 const perm11: DistRequest[] = [{ family: 'permutations', params: { n: 11 }, statistics: ['inversions'] }];
 const osp10: DistRequest[] = Array.from({ length: 10 }, (_, i) => ({ family: 'ordered-set-partitions', params: { n: 10, k: i + 1 }, statistics: ['osp-inv'] }));
 
+const cold = await timed('start-up: two workers on permutations of 3 (cold pool)', [{ ...perm11[0]!, params: { n: 3 } }], 2);
+console.log(`  worker start-up ≈ ${cold.toFixed(2)} s, paid once per process (the pool is kept)`);
 const p2 = await timed('inversions, permutations of 11, 2 workers', perm11, 2);
 const p1 = await timed('inversions, permutations of 11, 1 thread ', perm11, 1);
 console.log(`  target ≤ 10 s on 2 cores: ${p2 <= 10 ? 'met' : 'NOT met'}; 1 thread / 2 workers = ${(p1 / p2).toFixed(2)}`);

@@ -17,8 +17,10 @@ import { runShard, walkOf, type ShardOutcome } from './run-shard.js';
 import { Tally } from './tally.js';
 
 export const DEFAULT_MAX_OBJECTS = 2_000_000_000n;
-/** Below this many objects one thread is faster than starting workers. */
+/** Below this many objects one thread is faster than starting workers (plain path). */
 export const PARALLEL_THRESHOLD = 2_000_000n;
+/** The same for prefix walks, which run ten times faster per object. */
+export const WALK_PARALLEL_THRESHOLD = 20_000_000n;
 
 export interface DistOptions {
   /** Refuse runs over this many objects (default 2·10^9; the CLI option --max-objects). */
@@ -61,7 +63,8 @@ export async function computeDistribution(request: DistRequest, options: DistOpt
   const total = Number(expected);
   const onVisited = options.onProgress ? (v: number): void => options.onProgress!(v, total) : undefined;
   const cores = Math.max(1, availableParallelism());
-  const workers = options.workers ?? (expected >= PARALLEL_THRESHOLD ? cores : 1);
+  const threshold = walkOf(resolved) ? WALK_PARALLEL_THRESHOLD : PARALLEL_THRESHOLD;
+  const workers = options.workers ?? (expected >= threshold ? cores : 1);
   const outcomes: ShardOutcome[] = workers <= 1 ? [runShard(resolved, undefined, onVisited)] : await runParallel(request, workers, onVisited);
 
   const series = new Tally();
