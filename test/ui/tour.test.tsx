@@ -13,7 +13,7 @@ afterAll(() => rmSync(cat.dir, { recursive: true, force: true }));
 describe('Tour screen (demo session)', () => {
   it('runs the four steps with Enter and hands the results to the other screens', async () => {
     const r = renderApp({ env: { NO_COLOR: '1', GRADUS_CATALOGUE: cat.path }, cwd: cat.dir });
-    expect(frame(r)).toContain('▶ 1. Compute the closure of ε(x1^2 x2 θ3)');
+    expect(frame(r)).toContain('▶ 1. The module of ε(x1^2 x2 θ3) under ∂x, ∂θ');
     await press(r, KEYS.enter);
     let f = await waitForFrame(r, (x) => x.includes('✓ 1.'));
     // Our seed's module: dimension (n+1)! for n = 2, 3, 4 (computed here, confirmed by two primes).

@@ -94,7 +94,7 @@ function chooseCatalogue(env: DemoEnv): { path: string; note: string; ready: boo
 
 export const DEMO_STEPS: readonly DemoStep[] = [
   {
-    title: `Compute the closure of ${demoSeedText(DEMO_SHOWN_N)} (and its family for n = ${DEMO_NS.join(', ')}) under ∂x and ∂θ`,
+    title: `The module of ${demoSeedText(DEMO_SHOWN_N)} under ∂x, ∂θ (and its family, n = ${DEMO_NS.join(', ')})`,
     async run(state, _env, runJob, onProgress) {
       const modules: ModuleOutcome[] = [];
       for (const n of DEMO_NS) modules.push(await runJob(startModule(demoRequest(n), onProgress)));
@@ -102,7 +102,7 @@ export const DEMO_STEPS: readonly DemoStep[] = [
     },
   },
   {
-    title: 'Take its series as search targets: by x-degree, each θ row, the (x, θ) table',
+    title: 'Its series as targets: by x-degree, each θ row, the (x, θ) table',
     async run(state) {
       if (!state.modules) throw new Error('the module step has not run');
       const targets = demoTargets(state.modules);

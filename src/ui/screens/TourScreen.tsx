@@ -128,11 +128,13 @@ export function TourScreen(props: ScreenProps) {
       {view === 0 && shown ? (
         <ShadedGrid table={tableOf(shown)} rowLabel={shown.axes[1] ?? ''} colLabel={shown.axes[0] ?? 'x'} width={w} height={gridRows} />
       ) : null}
-      {report.slice(0, room).map((l, i) => (
-        <Text key={i} wrap="truncate" {...(l.tone ? theme.style(l.tone) : {})}>
-          {l.text}
-        </Text>
-      ))}
+      <Box flexDirection="column" height={room} overflow="hidden">
+        {report.map((l, i) => (
+          <Text key={i} wrap="wrap" {...(l.tone ? theme.style(l.tone) : {})}>
+            {l.text}
+          </Text>
+        ))}
+      </Box>
     </Box>
   );
 }
