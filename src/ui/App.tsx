@@ -4,7 +4,8 @@
  * any running work); only the current one receives keys.
  */
 import { Box, Text, useApp, useStdout } from 'ink';
-import { useKeys } from './hooks.js';
+import { setKeyErrorListener, useKeys } from './hooks.js';
+import { errorText } from './errorText.js';
 import { useCallback, useEffect, useMemo, useState, type ReactElement } from 'react';
 import { ErrorBoundary } from './components/ErrorBoundary.js';
 import { HelpLine } from './components/HelpLine.js';
@@ -85,6 +86,7 @@ export function App(props: AppProps) {
   }, []);
   const setCurrent = useCallback((id: number) => setSession((s) => ({ ...s, current: id })), []);
   const notify = useCallback((text: string, kind: 'info' | 'error' = 'info') => setStatus({ text, kind }), []);
+  useEffect(() => setKeyErrorListener((e) => notify(errorText(e), 'error')), [notify]);
 
   useKeys((input, key) => {
     if (key.tab) {

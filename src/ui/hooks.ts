@@ -13,6 +13,13 @@ export function useTicker(on: boolean, ms = 250): number {
   return now;
 }
 
+let keyErrorListener: (e: unknown) => void = () => {};
+
+/** Where errors thrown by key handlers go (the app shows them on its status line). */
+export function setKeyErrorListener(f: (e: unknown) => void): void {
+  keyErrorListener = f;
+}
+
 /**
  * useInput whose handler and active flag are always those of the latest render. ink
  * re-subscribes a changed handler (or active flag) only after React's effects run, so a
@@ -22,7 +29,13 @@ export function useKeys(handler: (input: string, key: Key) => void, isActive: bo
   const latest = useRef({ handler, isActive });
   latest.current = { handler, isActive };
   const stable = useCallback((input: string, key: Key) => {
-    if (latest.current.isActive) latest.current.handler(input, key);
+    if (!latest.current.isActive) return;
+    try {
+      latest.current.handler(input, key);
+    } catch (e) {
+      // A key handler that throws (an engine called synchronously) must not end the app.
+      keyErrorListener(e);
+    }
   }, []);
   useInput(stable);
 }

@@ -5,6 +5,7 @@
  */
 import { render } from 'ink';
 import { App } from './App.js';
+import { errorText } from './errorText.js';
 import type { ScreenId } from './screens.js';
 
 export async function runApp(options: { readonly initialScreen?: ScreenId; readonly cwd: string; readonly env: Readonly<Record<string, string | undefined>> }): Promise<void> {
@@ -15,6 +16,14 @@ export async function runApp(options: { readonly initialScreen?: ScreenId; reado
   const consoleError = console.error;
   console.error = () => {};
   if (alt) out.write('\x1b[?1049h\x1b[H');
+  // Last resort: anything that escapes the screens ends the app with one line, no trace.
+  const fatal = (e: unknown) => {
+    if (alt) out.write('\x1b[?1049l');
+    process.stderr.write(`gradus: ${errorText(e)}\n`);
+    process.exit(1);
+  };
+  process.on('uncaughtException', fatal);
+  process.on('unhandledRejection', fatal);
   try {
     const instance = render(<App env={options.env} cwd={options.cwd} initialScreen={options.initialScreen} />, {
       exitOnCtrlC: true,
@@ -22,6 +31,8 @@ export async function runApp(options: { readonly initialScreen?: ScreenId; reado
     });
     await instance.waitUntilExit();
   } finally {
+    process.off('uncaughtException', fatal);
+    process.off('unhandledRejection', fatal);
     if (alt) out.write('\x1b[?1049l');
     console.error = consoleError;
   }

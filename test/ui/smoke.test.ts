@@ -3,16 +3,24 @@
  * keys, and quits cleanly with exit code 0 and no stack trace.
  */
 import { spawn, spawnSync } from 'node:child_process';
-import { describe, expect, it } from 'vitest';
+import { rmSync } from 'node:fs';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { runCli } from '../helpers/cli.js';
+import { tinyCatalogue } from './tinyCatalogue.js';
 
 const ROOT = new URL('../..', import.meta.url).pathname;
 const hasScript = spawnSync('script', ['--version'], { encoding: 'utf8' }).status === 0;
+let cat: { dir: string; path: string };
+beforeAll(() => {
+  cat = tinyCatalogue();
+});
+afterAll(() => rmSync(cat.dir, { recursive: true, force: true }));
 
 function runInPty(keys: readonly { after: string | RegExp; send: string }[], timeoutMs = 30_000): Promise<{ code: number | null; out: string }> {
   return new Promise((resolve, reject) => {
     const child = spawn('script', ['-qfec', 'stty cols 80 rows 24; node bin/gradus.mjs', '/dev/null'], {
       cwd: ROOT,
-      env: { ...process.env, NO_COLOR: '' },
+      env: { ...process.env, NO_COLOR: '', GRADUS_CATALOGUE: cat.path },
       stdio: ['pipe', 'pipe', 'pipe'],
     });
     let out = '';
@@ -55,23 +63,31 @@ function runInPty(keys: readonly { after: string | RegExp; send: string }[], tim
 }
 
 describe.skipIf(!hasScript)('gradus in a pseudo-terminal', () => {
-  it('starts on the tour, moves through screens, and quits with exit code 0', async () => {
+  it('starts on the tour, computes its first step in a worker, moves through screens, and quits on Ctrl+C with exit code 0', async () => {
     const { code, out } = await runInPty([
-      { after: 'Tour', send: '2' },
+      { after: 'Enter runs step 1', send: '\r' },
+      { after: 'dimensions: n=2: 6, n=3: 24, n=4: 120', send: '2' },
       { after: 'family', send: '\t' },
       { after: 'statistic', send: '?' },
-      { after: 'Everywhere', send: 'q' },
+      { after: 'Everywhere', send: '\u0003' }, // Ctrl+C (q is tested in App.test.tsx)
     ]);
     expect(code).toBe(0);
     expect(out).toContain('gradus');
     expect(out).toContain('Everywhere');
+    expect(out).toContain('dimensions: n=2: 6, n=3: 24, n=4: 120');
     expect(out).not.toMatch(/\n\s+at .+\(.*:\d+:\d+\)/); // no stack trace
     expect(out).not.toMatch(/Error:/);
   }, 40_000);
+});
 
-  it('Ctrl+C quits cleanly too', async () => {
-    const { code, out } = await runInPty([{ after: 'Tour', send: '\u0003' }]);
-    expect(code).toBe(0);
-    expect(out).not.toMatch(/Error:/);
-  }, 40_000);
+describe('gradus without a terminal', () => {
+  it('prints the demo session as text, computed live, and exits 0', () => {
+    const r = runCli([], { input: '', env: { GRADUS_CATALOGUE: cat.path }, cwd: cat.dir });
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('gradus demo session');
+    expect(r.stdout).toContain('dimensions: n=2: 6, n=3: 24, n=4: 120');
+    expect(r.stdout).toMatch(/tried: \d+ candidates/);
+    expect(r.stdout).toMatch(/wrote \d+ bytes of Markdown/);
+    expect(r.stderr).not.toMatch(/\n\s+at /);
+  }, 60_000);
 });
