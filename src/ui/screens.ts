@@ -63,8 +63,10 @@ export const SCREENS: readonly ScreenInfo[] = [
     tab: 'Modules',
     title: 'Closure of a seed under operators: Hilbert and Frobenius series',
     keys: [
-      { keys: 'e', action: 'edit seed/n/k/operators' },
+      { keys: 'e', action: 'edit request' },
       { keys: 'Enter', action: 'compute' },
+      { keys: 's', action: 'next example seed' },
+      { keys: '+/-', action: 'n' },
       { keys: 'x', action: 'cancel' },
       { keys: 'arrows', action: 'select cell' },
       { keys: 'g', action: 'search the selected row' },

@@ -34,3 +34,21 @@ describe('Modules screen', () => {
     expect(f).toContain('n=3: q^3 + 3*q^2 + 5*q + 3');
   }, 30_000);
 });
+
+describe('Modules screen: choosing the request with keys', () => {
+  it('cycles example seeds with s and changes n with + and -', async () => {
+    r = renderApp({ initialScreen: 'modules' });
+    await press(r, 's');
+    expect(frame(r)).toContain('module --seed vandermonde --n 4 --ops x');
+    await press(r, '-');
+    expect(frame(r)).toContain('module --seed vandermonde --n 3 --ops x');
+    await press(r, KEYS.enter);
+    // Vandermonde n = 3: dimension 3! = 6 (MATH.md §4).
+    const f = await waitForFrame(r, (x) => x.includes('dimension 6'));
+    expect(f).toContain('Vandermonde');
+    // A module result is exported as the JSON of `gradus module --json`.
+    await press(r, '7');
+    expect(frame(r)).toContain('▶ module');
+    expect(frame(r)).toContain('[json]');
+  }, 30_000);
+});

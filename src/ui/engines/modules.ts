@@ -14,6 +14,20 @@ export const MODULE_ENGINE_AVAILABLE = true;
 /** Our own seed for the demo: ε(x1^2 x2 θ3), the staircase of n = 3 with θ on its last variable. */
 export const DEFAULT_MODULE_REQUEST = '--seed monomial --n 3 --x-exponents 2,1,0 --theta 3 --ops x,theta';
 
+/** Requests the `s` key cycles through: our seed first, then the named seeds. */
+export const MODULE_PRESETS: readonly string[] = [
+  DEFAULT_MODULE_REQUEST,
+  '--seed vandermonde --n 4 --ops x',
+  '--seed superspace-vandermonde --n 4 --k 2 --ops x,theta',
+  '--seed theta-staircase --n 4 --k 2 --ops x,theta',
+  '--seed superspace-vandermonde --n 3 --k 2 --ops x,y,polar1,polar2',
+];
+
+/** The request with --n changed by delta (1..10); unchanged when it names no --n. */
+export function bumpRequestN(line: string, delta: number): string {
+  return line.replace(/--n(\s+|=)(\d+)/, (_m, sep: string, v: string) => `--n${sep}${Math.min(10, Math.max(1, Number(v) + delta))}`);
+}
+
 /** Checks the request on this side (fast, one clear line) before a worker starts. */
 export function checkModuleRequest(line: string): void {
   parseModuleRequest(line);

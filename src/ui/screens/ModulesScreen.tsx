@@ -12,7 +12,7 @@ import { makeTarget } from '../../series/target.js';
 import { LineInput } from '../components/LineInput.js';
 import { ProgressBar } from '../components/ProgressBar.js';
 import { ShadedGrid } from '../components/ShadedGrid.js';
-import { DEFAULT_MODULE_REQUEST, MODULE_ENGINE_AVAILABLE, startModule } from '../engines/modules.js';
+import { bumpRequestN, DEFAULT_MODULE_REQUEST, MODULE_ENGINE_AVAILABLE, MODULE_PRESETS, startModule } from '../engines/modules.js';
 import { cellsAt, tableOf, type ModuleOutcome } from '../engines/moduleTypes.js';
 import { useTicker, useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
@@ -75,6 +75,11 @@ export function ModulesScreen(props: ScreenProps) {
         }
         return;
       }
+      if (input === 's') {
+        const at = MODULE_PRESETS.indexOf(request);
+        return setRequest(MODULE_PRESETS[(at + 1) % MODULE_PRESETS.length]!);
+      }
+      if (input === '+' || input === '=' || input === '-') return setRequest(bumpRequestN(request, input === '-' ? -1 : 1));
       if (input === 'g') return sendToSearch(false);
       if (input === 'G') return sendToSearch(true);
       if (!table) return;
