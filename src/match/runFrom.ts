@@ -17,7 +17,13 @@ export function splitWords(text: string): string[] {
   return out;
 }
 
-export async function targetFromCommand(template: string, nFrom: number, nTo: number, take: Take, env: CommandIO['env'], cwd: string, onStep?: (text: string) => void): Promise<Target> {
+/** Where results of data commands are kept and found again (the catalogue). */
+export interface ResultCache {
+  get(argv: readonly string[]): unknown | undefined;
+  put(argv: readonly string[], doc: unknown, n: number, k: number | undefined): void;
+}
+
+export async function targetFromCommand(template: string, nFrom: number, nTo: number, take: Take, env: CommandIO['env'], cwd: string, cache?: ResultCache, onStep?: (text: string) => void): Promise<Target> {
   if (!template.includes('{n}')) throw new InputError('--from needs {n} in the command (and {k} where it has a second parameter)', 'from');
   const words = splitWords(template);
   if (words[0] === 'gradus') words.shift();
@@ -29,6 +35,11 @@ export async function targetFromCommand(template: string, nFrom: number, nTo: nu
     for (const k of hasK ? Array.from({ length: n }, (_, i) => i + 1) : [undefined]) {
       const argv = words.map((w) => w.replaceAll('{n}', String(n)).replaceAll('{k}', String(k ?? '')));
       if (!argv.includes('--json')) argv.push('--json');
+      const kept = cache?.get(argv);
+      if (kept !== undefined) {
+        entries.push({ n, ...(k === undefined ? {} : { k }), series: seriesFromDocument(kept, take, `gradus ${argv.join(' ')}`) });
+        continue;
+      }
       const out: string[] = [];
       const err: string[] = [];
       const io: CommandIO = { out: (s) => out.push(s), err: (s) => err.push(s), progress: silentProgress, env, cwd };
@@ -42,6 +53,7 @@ export async function targetFromCommand(template: string, nFrom: number, nTo: nu
         throw new InputError(`--from: \`gradus ${argv.join(' ')}\` did not print one JSON document`, 'from');
       }
       entries.push({ n, ...(k === undefined ? {} : { k }), series: seriesFromDocument(doc, take, `gradus ${argv.join(' ')}`) });
+      cache?.put(argv, doc, n, k);
     }
   }
   return makeTarget(`gradus ${template}${take === 'auto' ? '' : ` (--take ${take})`}, n = ${nFrom}..${nTo}`, entries);

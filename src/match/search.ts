@@ -55,8 +55,10 @@ function chooseAnchor(entries: readonly TargetEntry[], maxN: number): TargetEntr
   const held = entries.filter((e) => e.n <= maxN);
   if (held.length === 0) return undefined;
   const n = Math.max(...held.map((e) => e.n));
-  const atN = held.filter((e) => e.n === n);
-  return atN.sort((a, b) => Math.abs((a.k ?? 0) - n / 2) - Math.abs((b.k ?? 0) - n / 2))[0];
+  // the richest entry there (largest count at q = 1), then k nearest n/2
+  const atN = held.filter((e) => e.n === n).map((e) => ({ e, c: seriesAtOne(e.series) }));
+  atN.sort((a, b) => (b.c > a.c ? 1 : b.c < a.c ? -1 : 0) || Math.abs((a.e.k ?? 0) - n / 2) - Math.abs((b.e.k ?? 0) - n / 2));
+  return atN[0]?.e;
 }
 
 export function searchCatalogue(cat: Catalogue, target: Target): SearchOutcome {
@@ -66,12 +68,12 @@ export function searchCatalogue(cat: Catalogue, target: Target): SearchOutcome {
   const kinds = kindsFor(target.kind);
   const counts = anchor0 ? cat.candidateCounts(kinds, anchor0.n, seriesAtOne(anchor0.series)) : { groups: 0, sameCount: 0, families: [], statistics: [] };
   const matches = new Map<string, SearchMatch>();
-  let exactAtAnchor = 0;
+  const exactGroups = new Set<string>();
   for (const v of variants) {
     const anchor = anchor0 && v.target.entries.find((e) => e.n === anchor0.n && e.k === anchor0.k);
     if (!anchor) continue;
     const rows = cat.byHash(seriesHash(anchor.series)).filter((r) => seriesEquals(r.series, anchor.series));
-    exactAtAnchor += rows.length;
+    for (const r of rows) exactGroups.add([r.family, r.statistics.join(','), r.combine, r.transform].join('|'));
     for (const row of rows) {
       for (const m of mappingsFor(anchor, row)) {
         const key = [row.family, row.statistics.join(','), row.combine, row.transform, m.text].join('|');
@@ -104,7 +106,7 @@ export function searchCatalogue(cat: Catalogue, target: Target): SearchOutcome {
       catalogueMaxN: maxN,
       candidates: counts.groups,
       sameCount: counts.sameCount,
-      exactAtAnchor,
+      exactAtAnchor: exactGroups.size,
       families: counts.families,
       statistics: counts.statistics,
       variants: variants.map((v) => v.id),
@@ -133,5 +135,8 @@ function verify(cat: Catalogue, row: StoredRow, m: Mapping, entries: readonly Ta
     if (!seriesEquals(r.series, e.series)) return undefined;
     verified.push(place);
   }
-  return verified.length > 0 ? { verified, unchecked } : undefined;
+  // at least two entries (or the only one), and at least half of those the catalogue could hold
+  const held = entries.filter((e) => e.n <= cat.maxN()).length;
+  const enough = verified.length >= Math.min(2, entries.length) && 2 * verified.length >= held;
+  return enough ? { verified, unchecked } : undefined;
 }

@@ -9,7 +9,8 @@
 import { InputError } from '../core/errors.js';
 import { Poly } from '../core/poly.js';
 import { hilbertOfSchur, keyToPartition, qtSeries, schurCoefficient, schurSeries, type Series } from './series.js';
-import { seriesFromJson } from './seriesJson.js';
+import { fundamentalToSchur } from '../symfun/quasisym.js';
+import { polyFromJson, seriesFromJson } from './seriesJson.js';
 
 export const TAKE_CHOICES = ['auto', 'frobenius', 'hilbert', 'sign', 'trivial'] as const;
 export type Take = (typeof TAKE_CHOICES)[number];
@@ -32,6 +33,7 @@ export function seriesFromDocument(doc: unknown, take: Take, where: string): Ser
   } else if ('schur' in o && o['schur'] && typeof o['schur'] === 'object') {
     frob = seriesFromJson(o['schur'], `${where}.schur`);
   }
+  if (o['frobenius'] && typeof o['frobenius'] === 'object') frob = frobeniusOfDist(o['frobenius'] as Record<string, unknown>, where);
   if ('hilbertSeries' in o) graded = seriesFromJson(o['hilbertSeries'], `${where}.hilbertSeries`);
   else if ('series' in o) {
     const s = seriesFromJson(o['series'], `${where}.series`);
@@ -89,4 +91,27 @@ export function dropConstantT(s: Series): Series {
   if (s.kind === 'schur') return schurSeries([...s.terms].map(([l, c]) => [l, down(c)] as const));
   if (s.kind === 'q' || s.kind === 'qt') return qtSeries(down(s.poly));
   return s;
+}
+
+/**
+ * The Frobenius-level sum of a dist document: {basis: "schur", terms: [{shape, series}]} or
+ * {basis: "fundamental-quasisymmetric", n, terms: [{set, series}]} (converted to Schur by
+ * src/symfun/quasisym.ts; an InputError when the sum is not symmetric).
+ */
+function frobeniusOfDist(f: Record<string, unknown>, where: string): Series {
+  const terms = Array.isArray(f['terms']) ? (f['terms'] as Record<string, unknown>[]) : [];
+  if (f['basis'] === 'schur') {
+    return schurSeries(terms.map((t, i) => [(t['shape'] as number[]).join(','), polyFromJson(t['series'], `${where}.frobenius.terms[${i}]`)] as const));
+  }
+  if (f['basis'] === 'fundamental-quasisymmetric') {
+    const n = Number(f['n']);
+    const byMask = new Map<number, Poly>();
+    terms.forEach((t, i) => {
+      const mask = (t['set'] as number[]).reduce((m, j) => m | (1 << (j - 1)), 0);
+      byMask.set(mask, (byMask.get(mask) ?? Poly.zero).add(polyFromJson(t['series'], `${where}.frobenius.terms[${i}]`)));
+    });
+    const sf = fundamentalToSchur(n, byMask);
+    return schurSeries([...sf.schurTerms()].map(([l, c]) => [l, c.toPoly()] as const));
+  }
+  throw new InputError(`${where}: unknown Frobenius basis ${JSON.stringify(f['basis'])}`);
 }

@@ -133,11 +133,12 @@ export class Catalogue {
     return (this.db.prepare('SELECT * FROM distributions WHERE hash = ?').all(hash) as RawRow[]).map(decode);
   }
 
+  private findStatement: Database.Statement | undefined;
+
   /** The row of one candidate at one place, if stored. */
   find(family: string, params: Readonly<Record<string, number>>, statistics: string, combine: string, transform: string): StoredRow | undefined {
-    const r = this.db
-      .prepare('SELECT * FROM distributions WHERE family = ? AND params = ? AND statistics = ? AND combine = ? AND transform = ?')
-      .get(family, paramsKey(params), statistics, combine, transform) as RawRow | undefined;
+    this.findStatement ??= this.db.prepare('SELECT * FROM distributions WHERE family = ? AND params = ? AND statistics = ? AND combine = ? AND transform = ?');
+    const r = this.findStatement.get(family, paramsKey(params), statistics, combine, transform) as RawRow | undefined;
     return r ? decode(r) : undefined;
   }
 
@@ -152,8 +153,11 @@ export class Catalogue {
     return { groups, sameCount, families, statistics };
   }
 
+  private maxNCache: number | undefined;
+
   maxN(): number {
-    return (this.db.prepare('SELECT COALESCE(MAX(n), -1) AS m FROM units').get() as { m: number }).m;
+    this.maxNCache ??= (this.db.prepare('SELECT COALESCE(MAX(n), -1) AS m FROM units').get() as { m: number }).m;
+    return this.maxNCache;
   }
 
   info(): { path: string; schema: number; units: number; distributions: number; families: { family: string; nMax: number; rows: number }[]; modules: number; syms: number; searches: number } {
@@ -180,6 +184,17 @@ export class Catalogue {
     const text = toJsonText(result);
     this.db.prepare('INSERT OR REPLACE INTO sym_results (expression, degree, result, hash, provenance) VALUES (?, ?, ?, ?, ?)')
       .run(expression, degree ?? null, text, textHash(text), JSON.stringify(prov));
+  }
+
+  /** A stored module result by its command line, if any. */
+  getModuleResult(inputs: string): unknown | undefined {
+    const r = this.db.prepare('SELECT result FROM module_results WHERE inputs = ?').get(inputs) as { result: string } | undefined;
+    return r ? JSON.parse(r.result) : undefined;
+  }
+
+  getSymResult(expression: string): unknown | undefined {
+    const r = this.db.prepare('SELECT result FROM sym_results WHERE expression = ?').get(expression) as { result: string } | undefined;
+    return r ? JSON.parse(r.result) : undefined;
   }
 
   saveSearch(target: string, result: unknown, prov: Provenance): number {

@@ -60,6 +60,9 @@ describe('gradus search (acceptance)', () => {
     expect(m!.verified).toBe('n = 1..6, all k = 1..n');
     expect(m!.complete).toBe(true);
     expect(r.doc.recognition.recurrences[0]!.name).toBe('q-Stirling recurrence');
+    // the 21 module results were kept in the catalogue with provenance
+    const info = JSON.parse(runCli(['catalogue', 'info', '--catalogue', cat, '--json']).stdout);
+    expect(info.modules).toBe(21);
     exportFixtures('delta-x-hilbert', ['--n-range', '1..6', '--from', 'module --seed superspace-vandermonde --ops x --n {n} --k {k}', '--take', 'hilbert']);
   }, 120_000);
   it('the Vandermonde module, n ≤ 6: Σ q^maj s_shape over standard Young tableaux first (Lusztig–Stanley, MATH.md §4)', () => {

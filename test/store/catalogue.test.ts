@@ -8,6 +8,7 @@ import { qFactorial } from '../../src/core/qanalogs.js';
 import { qSeries } from '../../src/series/series.js';
 import { Catalogue } from '../../src/store/catalogue.js';
 import { cataloguePath } from '../../src/store/cataloguePath.js';
+import { commandResultCache } from '../../src/store/commandResultCache.js';
 import { SCHEMA_VERSION } from '../../src/store/migrations.js';
 import { provenance } from '../../src/store/provenance.js';
 import { seriesHash } from '../../src/store/seriesHash.js';
@@ -42,6 +43,20 @@ describe('catalogue', () => {
     expect(rows[0]!.atOne).toBe(6n);
     expect(c.find('permutations', { n: 3 }, 'inversions', 'single', '')?.series.kind).toBe('q');
     expect(c.find('permutations', { n: 4 }, 'inversions', 'single', '')).toBeUndefined();
+    c.close();
+  });
+  it('keeps module and symmetric-function results by their command line, with provenance', () => {
+    const c = Catalogue.open(join(dir(), 'c.sqlite'));
+    const cache = commandResultCache(c);
+    cache.put(['module', '--n', '3'], { hilbertSeries: [1, 2] }, 3, undefined);
+    cache.put(['sym', 'e(2)'], { terms: { '1,1': [[1]] } }, 2, undefined);
+    cache.put(['qseries', 'integer'], { series: [1] }, 1, undefined);
+    expect(cache.get(['module', '--n', '3'])).toEqual({ hilbertSeries: [1, 2] });
+    expect(cache.get(['sym', 'e(2)'])).toEqual({ terms: { '1,1': [[1]] } });
+    expect(cache.get(['qseries', 'integer'])).toBeUndefined();
+    expect(cache.get(['module', '--n', '4'])).toBeUndefined();
+    const p = c.db.prepare('SELECT provenance FROM module_results').get() as { provenance: string };
+    expect(JSON.parse(p.provenance).gradusVersion).toMatch(/^\d+\.\d+/);
     c.close();
   });
   it('a failing write leaves nothing of the unit behind', () => {

@@ -13,6 +13,7 @@ import { rangeText, type Target } from '../../series/target.js';
 import { readTargetFile } from '../../series/targetFile.js';
 import { Catalogue } from '../../store/catalogue.js';
 import { cataloguePath } from '../../store/cataloguePath.js';
+import { commandResultCache } from '../../store/commandResultCache.js';
 import { provenance } from '../../store/provenance.js';
 import { flagOpt, intOpt, strOpt, type CommandIO, type CommandSpec, type ParsedArgs } from '../command.js';
 import { toJsonText } from '../json-output.js';
@@ -30,7 +31,7 @@ export function parseRange(text: string | undefined): [number, number] | undefin
   return [a, b];
 }
 
-async function readTarget(args: ParsedArgs, io: CommandIO, range: [number, number] | undefined): Promise<Target> {
+async function readTarget(args: ParsedArgs, io: CommandIO, range: [number, number] | undefined, cat: Catalogue): Promise<Target> {
   const sources = ['target-file', 'from', 'coeffs'].filter((s) => strOpt(args, s) !== undefined);
   if (sources.length !== 1) throw new InputError('search needs exactly one of --target-file F, --from "<command>", --coeffs "n=…:…"', sources[1] ?? 'from');
   const take = parseTake(strOpt(args, 'take'));
@@ -38,7 +39,7 @@ async function readTarget(args: ParsedArgs, io: CommandIO, range: [number, numbe
   if (sources[0] === 'from') {
     if (!range) throw new InputError('--from needs --n-range a..b (the sizes n to run the command for)', 'n-range');
     io.progress.start('running the target command');
-    t = await targetFromCommand(strOpt(args, 'from')!, range[0], range[1], take, io.env, io.cwd);
+    t = await targetFromCommand(strOpt(args, 'from')!, range[0], range[1], take, io.env, io.cwd, commandResultCache(cat));
     io.progress.finish();
     return t;
   }
@@ -78,7 +79,7 @@ export const searchCommand: CommandSpec = {
     const path = cataloguePath(strOpt(args, 'catalogue'), io.env, io.cwd);
     const cat = Catalogue.open(path, { readonly: true });
     try {
-      const target = await readTarget(args, io, range);
+      const target = await readTarget(args, io, range, cat);
       const t0 = Date.now();
       const outcome = searchCatalogue(cat, target);
       const rec = recognise(target);
