@@ -7,6 +7,11 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
+import { exportModel } from '../../src/export/exportModel.js';
+import { renderJson } from '../../src/export/renderJson.js';
+import { renderLatex } from '../../src/export/renderLatex.js';
+import { renderMarkdown } from '../../src/export/renderMarkdown.js';
+import { checkSearchDocument } from '../../src/match/searchDocument.js';
 import { checkFixture, latexBalanced, searchCore } from '../export/fixtures.js';
 import { runCli } from '../helpers/cli.js';
 
@@ -30,20 +35,16 @@ interface Match {
   complete: boolean;
 }
 
-/** Save the search, export it in our three formats, and compare with test/fixtures/search. */
-function exportFixtures(name: string, args: string[]): void {
-  const saved = join(dir, `${name}.search.json`);
-  const r = runCli(['search', ...args, '--catalogue', cat, '--save', saved]);
-  expect(r.code, r.stderr).toBe(0);
-  checkFixture(`${name}.search.json`, searchCore(readFileSync(saved, 'utf8')));
-  for (const [format, ext] of [['latex', 'tex'], ['markdown', 'md'], ['json', 'export.json']] as const) {
-    const out = join(dir, `${name}.${ext}`);
-    const e = runCli(['export', saved, '--format', format, '--out', out, '--limit', '1']);
-    expect(e.code, e.stderr).toBe(0);
-    const text = readFileSync(out, 'utf8');
-    if (format === 'latex') expect(latexBalanced(text)).toBe(true);
-    checkFixture(`${name}.${ext}`, text);
-  }
+/** Export a saved search in our three formats (in-process) and compare with test/fixtures/search. */
+function exportFixtures(name: string): void {
+  const text = readFileSync(join(dir, `${name}.search.json`), 'utf8');
+  checkFixture(`${name}.search.json`, searchCore(text));
+  const model = exportModel(checkSearchDocument(JSON.parse(text), name), 1);
+  const tex = renderLatex(model);
+  expect(latexBalanced(tex)).toBe(true);
+  checkFixture(`${name}.tex`, tex);
+  checkFixture(`${name}.md`, renderMarkdown(model));
+  checkFixture(`${name}.export.json`, renderJson(model));
 }
 
 function search(args: string[]): { code: number; doc: { matches: Match[]; recognition: { recurrences: { text: string; name?: string }[] }; tried: { candidates: number } }; stderr: string } {
@@ -53,7 +54,7 @@ function search(args: string[]): { code: number; doc: { matches: Match[]; recogn
 
 describe('gradus search (acceptance)', () => {
   it('δ_{n,k} under x-derivatives, n ≤ 6, all k: an ordered-set-partition statistic and the q-Stirling recurrence (MATH.md §4)', () => {
-    const r = search(['--n-range', '1..6', '--from', 'module --seed superspace-vandermonde --ops x --n {n} --k {k}', '--take', 'hilbert']);
+    const r = search(['--n-range', '1..6', '--from', 'module --seed superspace-vandermonde --ops x --n {n} --k {k}', '--take', 'hilbert', '--save', join(dir, 'delta-x-hilbert.search.json')]);
     expect(r.code, r.stderr).toBe(0);
     const m = r.doc.matches.find((x) => x.family === 'ordered-set-partitions' && x.combine === 'single' && x.variant === 'as-given');
     expect(m).toBeDefined();
@@ -63,24 +64,24 @@ describe('gradus search (acceptance)', () => {
     // the 21 module results were kept in the catalogue with provenance
     const info = JSON.parse(runCli(['catalogue', 'info', '--catalogue', cat, '--json']).stdout);
     expect(info.modules).toBe(21);
-    exportFixtures('delta-x-hilbert', ['--n-range', '1..6', '--from', 'module --seed superspace-vandermonde --ops x --n {n} --k {k}', '--take', 'hilbert']);
+    exportFixtures('delta-x-hilbert');
   }, 120_000);
   it('the Vandermonde module, n ≤ 6: Σ q^maj s_shape over standard Young tableaux first (Lusztig–Stanley, MATH.md §4)', () => {
-    const r = search(['--n-range', '1..6', '--from', 'module --seed vandermonde --ops x --n {n} --frobenius']);
+    const r = search(['--n-range', '1..6', '--from', 'module --seed vandermonde --ops x --n {n} --frobenius', '--save', join(dir, 'vandermonde-frobenius.search.json')]);
     expect(r.code, r.stderr).toBe(0);
     const first = r.doc.matches[0]!;
     expect([first.family, first.statistics.join(), first.combine, first.variant]).toEqual(['standard-tableaux', 'tableau-major-index', 'shape', 'as-given']);
     expect(first.verified).toBe('n = 1..6');
-    exportFixtures('vandermonde-frobenius', ['--n-range', '1..6', '--from', 'module --seed vandermonde --ops x --n {n} --frobenius']);
+    exportFixtures('vandermonde-frobenius');
   }, 120_000);
   it('⟨∇e_n, e_n⟩, n ≤ 6: a pair of Dyck-path statistics, area with dinv or bounce (MATH.md §3, q,t-Catalan)', () => {
-    const r = search(['--n-range', '1..6', '--from', 'sym "nabla(e({n}))"', '--take', 'sign']);
+    const r = search(['--n-range', '1..6', '--from', 'sym "nabla(e({n}))"', '--take', 'sign', '--save', join(dir, 'nabla-en-sign.search.json')]);
     expect(r.code, r.stderr).toBe(0);
     const pairs = r.doc.matches.filter((x) => x.family === 'dyck-paths' && x.transform === '' && x.combine === 'joint').map((x) => x.statistics.join('&'));
     expect(pairs).toContain('dyck-area&dyck-bounce');
     expect(pairs).toContain('dyck-area&dyck-dinv');
     expect(r.doc.matches[0]!.verified).toBe('n = 1..6');
-    exportFixtures('nabla-en-sign', ['--n-range', '1..6', '--from', 'sym "nabla(e({n}))"', '--take', 'sign']);
+    exportFixtures('nabla-en-sign');
   }, 120_000);
   it('a typed target that nothing explains: "no match" and what was tried', { timeout: 30_000 }, () => {
     const r = runCli(['search', '--coeffs', 'n=3:1,3,1,1;n=4:2,0,5,1,7', '--catalogue', cat]);
