@@ -91,7 +91,7 @@ export function SearchScreen(props: ScreenProps) {
   const cands = outcome?.candidates ?? [];
   const detail = cands[sel];
   const detailLines = detail ? [`verified ${detail.range}${detail.formula ? `   formula ${detail.formula}` : ''}`, ...detail.detail].slice(0, 4) : [];
-  const listH = Math.max(2, props.height - 7 - previewN - (outcome?.recognition.length ?? 0) - detailLines.length);
+  const listH = Math.max(2, props.height - 7 - (outcome ? 2 : 0) - previewN - (outcome?.recognition.length ?? 0) - detailLines.length);
   const start = Math.max(0, Math.min(sel - listH + 1, cands.length - listH));
   return (
     <Box flexDirection="column">
@@ -137,7 +137,7 @@ export function SearchScreen(props: ScreenProps) {
       ) : st.status === 'cancelled' ? (
         <Text {...theme.style('warn')}>Search cancelled. Enter runs it again.</Text>
       ) : outcome ? (
-        <Text wrap="truncate" {...theme.style(cands.length ? 'ok' : 'warn')}>
+        <Text wrap="wrap" {...theme.style(cands.length ? 'ok' : 'warn')}>
           {cands.length ? `${cands.length} candidate(s), simplest first` : 'No statistic matched.'} Tried: {outcome.tried}
         </Text>
       ) : (

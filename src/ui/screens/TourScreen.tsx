@@ -97,8 +97,14 @@ export function TourScreen(props: ScreenProps) {
 
   const w = props.width;
   const shown = state.modules?.find((m) => m.n === DEMO_SHOWN_N);
-  const report = done > 0 ? stepReport(view, state, false) : [];
-  const gridRows = view === 0 && shown ? tableOf(shown).length + 1 : 0;
+  // A tall terminal shows every finished step at once; a small one the step being viewed.
+  const all = props.height >= 36 && done > 1;
+  const report = all
+    ? Array.from({ length: done }, (_, i) => [{ text: `— step ${i + 1}`, tone: 'dim' as const }, ...stepReport(i, state, false)]).flat()
+    : done > 0
+      ? stepReport(view, state, false)
+      : [];
+  const gridRows = (all || view === 0) && shown ? tableOf(shown).length + 1 : 0;
   const room = Math.max(2, props.height - DEMO_STEPS.length - 3 - gridRows);
   return (
     <Box flexDirection="column">
@@ -125,7 +131,7 @@ export function TourScreen(props: ScreenProps) {
               : `Showing step ${view + 1} (←/→ other steps). Done: r starts over; Tab visits the screens.`}
         </Text>
       )}
-      {view === 0 && shown ? (
+      {(all || view === 0) && shown ? (
         <ShadedGrid table={tableOf(shown)} rowLabel={shown.axes[1] ?? ''} colLabel={shown.axes[0] ?? 'x'} width={w} height={gridRows} />
       ) : null}
       <Box flexDirection="column" height={room} overflow="hidden">
