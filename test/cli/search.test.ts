@@ -6,7 +6,7 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { readFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { exportModel } from '../../src/export/exportModel.js';
 import { renderJson } from '../../src/export/renderJson.js';
 import { renderLatex } from '../../src/export/renderLatex.js';
@@ -98,6 +98,21 @@ describe('gradus search (acceptance)', () => {
     const perm = r.doc.matches.filter((x) => x.family === 'permutations' && x.combine === 'single' && x.transform === '').map((x) => x.statistics[0]);
     expect(perm).toContain('inversions');
     expect(perm).toContain('major-index');
+  });
+  it('a target file in our format, cut by --n-range', { timeout: 30_000 }, () => {
+    const f = join(dir, 'target.json');
+    // [n]_q! for n = 1..5 (src/core/qanalogs.ts values, written by hand)
+    writeFileSync(f, JSON.stringify({ format: 'gradus-target', version: 1, kind: 'q', label: 'q-factorials', entries: [
+      { n: 1, series: [1] }, { n: 2, series: [1, 1] }, { n: 3, series: [1, 2, 2, 1] }, { n: 4, series: [1, 3, 5, 6, 5, 3, 1] }, { n: 5, series: [1, 4, 9, 15, 20, 22, 20, 15, 9, 4, 1] }] }));
+    const r = runCli(['search', '--target-file', f, '--n-range', '2..5', '--catalogue', cat]);
+    expect(r.code, r.stderr).toBe(0);
+    expect(r.stdout).toContain('formula: f = [n]_q!  (verified on n = 2..5)');
+    expect(r.stdout).toContain('recurrence: f(n) = [n]_q · f(n-1)');
+    expect(r.stdout).toMatch(/q\^\{inversions\(x\)\}/);
+    writeFileSync(f, '{"format":"gradus-target","version":2}');
+    const bad = runCli(['search', '--target-file', f, '--catalogue', cat]);
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toContain('"version" must be 1');
   });
   it('bad input: two target sources, a bad range, a missing catalogue', { timeout: 30_000 }, () => {
     expect(runCli(['search', '--coeffs', 'n=1:1', '--target-file', 'x.json', '--catalogue', cat]).code).toBe(2);

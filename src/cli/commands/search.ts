@@ -38,8 +38,11 @@ async function readTarget(args: ParsedArgs, io: CommandIO, range: [number, numbe
   let t: Target;
   if (sources[0] === 'from') {
     if (!range) throw new InputError('--from needs --n-range a..b (the sizes n to run the command for)', 'n-range');
-    io.progress.start('running the target command');
-    t = await targetFromCommand(strOpt(args, 'from')!, range[0], range[1], take, io.env, io.cwd, commandResultCache(cat));
+    const template = strOpt(args, 'from')!;
+    const runs = Array.from({ length: range[1] - range[0] + 1 }, (_, i) => (template.includes('{k}') ? range[0] + i : 1)).reduce((a, b) => a + b, 0);
+    io.progress.start('running the target command', runs);
+    let done = 0;
+    t = await targetFromCommand(template, range[0], range[1], take, io.env, io.cwd, commandResultCache(cat), () => io.progress.update(done++));
     io.progress.finish();
     return t;
   }
