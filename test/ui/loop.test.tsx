@@ -70,6 +70,22 @@ describe('search and export loop', () => {
     expect(json.matches.length).toBe(2);
   }, 40_000);
 
+  it('choose, compute, search: the Vandermonde module for n = 3, 4 finds [n]_q! statistics', async () => {
+    r = renderApp({ initialScreen: 'modules', env: { NO_COLOR: '1', GRADUS_CATALOGUE: cat.path }, cwd: cat.dir });
+    await press(r, 's', KEYS.enter);
+    await waitForFrame(r, (x) => x.includes('dimension 24'));
+    await press(r, '-', KEYS.enter);
+    await waitForFrame(r, (x) => x.includes('dimension 6'));
+    await press(r, 'g');
+    expect(frame(r)).toContain('Hilbert series (q=x) of closure of Vandermonde');
+    await press(r, KEYS.enter);
+    // Vandermonde: Hilbert series [n]_q! (MATH.md §4), the inversion generating function.
+    const f = await waitForFrame(r, (x) => x.includes('candidate'));
+    expect(f).toContain('formula: [n]_q!');
+    expect(f).toContain('inversions on permutations');
+    expect(f).toContain('(n = 3..4)');
+  }, 40_000);
+
   it('says plainly when nothing matches, and what was tried', async () => {
     r = renderApp({ initialScreen: 'search', env: { NO_COLOR: '1', GRADUS_CATALOGUE: cat.path }, cwd: cat.dir });
     await press(r, 'e');

@@ -30,8 +30,16 @@ describe('Modules screen', () => {
     await press(r, 'g');
     f = frame(r);
     expect(f).toContain('[6Search]');
-    expect(f).toContain('row θ=1 (q=x) of closure of ε(x1^2 x2 θ3)');
+    expect(f).toContain('row θ=1 (q=x) of closure of ε(x1^2 x2 θ3) under ∂x, ∂θ, n = 3');
     expect(f).toContain('n=3: q^3 + 3*q^2 + 5*q + 3');
+    expect(f).toContain('one size only');
+    // Back, the same request at n = 2: both sizes form the target.
+    await press(r, '4', '-', KEYS.enter);
+    await waitForFrame(r, (x) => x.includes('dimension 6'));
+    await press(r, KEYS.down, 'g');
+    f = frame(r);
+    expect(f).toContain('row θ=1 (q=x) of closure of ε(x1 θ2) under ∂x, ∂θ, n = 2, 3');
+    expect(f).toContain('n=2: q + 2');
   }, 30_000);
 });
 

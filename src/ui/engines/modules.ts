@@ -4,6 +4,7 @@
  * and can be cancelled.
  */
 import type { ModuleResult } from '../../modules/module-result.js';
+import { demoRequest, DEMO_SHOWN_N } from '../demo/demoSeed.js';
 import { parseModuleRequest } from './moduleRequest.js';
 import type { ModuleOutcome } from './moduleTypes.js';
 import { moduleOutcome } from './moduleView.js';
@@ -12,7 +13,7 @@ import { startJob, type Job, type JobProgress } from './workerJob.js';
 export const MODULE_ENGINE_AVAILABLE = true;
 
 /** Our own seed for the demo: ε(x1^2 x2 θ3), the staircase of n = 3 with θ on its last variable. */
-export const DEFAULT_MODULE_REQUEST = '--seed monomial --n 3 --x-exponents 2,1,0 --theta 3 --ops x,theta';
+export const DEFAULT_MODULE_REQUEST = demoRequest(DEMO_SHOWN_N);
 
 /** Requests the `s` key cycles through: our seed first, then the named seeds. */
 export const MODULE_PRESETS: readonly string[] = [
@@ -26,6 +27,11 @@ export const MODULE_PRESETS: readonly string[] = [
 /** The request with --n changed by delta (1..10); unchanged when it names no --n. */
 export function bumpRequestN(line: string, delta: number): string {
   return line.replace(/--n(\s+|=)(\d+)/, (_m, sep: string, v: string) => `--n${sep}${Math.min(10, Math.max(1, Number(v) + delta))}`);
+}
+
+/** The request with its --n blanked: requests equal up to n give one family over n. */
+export function withoutN(line: string): string {
+  return line.replace(/--n(\s+|=)\d+/, '--n {n}').trim().replace(/\s+/g, ' ');
 }
 
 /** Checks the request on this side (fast, one clear line) before a worker starts. */

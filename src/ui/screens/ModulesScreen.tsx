@@ -5,21 +5,36 @@
  * findings.
  */
 import { Box, Text } from 'ink';
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import { Poly } from '../../core/poly.js';
 import { qSeries, qtSeries, type Series } from '../../series/series.js';
 import { makeTarget } from '../../series/target.js';
 import { LineInput } from '../components/LineInput.js';
 import { ProgressBar } from '../components/ProgressBar.js';
 import { ShadedGrid } from '../components/ShadedGrid.js';
-import { bumpRequestN, DEFAULT_MODULE_REQUEST, MODULE_ENGINE_AVAILABLE, MODULE_PRESETS, startModule } from '../engines/modules.js';
+import { bumpRequestN, withoutN, DEFAULT_MODULE_REQUEST, MODULE_ENGINE_AVAILABLE, MODULE_PRESETS, startModule } from '../engines/modules.js';
 import { cellsAt, tableOf, type ModuleOutcome } from '../engines/moduleTypes.js';
 import { useTicker, useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
 import { useTheme } from '../ThemeContext.js';
 import { useEditField } from '../useEditField.js';
+import { demoRequest } from '../demo/demoSeed.js';
 import { useJob } from '../useJob.js';
 import { ModuleFindings } from './ModuleFindings.js';
+
+/** Requests of one family over n share this key (the demo's seed family, or equal up to --n). */
+function familyKey(request: string): string {
+  for (let n = 1; n <= 10; n++) if (request === demoRequest(n)) return 'demo seed family';
+  return withoutN(request);
+}
+
+/** The request at n ± 1; the demo's seed family keeps its shape (staircase, θ on the last variable). */
+function nextSize(request: string, delta: number): string {
+  for (let n = 1; n <= 10; n++) {
+    if (request === demoRequest(n)) return demoRequest(Math.min(10, Math.max(2, n + delta)));
+  }
+  return bumpRequestN(request, delta);
+}
 
 export function ModulesScreen(props: ScreenProps) {
   const theme = useTheme();
@@ -32,10 +47,15 @@ export function ModulesScreen(props: ScreenProps) {
   const outcome = job.state.result;
   const table = outcome ? tableOf(outcome) : undefined;
 
+  // Modules computed so far, by request without its --n, then by n.
+  const computed = useRef(new Map<string, Map<number, ModuleOutcome>>());
   const compute = (line: string) => {
     job.run(
       (onProgress) => startModule(line, onProgress),
       (r) => {
+        const key = familyKey(line);
+        if (!computed.current.has(key)) computed.current.set(key, new Map());
+        computed.current.get(key)!.set(r.n, r);
         props.addItem({ title: `module ${r.title}`, origin: 'module', payload: r });
         props.notify(`computed: ${r.title}, dimension ${r.dimension}`);
         setSel([0, 0]);
@@ -43,23 +63,28 @@ export function ModulesScreen(props: ScreenProps) {
     );
   };
 
+  /** The chosen series of one module (a row of its table, or the whole table as q,t). */
+  const seriesOf = (o: ModuleOutcome, wholeTable: boolean, row: number): Series => {
+    const t = tableOf(o);
+    if (wholeTable && o.axes.length > 1) return qtSeries(Poly.fromQTTable((t[0] ?? []).map((_, j) => t.map((r) => r[j] ?? 0n))));
+    return qSeries(Poly.fromQCoeffs(t[row] ?? []));
+  };
+
   const sendToSearch = (wholeTable: boolean) => {
     if (!outcome || !table) return props.notify('compute a module first (Enter)', 'error');
     const rowAxis = outcome.axes[1] ?? '';
-    let title: string;
-    let series: Series;
-    if (wholeTable && outcome.axes.length > 1) {
-      title = `Hilbert table (q=${outcome.axes[0]}, t=${rowAxis}) of ${outcome.title}`;
-      series = qtSeries(Poly.fromQTTable(table[0]!.map((_, j) => table.map((r) => r[j] ?? 0n))));
-    } else {
-      const what = outcome.axes.length > 1 ? `row ${rowAxis}=${sel[0]}` : 'Hilbert series';
-      title = `${what} (q=${outcome.axes[0]}) of ${outcome.title}`;
-      series = qSeries(Poly.fromQCoeffs(table[sel[0]] ?? []));
-    }
-    const entry = { n: outcome.n, ...(outcome.k !== undefined ? { k: outcome.k } : {}), series };
-    props.addItem({ title, origin: 'module', target: makeTarget(title, [entry]) });
+    const what = wholeTable && outcome.axes.length > 1 ? `Hilbert table (q=${outcome.axes[0]}, t=${rowAxis})` : outcome.axes.length > 1 ? `row ${rowAxis}=${sel[0]} (q=${outcome.axes[0]})` : `Hilbert series (q=${outcome.axes[0]})`;
+    // Every n computed for this same request forms the target: the search verifies a
+    // match on a family over n, so more sizes make a stronger target.
+    const family = [...(computed.current.get(familyKey(request)) ?? new Map<number, ModuleOutcome>()).values()].sort((a, b) => a.n - b.n);
+    const members = family.some((m) => m.n === outcome.n) ? family : [outcome];
+    const title = `${what} of ${outcome.title.replace(/, n=\d+.*$/, '')}, n = ${members.map((m) => m.n).join(', ')}`;
+    const entries = members.map((m) => ({ n: m.n, ...(m.k !== undefined ? { k: m.k } : {}), series: seriesOf(m, wholeTable, sel[0]) }));
+    props.addItem({ title, origin: 'module', target: makeTarget(title, entries) });
     props.go('search');
+    if (entries.length < 2) props.notify('one size only: compute this request for other n too (+/- then Enter) for a search over n');
   };
+
 
   useKeys(
     (input, key) => {
@@ -79,7 +104,7 @@ export function ModulesScreen(props: ScreenProps) {
         const at = MODULE_PRESETS.indexOf(request);
         return setRequest(MODULE_PRESETS[(at + 1) % MODULE_PRESETS.length]!);
       }
-      if (input === '+' || input === '=' || input === '-') return setRequest(bumpRequestN(request, input === '-' ? -1 : 1));
+      if (input === '+' || input === '=' || input === '-') return setRequest(nextSize(request, input === '-' ? -1 : 1));
       if (input === 'g') return sendToSearch(false);
       if (input === 'G') return sendToSearch(true);
       if (!table) return;
