@@ -81,6 +81,7 @@ export const SCREENS: readonly ScreenInfo[] = [
     keys: [
       { keys: 'e', action: 'edit expression' },
       { keys: 'Enter', action: 'evaluate' },
+      { keys: '+/-', action: 'size {n}' },
       { keys: 'x', action: 'cancel' },
       { keys: '↑/↓', action: 'scroll' },
       { keys: 'g', action: 'send to search' },

@@ -32,4 +32,18 @@ describe('Symmetric functions screen', () => {
     expect(f).toContain('column 8');
     expect(f).not.toMatch(/\bat .+:\d+:\d+/); // no stack trace
   }, 30_000);
+
+  it('an expression with {n} is a family over n: g builds its target with the search engine', async () => {
+    r = renderApp({ initialScreen: 'symfun' });
+    expect(frame(r)).toContain('sym nabla(e({n}))');
+    expect(frame(r)).toContain('{n} = 3');
+    await press(r, '-', KEYS.enter);
+    // ∇e_2 = s_2 + (q+t) s_11 (MATH.md §3).
+    let f = await waitForFrame(r, (x) => x.includes('Schur basis'));
+    expect(f).toContain('s(2) + (q + t)*s(1,1)');
+    await press(r, 'g');
+    f = await waitForFrame(r, (x) => x.includes('[6Search]'), 30_000);
+    expect(f).toContain('target sym nabla(e({n})), n = 1..2');
+    expect(f).toContain('n=2:');
+  }, 40_000);
 });

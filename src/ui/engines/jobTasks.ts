@@ -19,6 +19,8 @@ import { evaluateExpression } from '../../symfun/expression.js';
 import { formatText, integralCoefficients } from '../../symfun/sym-format.js';
 import { computeDistribution } from '../../enumerate/distribution.js';
 import type { DistRequest } from '../../enumerate/request.js';
+import { targetFromCommand } from '../../match/runFrom.js';
+import { targetToJson } from '../../series/targetFile.js';
 import type { ModuleRequest } from './moduleRequest.js';
 
 export type ProgressFn = (label: string, done: number, total?: number) => void;
@@ -121,6 +123,13 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
   dist: async (input, progress) => {
     const d = await computeDistribution(input as DistRequest, { onProgress: (done, total) => progress('objects', done, total) });
     return { series: d.series.toJson(), ms: d.provenance.ms, method: d.provenance.method };
+  },
+  // A target over n from a data command with {n}, as `gradus search --from` builds it.
+  'from-command': async (input, progress) => {
+    const { template, nFrom, nTo, cwd } = input as { template: string; nFrom: number; nTo: number; cwd: string };
+    let step = 0;
+    const target = await targetFromCommand(template, nFrom, nTo, 'auto', process.env, cwd, undefined, (text) => progress(text, step++, nTo - nFrom + 1));
+    return targetToJson(target);
   },
   // Exercises the worker plumbing in tests: counts to input.n, reporting progress.
   count: async (input, progress) => {

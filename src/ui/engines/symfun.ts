@@ -4,6 +4,8 @@
  */
 import { InputError } from '../../core/errors.js';
 import { parseExpression } from '../../symfun/expression-parser.js';
+import type { Target } from '../../series/target.js';
+import { targetFromJson } from '../../series/targetFile.js';
 import { startJob, type Job, type JobProgress } from './workerJob.js';
 
 export const SYMFUN_ENGINE_AVAILABLE = true;
@@ -32,4 +34,21 @@ export function startSym(expression: string, onProgress: (p: JobProgress) => voi
 export function errorColumn(message: string): number | undefined {
   const m = /column (\d+)/.exec(message);
   return m ? Number(m[1]) : undefined;
+}
+
+/** An expression with {n} stands for a family over n (as in `gradus search --from "sym …{n}…"`). */
+export function hasSize(expression: string): boolean {
+  return expression.includes('{n}');
+}
+
+export function atSize(expression: string, n: number): string {
+  return expression.replaceAll('{n}', String(n));
+}
+
+/** The family's target for n = 1..nTo, built by the search engine's own command runner. */
+export function startSymTarget(expression: string, nTo: number, cwd: string, onProgress: (p: JobProgress) => void): Job<Target> {
+  if (expression.includes('"')) throw new InputError('the expression cannot contain a double quote');
+  parseExpression(atSize(expression, 1));
+  const job = startJob<unknown>('from-command', { template: `sym "${expression}"`, nFrom: 1, nTo, cwd }, onProgress);
+  return { result: job.result.then((j) => targetFromJson(j, 'sym target')), cancel: job.cancel };
 }

@@ -7,7 +7,8 @@ import { useState } from 'react';
 import { seriesFromJson } from '../../series/seriesJson.js';
 import { makeTarget } from '../../series/target.js';
 import { LineInput } from '../components/LineInput.js';
-import { errorColumn, startSym, SYMFUN_ENGINE_AVAILABLE, type SymOutcome } from '../engines/symfun.js';
+import { atSize, errorColumn, hasSize, startSym, startSymTarget, SYMFUN_ENGINE_AVAILABLE, type SymOutcome } from '../engines/symfun.js';
+import type { Target } from '../../series/target.js';
 import { errorText } from '../errorText.js';
 import { useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
@@ -15,7 +16,7 @@ import { useTheme } from '../ThemeContext.js';
 import { useEditField } from '../useEditField.js';
 import { useJob } from '../useJob.js';
 
-export const DEFAULT_EXPRESSION = 'deltaprime(e(1), e(3))';
+export const DEFAULT_EXPRESSION = 'nabla(e({n}))';
 
 export function SymfunScreen(props: ScreenProps) {
   const theme = useTheme();
@@ -23,18 +24,30 @@ export function SymfunScreen(props: ScreenProps) {
   const [field, setField] = useEditField<'expr'>(props.active, props.setEditing);
   const [offset, setOffset] = useState(0);
   const job = useJob<SymOutcome>();
+  const family = useJob<Target>();
   const [evaluated, setEvaluated] = useState(expr);
+  const [size, setSize] = useState(3);
 
   const evaluate = (text: string) => {
     setEvaluated(text);
     setOffset(0);
     job.run(
-      (onProgress) => startSym(text, onProgress),
+      (onProgress) => startSym(hasSize(text) ? atSize(text, size) : text, onProgress),
       (r) => props.addItem({ title: `sym ${r.expression}`, origin: 'symfun', payload: r }),
     );
   };
 
   const sendToSearch = () => {
+    if (hasSize(expr)) {
+      props.notify(`evaluating ${expr} for n = 1..${size}…`);
+      return family.run(
+        (onProgress) => startSymTarget(expr, size, props.cwd, onProgress),
+        (t) => {
+          props.addItem({ title: `sym ${expr}, n = 1..${size}`, origin: 'symfun', target: t });
+          props.go('search');
+        },
+      );
+    }
     const r = job.state.result;
     if (!r) return props.notify('evaluate an expression first (Enter)', 'error');
     if (r.degree === undefined || r.seriesJson === undefined) return props.notify('only a homogeneous result with integer coefficients can be searched', 'error');
@@ -53,7 +66,11 @@ export function SymfunScreen(props: ScreenProps) {
       if (key.return) return evaluate(expr);
       if (input === 'e') return setField('expr');
       if (input === 'g') return sendToSearch();
-      if (input === 'x' && job.state.status === 'running') return job.cancel();
+      if (input === 'x' && (job.state.status === 'running' || family.state.status === 'running')) {
+        family.cancel();
+        return job.cancel();
+      }
+      if ((input === '+' || input === '=' || input === '-') && hasSize(expr)) return setSize((n) => Math.min(8, Math.max(1, n + (input === '-' ? -1 : 1))));
       if (key.downArrow) setOffset((o) => o + 1);
       if (key.upArrow) setOffset((o) => Math.max(0, o - 1));
     },
@@ -91,7 +108,19 @@ export function SymfunScreen(props: ScreenProps) {
           {expr}
         </Text>
       )}
-      {col !== undefined && evaluated === expr ? (
+      {hasSize(expr) ? (
+        <Text {...theme.style('dim')}>
+          {'{n}'} = {size} (+/- changes it; g searches n = 1..{size})
+        </Text>
+      ) : null}
+      {family.state.status === 'error' ? (
+        <Text wrap="wrap" {...theme.style('error')}>
+          ✗ {family.state.error}
+        </Text>
+      ) : family.state.status === 'running' ? (
+        <Text {...theme.style('dim')}>building the target over n… (x cancels)</Text>
+      ) : null}
+      {col !== undefined && evaluated === expr && !hasSize(expr) ? (
         <Text {...theme.style('error')}>{' '.repeat(Math.max(0, col - 1) + 4)}^</Text>
       ) : null}
       {st.status === 'running' ? (
