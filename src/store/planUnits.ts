@@ -32,9 +32,7 @@ export function planUnits(nMax: number, only?: readonly string[]): Plan {
       skipped.push({ family: family.id, why: `parameters ${family.params.map((p) => p.name).join(', ')} (the catalogue fills families indexed by n, and k)` });
       continue;
     }
-    const own = statisticsOfFamily(family.id);
-    const via = transformsFrom(family.id).map((t) => ({ t, stats: statisticsOfFamily(t.to) })).filter((x) => x.stats.length > 0);
-    const stats = tallyStats(family, own, via);
+    const stats = statsOfFamily(family);
     if (stats.length === 0) {
       skipped.push({ family: family.id, why: 'no statistics' });
       continue;
@@ -55,4 +53,11 @@ export function planUnits(nMax: number, only?: readonly string[]): Plan {
     }
   }
   return { units, skipped };
+}
+
+/** The statistics tallied for a family: its own, then each one read after a transform. */
+export function statsOfFamily(family: Family<unknown>): TallyStat[] {
+  const own = statisticsOfFamily(family.id);
+  const via = transformsFrom(family.id).map((t) => ({ t, stats: statisticsOfFamily(t.to) })).filter((x) => x.stats.length > 0);
+  return tallyStats(family, own, via);
 }

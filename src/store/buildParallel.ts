@@ -1,0 +1,89 @@
+/**
+ * The catalogue build on worker threads: units (and shards of the large ones) are tallied in
+ * workers; the main thread merges shards, forms the distributions and writes each unit in
+ * its own transaction, as the single-thread build does.
+ */
+import { Worker } from 'node:worker_threads';
+import { LimitError } from '../core/errors.js';
+import type { BuildOptions, BuildReport } from './buildCatalogue.js';
+import type { Catalogue } from './catalogue.js';
+import { planUnits, type Unit } from './planUnits.js';
+import { provenance } from './provenance.js';
+import { mergeRaw, type RawTally } from './rawTally.js';
+import { rowsOfTally } from './tallyUnit.js';
+import type { TallyJob, TallyReply } from './tallyWorker.js';
+
+const ENTRY = new URL('./tally-worker-entry.mjs', import.meta.url);
+/** Units with at least this many objects are split into one shard per worker. */
+const SHARD_MIN = 200_000n;
+
+export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & { readonly workers: number; readonly shardMin?: bigint }): Promise<BuildReport> {
+  const plan = planUnits(o.nMax, o.families);
+  const todo = plan.units.filter((u) => !cat.isUnitDone(u.family.id, u.params));
+  const total = todo.reduce((s, u) => s + u.objects, 0n);
+  if (total > o.maxObjects) {
+    throw new LimitError(`building up to n = ${o.nMax} visits ${total} objects, above the limit ${o.maxObjects}; raise it with --max-objects`, 'max-objects');
+  }
+  const t0 = Date.now();
+  const jobs: { unit: Unit; job: TallyJob }[] = [];
+  let nextId = 1;
+  for (const unit of todo) {
+    const shards = unit.objects >= (o.shardMin ?? SHARD_MIN) && unit.family.visit ? o.workers : 1;
+    for (let index = 0; index < shards; index++) {
+      jobs.push({ unit, job: { id: nextId++, family: unit.family.id, params: unit.params, ...(shards > 1 ? { shard: { index, count: shards } } : {}) } });
+    }
+  }
+  const pending = new Map<Unit, { left: number; raw?: RawTally; started: number }>();
+  for (const { unit } of jobs) {
+    const p = pending.get(unit) ?? { left: 0, started: 0 };
+    p.left++;
+    pending.set(unit, p);
+  }
+  let done = 0n;
+  let rows = 0;
+  o.progress.start(`catalogue build (n ≤ ${o.nMax}, ${o.workers} workers)`, Number(total));
+  const workers = Array.from({ length: Math.min(o.workers, Math.max(jobs.length, 1)) }, () => new Worker(ENTRY));
+  try {
+    let cursor = 0;
+    const finishUnit = (unit: Unit, raw: RawTally, started: number): void => {
+      const r = rowsOfTally(unit.family, unit.params, unit.stats, raw);
+      const seconds = (Date.now() - started) / 1000;
+      cat.writeUnit(unit.family.id, unit.params, r.objects, seconds, r.rows,
+        provenance({ family: unit.family.id, params: unit.params, statistics: unit.stats.map((s) => s.id) }, `exhaustive enumeration, exact integer tallies (${o.workers} worker threads)`, [], seconds));
+      rows += r.rows.length;
+      done += r.objects;
+      o.progress.update(Number(done));
+      o.onUnit?.(`${unit.family.id} ${JSON.stringify(unit.params)}: ${r.objects} objects, ${r.rows.length} distributions`);
+    };
+    await Promise.all(workers.map((w) => new Promise<void>((resolve, reject) => {
+      const next = (): void => {
+        const item = jobs[cursor++];
+        if (!item) return resolve();
+        const state = pending.get(item.unit)!;
+        if (!state.started) state.started = Date.now();
+        const onMessage = (m: TallyReply): void => {
+          if (m.id !== item.job.id) return;
+          w.off('message', onMessage);
+          if ('error' in m) return reject(new Error(`catalogue worker, ${item.unit.family.id} ${JSON.stringify(item.unit.params)}: ${m.error}`));
+          state.raw = state.raw ? mergeRaw(state.raw, m.raw) : m.raw;
+          if (--state.left === 0) {
+            try {
+              finishUnit(item.unit, state.raw, state.started);
+            } catch (e) {
+              return reject(e);
+            }
+          }
+          next();
+        };
+        w.on('message', onMessage);
+        w.postMessage(item.job);
+      };
+      w.once('error', reject);
+      next();
+    })));
+  } finally {
+    await Promise.all(workers.map((w) => w.terminate()));
+    o.progress.finish();
+  }
+  return { units: todo.length, skippedDone: plan.units.length - todo.length, rows, objects: done.toString(), seconds: (Date.now() - t0) / 1000, familiesLeftOut: plan.skipped };
+}
