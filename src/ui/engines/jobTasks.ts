@@ -1,32 +1,25 @@
 /**
  * The engine tasks the app runs in a worker thread, by name. Each takes JSON-ready input,
- * reports progress, and returns JSON-ready output.
+ * reports progress, and returns JSON-ready output. Engines are imported inside each task,
+ * so a worker loads only the engine its task needs (a faster start).
  */
-import { computeModule } from '../../modules/compute-module.js';
-import { resultToJson } from '../../modules/format-result.js';
-import { recognise } from '../../match/recognise.js';
-import { searchCatalogue } from '../../match/search.js';
-import { searchDocument, type SearchDocument } from '../../match/searchDocument.js';
-import { rangeText } from '../../series/target.js';
-import { targetFromJson } from '../../series/targetFile.js';
-import { buildCatalogue } from '../../store/buildCatalogue.js';
-import { Catalogue } from '../../store/catalogue.js';
-import { provenance } from '../../store/provenance.js';
-import { qtTableJson } from '../../cli/json-output.js';
-import { schurSeries } from '../../series/series.js';
-import { seriesToJson } from '../../series/seriesJson.js';
-import { evaluateExpression } from '../../symfun/expression.js';
-import { formatText, integralCoefficients } from '../../symfun/sym-format.js';
-import { computeDistribution } from '../../enumerate/distribution.js';
+import type { SearchDocument } from '../../match/searchDocument.js';
 import type { DistRequest } from '../../enumerate/request.js';
-import { targetFromCommand } from '../../match/runFrom.js';
-import { targetToJson } from '../../series/targetFile.js';
 import type { ModuleRequest } from './moduleRequest.js';
 
 export type ProgressFn = (label: string, done: number, total?: number) => void;
 export type JobTask = (input: unknown, progress: ProgressFn) => unknown | Promise<unknown>;
 
-function searchMany(targets: readonly unknown[], catalogue: string, progress: ProgressFn): { doc: SearchDocument; id: number; ms: number }[] {
+async function searchMany(targets: readonly unknown[], catalogue: string, progress: ProgressFn): Promise<{ doc: SearchDocument; id: number; ms: number }[]> {
+  const [{ recognise }, { searchCatalogue }, { searchDocument }, { rangeText }, { targetFromJson }, { Catalogue }, { provenance }] = await Promise.all([
+    import('../../match/recognise.js'),
+    import('../../match/search.js'),
+    import('../../match/searchDocument.js'),
+    import('../../series/target.js'),
+    import('../../series/targetFile.js'),
+    import('../../store/catalogue.js'),
+    import('../../store/provenance.js'),
+  ]);
   const cat = Catalogue.open(catalogue, { readonly: true });
   try {
     return targets.map((tj, i) => {
@@ -48,7 +41,8 @@ function searchMany(targets: readonly unknown[], catalogue: string, progress: Pr
 
 export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
   // The same engine entry `gradus module` calls; the result is plain data.
-  module: (input, progress) => {
+  module: async (input, progress) => {
+    const [{ computeModule }, { resultToJson }] = await Promise.all([import('../../modules/compute-module.js'), import('../../modules/format-result.js')]);
     const req = input as ModuleRequest;
     const result = computeModule(req.spec, {
       frobenius: true,
@@ -61,9 +55,9 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
     return { result, json: resultToJson(result) };
   },
   // The same calls `gradus search` makes, and the search is kept in the catalogue.
-  search: (input, progress) => {
+  search: async (input, progress) => {
     const { target, catalogue } = input as { target: unknown; catalogue: string };
-    return searchMany([target], catalogue, progress)[0];
+    return (await searchMany([target], catalogue, progress))[0];
   },
   // Several targets in one go (the demo tries a module's series one after another).
   'search-many': (input, progress) => {
@@ -71,7 +65,8 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
     return searchMany(targets, catalogue, progress);
   },
   // The same engine call as `gradus catalogue build`.
-  'catalogue-build': (input, progress) => {
+  'catalogue-build': async (input, progress) => {
+    const [{ buildCatalogue }, { Catalogue }] = await Promise.all([import('../../store/buildCatalogue.js'), import('../../store/catalogue.js')]);
     const { catalogue, nMax } = input as { catalogue: string; nMax: number };
     const cat = Catalogue.open(catalogue);
     try {
@@ -96,7 +91,14 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
     }
   },
   // The same engine entry as `gradus sym`; text in the Schur basis, JSON as --json prints it.
-  sym: (input, progress) => {
+  sym: async (input, progress) => {
+    const [{ qtTableJson }, { schurSeries }, { seriesToJson }, { evaluateExpression }, { formatText, integralCoefficients }] = await Promise.all([
+      import('../../cli/json-output.js'),
+      import('../../series/series.js'),
+      import('../../series/seriesJson.js'),
+      import('../../symfun/expression.js'),
+      import('../../symfun/sym-format.js'),
+    ]);
     const { expression } = input as { expression: string };
     const r = evaluateExpression(expression, { onProgress: (label, done, total) => progress(label, done, total) });
     const { denominator, terms } = integralCoefficients(r.value, 's');
@@ -121,11 +123,13 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
   },
   // The same engine entry as `gradus dist`.
   dist: async (input, progress) => {
+    const { computeDistribution } = await import('../../enumerate/distribution.js');
     const d = await computeDistribution(input as DistRequest, { onProgress: (done, total) => progress('objects', done, total) });
     return { series: d.series.toJson(), ms: d.provenance.ms, method: d.provenance.method };
   },
   // A target over n from a data command with {n}, as `gradus search --from` builds it.
   'from-command': async (input, progress) => {
+    const [{ targetFromCommand }, { targetToJson }] = await Promise.all([import('../../match/runFrom.js'), import('../../series/targetFile.js')]);
     const { template, nFrom, nTo, cwd } = input as { template: string; nFrom: number; nTo: number; cwd: string };
     let step = 0;
     const target = await targetFromCommand(template, nFrom, nTo, 'auto', process.env, cwd, undefined, (text) => progress(text, step++, nTo - nFrom + 1));
