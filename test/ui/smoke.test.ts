@@ -90,4 +90,11 @@ describe('gradus without a terminal', () => {
     expect(r.stdout).toMatch(/wrote \d+ bytes of Markdown/);
     expect(r.stderr).not.toMatch(/\n\s+at /);
   }, 60_000);
+
+  it('names the nearest screens for an unknown --screen, in one line with exit code 2', () => {
+    const r = runCli(['app', '--screen', 'modul'], { input: '' });
+    expect(r.code).toBe(2);
+    expect(r.stderr.trim().split('\n')).toHaveLength(1);
+    expect(r.stderr).toContain('unknown screen "modul" (nearest: modules');
+  }, 30_000);
 });
