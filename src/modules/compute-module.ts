@@ -4,6 +4,7 @@
  * or the small exact route over Q), runs it with two primes and compares, and returns the
  * cells with checks and provenance. The command line and the terminal app both call this.
  */
+import { Worker } from 'node:worker_threads';
 import { LimitError } from '../core/errors.js';
 import { CONFIRM_PRIME, DEFAULT_PRIME, PRIMES } from '../core/modp.js';
 import { toBigIntExact } from '../core/rational.js';
@@ -43,6 +44,10 @@ export interface ModuleOptions {
   readonly signal?: AbortSignal;
   /** Ranks computed elsewhere (parallel workers) for the exact-integer seed: [prime][task][cell]. */
   readonly youngRanks?: { readonly primes: readonly number[]; readonly ranks: readonly (readonly (readonly number[])[])[] };
+  /** Cells already computed for some primes (parallel workers, one prime each). */
+  readonly precomputed?: ReadonlyMap<number, readonly ModuleCell[]>;
+  /** Internal (workers): compute the first prime only, without confirmation. */
+  readonly onePrime?: boolean;
 }
 
 export const DEFAULT_MAX_WORK = 2e9;
@@ -95,7 +100,7 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
     const dops = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
     const chiOf = (c: string): -1 | 0 | 1 => (c === 'sign' ? -1 : c === 'trivial' ? 1 : 0);
     const hooks = { onProgress: options.onProgress, signal: options.signal };
-    const cache = new Map<number, readonly ModuleCell[]>();
+    const cache = new Map<number, readonly ModuleCell[]>(options.precomputed ?? []);
     const exactSeed = method === 'young' && derivOnly ? integerSeedSupport(probeSupport, terms) : undefined;
     if (exactSeed) notes.push('matrix entries are exact integers below 2^53: one enumeration serves both primes');
     const run = (p: number): readonly ModuleCell[] => {
@@ -122,7 +127,9 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
       }
       return iteratedClosure(sp.alg, sp.f, probeSupport.degree, ops, { frobenius: chi !== 0, p, onProgress: options.onProgress, signal: options.signal });
     };
-    const merged = mergeRuns([p1, p2], run, PRIMES);
+    const merged = options.onePrime
+      ? { cells: run(p1), primes: [p1], confirmation: 'one prime only (a worker thread; the caller confirms with a second prime)' }
+      : mergeRuns([p1, p2], run, PRIMES);
     cells = merged.cells;
     primes = merged.primes;
     confirmation = merged.confirmation;
@@ -166,26 +173,52 @@ export const PARALLEL_THRESHOLD_SECONDS = 3;
 export async function computeModuleAsync(spec: ModuleSpec, options: ModuleOptions = {}): Promise<ModuleResult> {
   const ops = parseOperatorFamilies(spec.ops);
   const method = options.method ?? 'auto';
-  if (!isDerivativeOnly(ops) || (method !== 'auto' && method !== 'young')) return computeModule(spec, options);
+  if (method === 'exact') return computeModule(spec, options);
+  const derivOnly = isDerivativeOnly(ops);
   const terms = seedTerms(spec);
-  const needs = { y: ops.some((o) => o.kind === 'y'), polar: false };
+  const polar = ops.some((o) => o.kind === 'polar');
+  const needs = { y: polar || ops.some((o) => o.kind === 'y'), polar };
   const p1 = options.prime ?? DEFAULT_PRIME;
   const p2 = p1 === CONFIRM_PRIME ? DEFAULT_PRIME : CONFIRM_PRIME;
   const probe = buildSeedPolynomial(spec.n, terms, primeCoeffs(p1), needs);
   const support = seedSupport(probe.alg.space, p1, probe.f);
-  const est = estimateModuleWork(support, ops, 'young');
-  const exact = integerSeedSupport(support, terms);
+  const young = (method === 'auto' || method === 'young') && (derivOnly || polarizationReducible(ops));
+  const est = estimateModuleWork(support, ops, young && derivOnly ? 'young' : 'iterated');
   const limit = options.maxWork ?? DEFAULT_MAX_WORK;
-  if (!exact || est.seconds < PARALLEL_THRESHOLD_SECONDS || est.units > limit) return computeModule(spec, options);
+  if (est.seconds < PARALLEL_THRESHOLD_SECONDS || est.units > limit) return computeModule(spec, options);
   options.onEstimate?.(est.units, est.seconds);
-  const chi = probe.character === 'sign' ? -1 : probe.character === 'trivial' ? 1 : 0;
-  const dops = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
+  const quiet = { ...options, onEstimate: undefined };
   const t0 = performance.now();
-  const ranks = await parallelRanks(exact, dops, chi, [p1, p2], { onProgress: options.onProgress, signal: options.signal });
-  const result = computeModule(spec, { ...options, onEstimate: undefined, youngRanks: { primes: [p1, p2], ranks } });
+  const exact = young && derivOnly ? integerSeedSupport(support, terms) : undefined;
+  let result: ModuleResult;
+  if (exact) {
+    // one enumeration per Young subgroup serves both primes: a task queue over both cores
+    const chi = probe.character === 'sign' ? -1 : probe.character === 'trivial' ? 1 : 0;
+    const dops = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
+    const ranks = await parallelRanks(exact, dops, chi, [p1, p2], { onProgress: options.onProgress, signal: options.signal });
+    result = computeModule(spec, { ...quiet, youngRanks: { primes: [p1, p2], ranks } });
+  } else {
+    // one prime per core
+    const runs = await Promise.all([p1, p2].map((p) => moduleInWorker(spec, { frobenius: options.frobenius, method, maxWork: limit, prime: p }, options.signal)));
+    result = computeModule(spec, { ...quiet, precomputed: new Map([[p1, runs[0]!], [p2, runs[1]!]]) });
+  }
   const seconds = (performance.now() - t0) / 1000;
-  return {
-    ...result,
-    provenance: { ...result.provenance, seconds, notes: [...result.provenance.notes, 'Young-subgroup tasks ran in parallel worker threads'] },
-  };
+  return { ...result, provenance: { ...result.provenance, seconds, notes: [...result.provenance.notes, 'computed on worker threads'] } };
+}
+
+function moduleInWorker(spec: ModuleSpec, options: Pick<ModuleOptions, 'frobenius' | 'method' | 'maxWork' | 'prime'>, signal?: AbortSignal): Promise<readonly ModuleCell[]> {
+  return new Promise((resolve, reject) => {
+    const w = new Worker(new URL('./module-worker-entry.mjs', import.meta.url), { workerData: { spec, options: { ...options, onePrime: true } } });
+    const stop = (): void => {
+      void w.terminate();
+      reject(signal?.reason ?? new Error('aborted'));
+    };
+    signal?.addEventListener('abort', stop, { once: true });
+    w.once('message', (cells: readonly ModuleCell[]) => {
+      signal?.removeEventListener('abort', stop);
+      void w.terminate();
+      resolve(cells);
+    });
+    w.once('error', reject);
+  });
 }

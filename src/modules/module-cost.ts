@@ -6,7 +6,9 @@ import { conjugate, partitionList } from '../core/partitions.js';
 import type { OperatorFamily } from './operators.js';
 import type { SeedSupport } from './seed-support.js';
 
-const SECONDS_PER_UNIT = 1.5e-7; // measured on the derivative route (Vandermonde n = 8, one core, both primes)
+const SECONDS_PER_UNIT = 1.5e-7;
+// polarized and iterated closures: measured on δ_{6,6} with P_1..P_5 (about 400 s of CPU, both primes)
+const SECONDS_PER_UNIT_POLAR = 4e-6; // measured on the derivative route (Vandermonde n = 8, one core, both primes)
 
 function groupOrder(l: readonly number[]): number {
   let s = 1;
@@ -29,5 +31,5 @@ export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFami
     const polar = ops.some((o) => o.kind === 'polar');
     units = seed.count * boxes * ops.length * (polar ? 4 * n : 1);
   }
-  return { units, seconds: units * SECONDS_PER_UNIT };
+  return { units, seconds: units * (route === 'young' ? SECONDS_PER_UNIT : SECONDS_PER_UNIT_POLAR) };
 }
