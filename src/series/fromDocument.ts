@@ -34,7 +34,7 @@ export function seriesFromDocument(doc: unknown, take: Take, where: string): Ser
     frob = seriesFromJson(o['schur'], `${where}.schur`);
   }
   if (o['frobenius'] && typeof o['frobenius'] === 'object') frob = frobeniusOfDist(o['frobenius'] as Record<string, unknown>, where);
-  if ('hilbertSeries' in o) graded = seriesFromJson(o['hilbertSeries'], `${where}.hilbertSeries`);
+  if ('hilbertSeries' in o) graded = gradedFromTable(o['hilbertSeries'], o['axes'], `${where}.hilbertSeries`);
   else if ('series' in o) {
     const s = seriesFromJson(o['series'], `${where}.series`);
     if (s.kind === 'schur') frob = s;
@@ -114,4 +114,34 @@ function frobeniusOfDist(f: Record<string, unknown>, where: string): Series {
     return schurSeries([...sf.schurTerms()].map(([l, c]) => [l, c.toPoly()] as const));
   }
   throw new InputError(`${where}: unknown Frobenius basis ${JSON.stringify(f['basis'])}`);
+}
+
+function depth(v: unknown): number {
+  return Array.isArray(v) ? 1 + (v.length ? Math.max(...v.map(depth)) : 0) : 0;
+}
+
+/**
+ * A Hilbert table with any number of axes. Axes held at one degree are dropped; one or two
+ * axes left give a series in q or in q,t, more give a multigraded table.
+ */
+export function gradedFromTable(v: unknown, axesDoc: unknown, where: string): Series {
+  const d = depth(v);
+  if (d <= 2) return seriesFromJson(v, where);
+  const axes = Array.isArray(axesDoc) && axesDoc.length === d ? axesDoc.map(String) : Array.from({ length: d }, (_, i) => `axis${i + 1}`);
+  const terms = new Map<string, bigint>();
+  const walk = (x: unknown, at: number[]): void => {
+    if (Array.isArray(x)) x.forEach((y, i) => walk(y, [...at, i]));
+    else if (x !== 0 && x !== '0') terms.set(at.join(','), BigInt(x as number | string));
+  };
+  walk(v, []);
+  const keep = axes.map((_, i) => new Set([...terms.keys()].map((k) => k.split(',')[i])).size > 1);
+  const kept = axes.filter((_, i) => keep[i]);
+  if (kept.length <= 2) {
+    const poly = Poly.fromTerms([...terms].map(([k, c]) => {
+      const e = k.split(',').map(Number).filter((_, i) => keep[i]);
+      return [e[0] ?? 0, e[1] ?? 0, c] as const;
+    }));
+    return qtSeries(poly);
+  }
+  return { kind: 'multi', axes, terms };
 }

@@ -25,7 +25,7 @@ export function makeTarget(label: string, entries: readonly TargetEntry[]): Targ
   let kind: SeriesKind;
   if (kinds.size === 1) kind = [...kinds][0]!;
   else if ([...kinds].every((k) => k === 'q' || k === 'qt')) kind = 'qt';
-  else throw new InputError(`a target's entries must be of one kind (got ${[...kinds].join(', ')})`);
+  else throw new InputError(`a target's entries must be of one kind (got ${[...kinds].join(', ')}${kinds.has('multi') ? '; some entries have three or more varying gradings' : ''})`);
   const seen = new Set<string>();
   for (const e of entries) {
     if (!Number.isInteger(e.n) || e.n < 0) throw new InputError(`n must be a non-negative integer (got ${e.n})`, 'n');

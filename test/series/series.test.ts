@@ -87,3 +87,14 @@ describe('series', () => {
     expect(() => seriesFromDocument(dist, 'sign', 'd')).toThrow(/Frobenius/);
   });
 });
+
+describe('module tables with three axes', () => {
+  it('drops axes held at one degree; three varying axes stay a multigraded table', async () => {
+    const { gradedFromTable } = await import('../../src/series/fromDocument.js');
+    // x, y, θ with θ always 1: a q,t series q + t (made up for the test)
+    const s = gradedFromTable([[[0, 0], [0, 1]], [[0, 1], [0, 0]]], ['x', 'y', 'theta'], 'm');
+    expect(seriesEquals(s, qtSeries(Poly.q.add(Poly.t)))).toBe(true);
+    const m = gradedFromTable([[[1, 0], [0, 0]], [[0, 0], [0, 1]]], ['x', 'y', 'theta'], 'm');
+    expect(m.kind).toBe('multi');
+  });
+});

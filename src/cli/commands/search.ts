@@ -110,7 +110,8 @@ function printText(io: CommandIO, d: SearchDocument, id: number, limit: number):
   const triedLine = `tried ${t.candidates} candidates at n = ${t.anchor?.n ?? '-'}${t.anchor?.k === undefined ? '' : `, k = ${t.anchor.k}`} (${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there) over ${t.families.length} families [${t.families.join(', ')}], ${t.statistics.length} statistics, forms ${t.combines.join('/')}, variants ${t.variants.join(', ')}; catalogue n ≤ ${t.catalogueMaxN}`;
   if (d.matches.length === 0) {
     io.out('no match: no distribution in the catalogue equals the target or any of its variants.');
-    if (!t.anchor) io.out(`the catalogue holds n ≤ ${t.catalogueMaxN}, below every n of the target; extend it with gradus catalogue build --n-max N`);
+    if ((d.target as { kind?: string }).kind === 'multi') io.out('the target is a table with three or more varying gradings; the catalogue holds series in q, in q and t, and Frobenius series');
+    else if (!t.anchor) io.out(`the catalogue holds n ≤ ${t.catalogueMaxN}, below every n of the target; extend it with gradus catalogue build --n-max N`);
     io.out(triedLine);
   } else {
     io.out(`${d.matches.length} match${d.matches.length === 1 ? '' : 'es'}, simplest first:`);
