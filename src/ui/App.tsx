@@ -11,7 +11,7 @@ import { ErrorBoundary } from './components/ErrorBoundary.js';
 import { HelpLine } from './components/HelpLine.js';
 import { TabBar } from './components/TabBar.js';
 import type { ScreenProps } from './ScreenProps.js';
-import { SCREENS, screenInfo, type ScreenId } from './screens.js';
+import { EDIT_KEYS, SCREENS, screenInfo, type ScreenId } from './screens.js';
 import { ExportScreen } from './screens/ExportScreen.js';
 import { FamiliesScreen } from './screens/FamiliesScreen.js';
 import { HelpScreen } from './screens/HelpScreen.js';
@@ -131,7 +131,7 @@ export function App(props: AppProps) {
           {status.kind === 'error' ? '✗ ' : ''}
           {status.text}
         </Text>
-        <HelpLine keys={screenInfo(screen).keys} width={width} />
+        <HelpLine keys={editing ? EDIT_KEYS : screenInfo(screen).keys} width={width} />
       </Box>
     </ThemeContext.Provider>
   );

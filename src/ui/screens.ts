@@ -127,8 +127,16 @@ export const GLOBAL_KEYS: readonly KeyHelp[] = [
   { keys: 'Tab / Shift+Tab', action: 'next / previous screen' },
   { keys: '1–7', action: 'jump to a screen (when no field is being edited)' },
   { keys: '?', action: 'this help' },
-  { keys: 'Esc', action: 'leave the field being edited' },
+  { keys: 'Esc', action: 'leave the field being edited (Enter submits it; Ctrl+U clears it)' },
   { keys: 'q or Ctrl+C', action: 'quit (Ctrl+C also while editing)' },
+];
+
+/** The help line while a text field is being edited. */
+export const EDIT_KEYS: readonly KeyHelp[] = [
+  { keys: 'Enter', action: 'submit' },
+  { keys: 'Esc', action: 'leave' },
+  { keys: '←/→ Home/End', action: 'move' },
+  { keys: 'Ctrl+U', action: 'clear' },
 ];
 
 export function screenInfo(id: ScreenId): ScreenInfo {

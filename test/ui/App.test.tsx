@@ -56,6 +56,19 @@ describe('app shell', () => {
     }
   });
 
+  it('while a field is edited, the help line shows the editing keys and digits type', async () => {
+    r = renderApp({ initialScreen: 'symfun' });
+    await press(r, 'e');
+    let f = frame(r);
+    expect(f).toContain('Enter submit  Esc leave');
+    await press(r, '2');
+    f = frame(r);
+    expect(f).toContain('[5SymFun]');
+    expect(f).toContain('sym>nabla(e({n}))2');
+    await press(r, KEYS.escape);
+    expect(frame(r)).toContain('e edit expression');
+  });
+
   it('q quits', async () => {
     r = renderApp();
     await press(r, 'q');
