@@ -24,7 +24,8 @@ import { seedSupport } from './seed-support.js';
 import { seedTerms, type SeedSpec } from './seeds.js';
 import { mergeRuns } from './merge-runs.js';
 import { parallelRanks } from './parallel-ranks.js';
-import { polarizationReducible, polarizedSeeds } from './polarized-seeds.js';
+import { independentSeeds, polarizationReducible, polarizedSeeds } from './polarized-seeds.js';
+import type { SuperAlgebra } from './super-algebra.js';
 
 export interface ModuleSpec extends SeedSpec {
   /** Operator family names: x, y, theta, polar1, polar2, … */
@@ -110,7 +111,7 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
       const chi = chiOf(sp.character);
       if (method === 'young' && !derivOnly) {
         const orders = ops.flatMap((o) => (o.kind === 'polar' ? [o.order] : []));
-        const seeds = polarizedSeeds(sp.alg, sp.f, orders).map((g) => seedSupport(sp.alg.space, p, g));
+        const seeds = independentSeeds(sp.alg as SuperAlgebra<number>, polarizedSeeds(sp.alg, sp.f, orders), p).map((g) => seedSupport(sp.alg.space, p, g));
         return cellsFromRanks(spec.n, degreeBox(seeds), chi, derivativeRanks(seeds, dops, chi, [p], p, hooks)[0]!);
       }
       if (method === 'young') {

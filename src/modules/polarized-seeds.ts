@@ -5,6 +5,7 @@
  * the operators (or ∂y is not), the closure of f is the sum over multisets J of the derivative
  * closures of the seeds P_J f, each (anti)symmetric like f since P_J is S_n-invariant.
  */
+import { EchelonModP } from './echelon-mod-p.js';
 import type { OperatorFamily } from './operators.js';
 import type { SuperAlgebra, SuperPoly } from './super-algebra.js';
 
@@ -28,4 +29,34 @@ export function polarizedSeeds<T>(alg: SuperAlgebra<T>, f: SuperPoly<T>, orders:
   };
   walk(f, 0);
   return out;
+}
+
+/**
+ * Keep, in each multidegree, only seeds independent of those kept before (mod p): a seed in
+ * the span of others adds nothing to the sum of derivative closures.
+ */
+export function independentSeeds(alg: SuperAlgebra<number>, seeds: readonly SuperPoly<number>[], p: number): SuperPoly<number>[] {
+  const groups = new Map<string, { ech: EchelonModP; index: Map<number, number> }>();
+  const kept: SuperPoly<number>[] = [];
+  for (const g of seeds) {
+    const key = alg.space.degrees(g.keys().next().value as number).join(',');
+    let grp = groups.get(key);
+    if (!grp) {
+      grp = { ech: new EchelonModP(p), index: new Map() };
+      groups.set(key, grp);
+    }
+    const cols: number[] = [];
+    const vals: number[] = [];
+    for (const [k, v] of g) {
+      let c = grp.index.get(k);
+      if (c === undefined) {
+        c = grp.index.size;
+        grp.index.set(k, c);
+      }
+      cols.push(c);
+      vals.push(v);
+    }
+    if (grp.ech.insert(cols, vals, cols.length)) kept.push(g);
+  }
+  return kept;
 }
