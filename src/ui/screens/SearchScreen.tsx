@@ -100,7 +100,12 @@ export function SearchScreen(props: ScreenProps) {
         {item && target ? <Text {...theme.style('title')}>{item.title}</Text> : <Text {...theme.style('warn')}>none yet — compute a module (4), evaluate an expression (5), or type coefficients (e)</Text>}
       </Text>
       {field === 'coeffs' ? (
-        <LineInput label="coefficients (n=N:c0,c1,…; more entries after ;)" value={draft} active width={w} onChange={setDraft} onSubmit={submitCoeffs} onLeave={() => setField(undefined)} />
+        <>
+          <LineInput label="series" value={draft} active width={w} onChange={setDraft} onSubmit={submitCoeffs} onLeave={() => setField(undefined)} />
+          <Text wrap="truncate" {...theme.style('dim')}>
+            entries n=N:c0,c1,… (coefficients of q^0, q^1, …) separated by ; — q,t rows split by |
+          </Text>
+        </>
       ) : null}
       {target
         ? targetLines(target, previewN).map((l, i) => (
