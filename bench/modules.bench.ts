@@ -1,0 +1,93 @@
+/**
+ * Module engine: the figures of the module issue, each with both primes (confirmation
+ * included), worker threads, wall time, CPU time and peak memory. Sections run by name:
+ *   npm run bench -- modules                      (all but n = 9)
+ *   MODULES_BENCH=vandermonde8,delta8 npm run bench -- modules
+ *   MODULES_BENCH=vandermonde9 npm run bench -- modules   (long: target 15 minutes)
+ * Targets (issue): Vandermonde n = 8 ≤ 30 s; n = 9 ≤ 15 min; δ_{8,k} x-closures, all k,
+ * ≤ 5 min; x/θ tables of δ_{7,k} with Frobenius, all k, ≤ 100 s; polarized δ_{6,k}, all k,
+ * ≤ 10 min. Also compares polarized closures with Δ'_{e_{k−1}} e_n where that is cheap.
+ */
+import { resourceUsage } from 'node:process';
+import { partitionKey, partitionList } from '../src/core/partitions.js';
+import { Poly } from '../src/core/poly.js';
+import { computeModuleAsync, type ModuleSpec } from '../src/modules/compute-module.js';
+import type { ModuleResult } from '../src/modules/module-result.js';
+import { deltaPrimeOfEn } from '../src/symfun/operators.js';
+import { SymFun } from '../src/symfun/symfun.js';
+
+const wanted = (process.env['MODULES_BENCH'] ?? 'vandermonde8,delta8,xtheta7,polar6').split(',');
+
+function peakMB(): number {
+  return resourceUsage().maxRSS / 1024; // the main thread's process, workers included
+}
+
+async function timed(spec: ModuleSpec, frobenius = true): Promise<[ModuleResult, number, number]> {
+  const c0 = process.cpuUsage();
+  const t0 = performance.now();
+  const r = await computeModuleAsync(spec, { frobenius, maxWork: 1e14 });
+  const cpu = process.cpuUsage(c0);
+  return [r, (performance.now() - t0) / 1000, (cpu.user + cpu.system) / 1e6];
+}
+
+function line(label: string, r: ModuleResult, wall: number, cpu: number): void {
+  const dim = r.cells.reduce((s, c) => s + c.dim, 0);
+  const maxCell = Math.max(...r.cells.map((c) => c.dim));
+  const checks = r.checks.map((c) => `${c.check.split(' ')[0]}:${c.holds === null ? 'n/a' : c.holds ? 'ok' : 'FAIL'}`).join(' ');
+  console.log(`${label.padEnd(28)} dim ${String(dim).padStart(7)}  largest cell ${String(maxCell).padStart(6)}  wall ${wall.toFixed(1).padStart(7)} s  main-thread cpu ${cpu.toFixed(1).padStart(6)} s  ${r.provenance.confirmation.startsWith('confirmed') ? 'confirmed by 2 primes' : r.provenance.confirmation}  [${checks}]`);
+}
+
+function report(name: string, total: number, target: number): void {
+  console.log(`  => ${name}: ${total.toFixed(1)} s (target ${target} s, ratio ${(total / target).toFixed(2)}), peak RSS ${peakMB().toFixed(0)} MB`);
+}
+
+if (wanted.includes('vandermonde8')) {
+  const [r, wall, cpu] = await timed({ seed: 'vandermonde', n: 8, ops: ['x'] });
+  line('Vandermonde n=8 (x)', r, wall, cpu);
+  report('Vandermonde n = 8, Hilbert + graded Frobenius', wall, 30);
+}
+if (wanted.includes('vandermonde9')) {
+  const [r, wall, cpu] = await timed({ seed: 'vandermonde', n: 9, ops: ['x'] });
+  line('Vandermonde n=9 (x)', r, wall, cpu);
+  report('Vandermonde n = 9', wall, 900);
+}
+if (wanted.includes('delta8')) {
+  let total = 0;
+  for (let k = 1; k <= 8; k++) {
+    const [r, wall, cpu] = await timed({ seed: 'superspace-vandermonde', n: 8, k, ops: ['x'] });
+    total += wall;
+    line(`δ_{8,${k}} (x)`, r, wall, cpu);
+  }
+  report('δ_{8,k} x-closures, every k', total, 300);
+}
+if (wanted.includes('xtheta7')) {
+  let total = 0;
+  for (let k = 1; k <= 7; k++) {
+    const [r, wall, cpu] = await timed({ seed: 'superspace-vandermonde', n: 7, k, ops: ['x', 'theta'] });
+    total += wall;
+    line(`δ_{7,${k}} (x, θ)`, r, wall, cpu);
+  }
+  report('x/θ tables of δ_{7,k} with Frobenius, every k', total, 100);
+}
+if (wanted.includes('polar6')) {
+  let total = 0;
+  const n = 6;
+  for (let k = 1; k <= n; k++) {
+    const ops = ['x', 'y', ...Array.from({ length: n - 1 }, (_, j) => `polar${j + 1}`)];
+    const [r, wall, cpu] = await timed({ seed: 'superspace-vandermonde', n, k, ops });
+    total += wall;
+    line(`δ_{6,${k}} (x, y, P1..P5)`, r, wall, cpu);
+    // Δ'_{e_{k−1}} e_n (MATH.md §4: theorem for k = n, conjecture otherwise)
+    const t0 = performance.now();
+    const g = k === 1 ? SymFun.one : SymFun.basisElement('e', [k - 1]);
+    const expected = new Map<string, Poly>();
+    for (const [key, c] of deltaPrimeOfEn(g, n).schurTerms()) if (!c.isZero()) expected.set(key, c.toPoly());
+    let same = true;
+    partitionList(n).forEach((l, i) => {
+      const got = Poly.fromTerms(r.cells.map((c) => [c.degree[0], c.degree[1], BigInt(c.multiplicities![i]!)] as const));
+      if (!got.equals(expected.get(partitionKey(l)) ?? Poly.zero)) same = false;
+    });
+    console.log(`  Δ'_{e_${k - 1}} e_${n}: ${same ? 'equal' : 'DIFFERENT'} (symmetric-function side ${((performance.now() - t0) / 1000).toFixed(1)} s)`);
+  }
+  report('polarized δ_{6,k}, every k', total, 600);
+}
