@@ -13,6 +13,10 @@ function statLatex(id: string): string {
 /** The candidate's formula in math, written in terms of the original target. */
 export function matchLatex(m: SearchMatch): string {
   const [a, b] = m.statistics.map(statLatex);
+  if (m.combine === 'slice') {
+    const shift = /= k([+-]\d+)?$/.exec(m.mapping)?.[1] ?? '';
+    return `\\sum_{x \\in ${latexId(m.family)}(n),\\ ${b} = k${shift}} q^{${a}}`;
+  }
   const [qv, tv] = m.variant.includes('q-t-swapped') ? ['t', 'q'] : ['q', 't'];
   const weight = m.combine === 'sum' ? `${qv}^{${a} + ${b}}` : b === undefined ? `${qv}^{${a}}` : `${qv}^{${a}} ${tv}^{${b}}`;
   const sym = m.combine === 'shape' ? ' s_{\\lambda(x)}' : m.combine === 'fundamental' ? ' F_{\\mathrm{Des}(w(x))}' : m.combine === 'ifundamental' ? ' F_{\\mathrm{iDes}(w(x))}' : '';

@@ -4,18 +4,19 @@
  * hash; every row found gives candidates (group × parameter mapping) that are then
  * checked on every entry of the target. Counts at q = 1 are reported as the first filter.
  */
-import type { Catalogue, Combine, StoredRow } from '../store/catalogue.js';
+import type { Catalogue, MatchCombine, StoredRow } from '../store/catalogue.js';
 import { seriesHash } from '../store/seriesHash.js';
 import { seriesAtOne, seriesEquals, type SeriesKind } from '../series/series.js';
 import { rangeText, type Target, type TargetEntry } from '../series/target.js';
 import { candidateFormula } from './candidateFormula.js';
 import { applyMapping, mappingCost, mappingsFor, type Mapping } from './parameterMapping.js';
+import { sliceMatches } from './sliceSearch.js';
 import { variantsOf } from './variants.js';
 
 export interface SearchMatch {
   readonly family: string;
   readonly statistics: readonly string[];
-  readonly combine: Combine;
+  readonly combine: MatchCombine;
   readonly transform: string;
   readonly variant: string;
   readonly mapping: string;
@@ -45,7 +46,7 @@ export interface SearchOutcome {
   readonly tried: SearchTried;
 }
 
-const COMBINE_COST: Record<Combine, number> = { single: 0, shape: 0, joint: 1, fundamental: 1, ifundamental: 1.5, sum: 2 };
+const COMBINE_COST: Record<MatchCombine, number> = { single: 0, shape: 0, joint: 1, fundamental: 1, ifundamental: 1.5, sum: 2, slice: 1.5 };
 
 function kindsFor(kind: SeriesKind): SeriesKind[] {
   return kind === 'schur' ? ['schur'] : kind === 'multi' ? ['multi'] : ['q', 'qt'];
@@ -72,6 +73,10 @@ export function searchCatalogue(cat: Catalogue, target: Target): SearchOutcome {
   for (const v of variants) {
     const anchor = anchor0 && v.target.entries.find((e) => e.n === anchor0.n && e.k === anchor0.k);
     if (!anchor) continue;
+    for (const m of sliceMatches(cat, anchor, v.target.entries, v.id)) {
+      const key = [m.family, m.statistics.join(','), m.combine, m.transform, m.mapping].join('|');
+      if (!matches.has(key)) matches.set(key, m);
+    }
     const rows = cat.byHash(seriesHash(anchor.series)).filter((r) => seriesEquals(r.series, anchor.series));
     for (const r of rows) exactGroups.add([r.family, r.statistics.join(','), r.combine, r.transform].join('|'));
     for (const row of rows) {
@@ -110,7 +115,7 @@ export function searchCatalogue(cat: Catalogue, target: Target): SearchOutcome {
       families: counts.families,
       statistics: counts.statistics,
       variants: variants.map((v) => v.id),
-      combines: target.kind === 'schur' ? ['shape', 'fundamental', 'ifundamental'] : ['single', 'sum', 'joint'],
+      combines: target.kind === 'schur' ? ['shape', 'fundamental', 'ifundamental'] : ['single', 'sum', 'joint', ...(target.entries.some((e) => e.k !== undefined) ? ['slice'] : [])],
     },
   };
 }

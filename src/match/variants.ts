@@ -21,7 +21,10 @@ export function variantsOf(t: Target): Variant[] {
   const univariate = t.entries.every((e) => seriesIsUnivariate(e.series));
   if (t.kind === 'q' || t.kind === 'qt') {
     if (univariate) out.push({ id: 'q-reversed', description: 'q^deg f(1/q) of each entry', target: map(reverseSeries) });
-    else out.push({ id: 'q-t-swapped', description: 'q and t exchanged', target: map(swapSeries) });
+    else {
+      out.push({ id: 'q-t-swapped', description: 'q and t exchanged', target: map(swapSeries) });
+      out.push({ id: 'q-reversed', description: 'q^deg_q f(1/q, t) of each entry', target: map(reverseSeries) });
+    }
   }
   if (t.kind === 'schur') {
     out.push({ id: 'omega', description: 'ω applied (s_λ → s_λ\')', target: map(omegaSeries) });

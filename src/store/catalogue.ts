@@ -19,6 +19,8 @@ export const REBUILD_HINT = 'gradus catalogue rebuild';
 
 /** How a distribution row was formed from its statistics. */
 export type Combine = 'single' | 'joint' | 'sum' | 'shape' | 'fundamental' | 'ifundamental';
+/** How a match was formed: a stored combination, or a slice of a joint distribution (k = value of the second statistic). */
+export type MatchCombine = Combine | 'slice';
 
 export interface DistributionRow {
   readonly family: string;
@@ -134,6 +136,11 @@ export class Catalogue {
   }
 
   private findStatement: Database.Statement | undefined;
+
+  /** Joint distributions of families indexed by n alone, at size n (for targets in n and k). */
+  jointRowsAt(n: number): StoredRow[] {
+    return (this.db.prepare("SELECT * FROM distributions WHERE combine = 'joint' AND n = ? AND k IS NULL").all(n) as RawRow[]).map(decode);
+  }
 
   /** The row of one candidate at one place, if stored. */
   find(family: string, params: Readonly<Record<string, number>>, statistics: string, combine: string, transform: string): StoredRow | undefined {

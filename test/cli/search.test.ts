@@ -99,6 +99,13 @@ describe('gradus search (acceptance)', () => {
     expect(perm).toContain('inversions');
     expect(perm).toContain('major-index');
   });
+  it('q-binomials (src/core/qanalogs.ts) as a slice: subsets with k ones weighted by inversions of the 0/1 word (common practice)', { timeout: 60_000 }, () => {
+    const r = search(['--n-range', '1..6', '--from', 'qseries binomial --n {n} --k {k}']);
+    expect(r.code, r.stderr).toBe(0);
+    const m = r.doc.matches.find((x) => x.combine === 'slice' && x.family === 'subsets' && x.transform === '');
+    expect(m?.statistics).toEqual(['binary-inversions', 'ones']);
+    expect(m?.verified).toBe('n = 1..6, all k = 1..n');
+  });
   it('a target file in our format, cut by --n-range', { timeout: 30_000 }, () => {
     const f = join(dir, 'target.json');
     // [n]_q! for n = 1..5 (src/core/qanalogs.ts values, written by hand)
