@@ -4,8 +4,7 @@
  * export of what it found. The Tour screen runs it step by step; without a terminal the
  * same steps print as text.
  */
-import { existsSync } from 'node:fs';
-import { mkdtempSync } from 'node:fs';
+import { existsSync, mkdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Poly } from '../../core/poly.js';
@@ -36,7 +35,7 @@ export interface DemoState {
 export interface DemoEnv {
   readonly env: Readonly<Record<string, string | undefined>>;
   readonly cwd: string;
-  /** Folder for the exported file (a fresh temporary folder when not given). */
+  /** Folder for the exported file (gradus-demo in the temp folder when not given). */
   readonly exportDir?: string;
 }
 
@@ -127,7 +126,9 @@ export const DEMO_STEPS: readonly DemoStep[] = [
     async run(state, env) {
       if (!state.search) throw new Error('the search step has not run');
       if (!EXPORT_ENGINE_AVAILABLE) return { ...state, exportNote: 'the export engine is not available in this build: nothing was written' };
-      const dir = env.exportDir ?? mkdtempSync(join(tmpdir(), 'gradus-demo-'));
+      // One folder for every run: the demo's file is replaced, never piled up.
+      const dir = env.exportDir ?? join(tmpdir(), 'gradus-demo');
+      mkdirSync(dir, { recursive: true });
       const exported = exportItem({ id: 0, title: 'demo search', origin: 'search', payload: state.search }, 'markdown', join(dir, 'gradus-demo-search.md'), true);
       return { ...state, exported };
     },
