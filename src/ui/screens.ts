@@ -55,6 +55,7 @@ export const SCREENS: readonly ScreenInfo[] = [
       { keys: 'p', action: 'edit parameters' },
       { keys: '[/]', action: 'scroll the chart' },
       { keys: 'g', action: 'send to search' },
+      { keys: 'x', action: 'cancel a long count' },
     ],
   },
   {

@@ -1,6 +1,6 @@
 /** A progress bar with done/total, percentage and an estimate of the time left. */
 import { Text } from 'ink';
-import { formatDuration } from '../../cli/progress.js';
+import { formatCount, formatDuration } from '../../cli/progress.js';
 import { useTheme } from '../ThemeContext.js';
 
 export interface ProgressState {
@@ -11,9 +11,10 @@ export interface ProgressState {
 }
 
 export function progressText(p: ProgressState): string {
-  if (!p.total || p.done <= 0 || p.elapsedMs <= 0) return p.total ? `${p.done}/${p.total}` : `${p.done} done`;
+  const of = p.total ? `${formatCount(p.done)}/${formatCount(p.total)}` : `${formatCount(p.done)} done`;
+  if (!p.total || p.done <= 0 || p.elapsedMs <= 0) return of;
   const left = ((p.total - p.done) * p.elapsedMs) / p.done / 1000;
-  return `${p.done}/${p.total}  ${((100 * p.done) / p.total).toFixed(0)}%  ~${formatDuration(left)} left`;
+  return `${of}  ${((100 * p.done) / p.total).toFixed(0)}%  ~${formatDuration(left)} left`;
 }
 
 export function ProgressBar({ state, width }: { readonly state: ProgressState; readonly width: number }) {

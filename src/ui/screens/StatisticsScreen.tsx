@@ -176,6 +176,8 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
         </Text>
       ) : job.state.status === 'running' ? (
         <ProgressBar state={{ label: 'objects', done: job.state.progress?.done ?? 0, total: job.state.progress?.total, elapsedMs: now - job.state.startedAt }} width={props.width} />
+      ) : job.state.status === 'cancelled' ? (
+        <Text {...theme.style('warn')}>Cancelled. Change the statistic, family or size to compute again.</Text>
       ) : result.error ? (
         <Text wrap="wrap" {...theme.style('error')}>
           ✗ {result.error}
