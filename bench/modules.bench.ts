@@ -19,7 +19,7 @@ import { SymFun } from '../src/symfun/symfun.js';
 const wanted = (process.env['MODULES_BENCH'] ?? 'vandermonde8,delta8,xtheta7,polar6').split(',');
 
 function peakMB(): number {
-  return resourceUsage().maxRSS / 1024; // the main thread's process, workers included
+  return resourceUsage().maxRSS / 1024; // the whole process, worker threads included
 }
 
 async function timed(spec: ModuleSpec, frobenius = true): Promise<[ModuleResult, number, number]> {
@@ -34,7 +34,7 @@ function line(label: string, r: ModuleResult, wall: number, cpu: number): void {
   const dim = r.cells.reduce((s, c) => s + c.dim, 0);
   const maxCell = Math.max(...r.cells.map((c) => c.dim));
   const checks = r.checks.map((c) => `${c.check.split(' ')[0]}:${c.holds === null ? 'n/a' : c.holds ? 'ok' : 'FAIL'}`).join(' ');
-  console.log(`${label.padEnd(28)} dim ${String(dim).padStart(7)}  largest cell ${String(maxCell).padStart(6)}  wall ${wall.toFixed(1).padStart(7)} s  main-thread cpu ${cpu.toFixed(1).padStart(6)} s  ${r.provenance.confirmation.startsWith('confirmed') ? 'confirmed by 2 primes' : r.provenance.confirmation}  [${checks}]`);
+  console.log(`${label.padEnd(28)} dim ${String(dim).padStart(7)}  largest cell ${String(maxCell).padStart(6)}  wall ${wall.toFixed(1).padStart(7)} s  process cpu ${cpu.toFixed(1).padStart(6)} s  ${r.provenance.confirmation.startsWith('confirmed') ? 'confirmed by 2 primes' : r.provenance.confirmation}  [${checks}]`);
 }
 
 function report(name: string, total: number, target: number): void {

@@ -47,6 +47,8 @@ export interface ModuleOptions {
   readonly youngRanks?: { readonly primes: readonly number[]; readonly ranks: readonly (readonly (readonly number[])[])[] };
   /** Cells already computed for some primes (parallel workers, one prime each). */
   readonly precomputed?: ReadonlyMap<number, readonly ModuleCell[]>;
+  /** computeModuleAsync: use worker threads when the estimate exceeds this many seconds. */
+  readonly parallelAboveSeconds?: number;
   /** Internal (workers): compute the first prime only, without confirmation. */
   readonly onePrime?: boolean;
 }
@@ -186,7 +188,7 @@ export async function computeModuleAsync(spec: ModuleSpec, options: ModuleOption
   const young = (method === 'auto' || method === 'young') && (derivOnly || polarizationReducible(ops));
   const est = estimateModuleWork(support, ops, young && derivOnly ? 'young' : 'iterated');
   const limit = options.maxWork ?? DEFAULT_MAX_WORK;
-  if (est.seconds < PARALLEL_THRESHOLD_SECONDS || est.units > limit) return computeModule(spec, options);
+  if (est.seconds < (options.parallelAboveSeconds ?? PARALLEL_THRESHOLD_SECONDS) || est.units > limit) return computeModule(spec, options);
   options.onEstimate?.(est.units, est.seconds);
   const quiet = { ...options, onEstimate: undefined };
   const t0 = performance.now();
