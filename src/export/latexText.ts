@@ -9,9 +9,9 @@ const MATH: Record<string, string> = {
   '·': '\\cdot', 'Σ': '\\Sigma', '∈': '\\in', '↦': '\\mapsto', 'ω': '\\omega', '≤': '\\le', '≥': '\\ge', '⟨': '\\langle', '⟩': '\\rangle',
   'θ': '\\theta', 'δ': '\\delta', 'Δ': '\\Delta', '∇': '\\nabla', 'λ': '\\lambda', 'μ': '\\mu', 'ε': '\\varepsilon', '→': '\\to', '×': '\\times',
   '∂': '\\partial', 'π': '\\pi', 'σ': '\\sigma', 'τ': '\\tau', 'α': '\\alpha', 'β': '\\beta', 'ζ': '\\zeta', '≠': '\\ne', '∑': '\\sum', '∏': '\\prod',
-  '⊆': '\\subseteq', '∪': '\\cup', '∩': '\\cap', '∅': '\\emptyset', '′': '\\prime', '∞': '\\infty', '±': '\\pm', 'ℓ': '\\ell', '≡': '\\equiv', '⋯': '\\cdots',
+  '⊆': '\\subseteq', '∖': '\\setminus', '⊂': '\\subset', '≅': '\\cong', '↔': '\\leftrightarrow', '⇒': '\\Rightarrow', '∪': '\\cup', '∩': '\\cap', '∅': '\\emptyset', '′': '\\prime', '∞': '\\infty', '±': '\\pm', 'ℓ': '\\ell', '≡': '\\equiv', '⋯': '\\cdots',
 };
-const PLAIN: Record<string, string> = { '−': '-', '–': '--', '—': '---', '…': '\\ldots{}', '’': "'", '‘': '`', '“': '``', '”': "''", ' ': ' ', 'é': "\\'e", 'è': '\\`e', 'ö': '\\"o', 'ü': '\\"u', 'ä': '\\"a' };
+const PLAIN: Record<string, string> = { '§': '\\S{}', '¶': '\\P{}', '−': '-', '–': '--', '—': '---', '…': '\\ldots{}', '’': "'", '‘': '`', '“': '``', '”': "''", ' ': ' ', 'é': "\\'e", 'è': '\\`e', 'ö': '\\"o', 'ü': '\\"u', 'ä': '\\"a' };
 
 export function latexText(s: string): string {
   let out = '';

@@ -38,7 +38,7 @@ export function seriesLatex(s: Series): string {
 export function renderLatex(m: ExportModel): string {
   const L: string[] = [];
   L.push('% gradus search export: a LaTeX fragment needing no package (\\input it inside a document)');
-  L.push(`\\section*{Search result: ${latexText(m.title)}}`);
+  L.push(`\\section*{Search result: \\texttt{${latexText(m.title)}}}`);
   L.push(`Target range: ${latexText(m.range)}.`, '');
   const r = m.recognition;
   L.push('\\subsection*{Formula}', '\\begin{itemize}');
@@ -52,7 +52,7 @@ export function renderLatex(m: ExportModel): string {
   } else {
     L.push('\\begin{enumerate}');
     for (const x of m.matches) {
-      L.push(`\\item $\\displaystyle ${matchLatex(x.match)}$`, '\\begin{itemize}');
+      L.push(`\\item $${matchLatex(x.match)}$`, '\\begin{itemize}');
       L.push(`\\item verified: ${latexText(x.match.verified)}${x.match.complete ? '' : ' (some entries not checked)'}; parameters ${latexText(x.match.mapping)}; variant ${latexText(x.match.variant)}`);
       L.push(`\\item family \\texttt{${latexText(x.family.id)}}: ${latexText(x.family.description)} (source: ${latexText(x.family.source)})`);
       for (const s of x.statistics) {
