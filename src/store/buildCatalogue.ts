@@ -5,7 +5,7 @@
 import { LimitError } from '../core/errors.js';
 import type { Progress } from '../cli/progress.js';
 import type { Catalogue } from './catalogue.js';
-import { planUnits } from './planUnits.js';
+import { planUnits, statsSignature } from './planUnits.js';
 import { provenance } from './provenance.js';
 import { tallyUnit } from './tallyUnit.js';
 
@@ -29,7 +29,7 @@ export interface BuildReport {
 
 export function buildCatalogue(cat: Catalogue, o: BuildOptions): BuildReport {
   const plan = planUnits(o.nMax, o.families);
-  const todo = plan.units.filter((u) => !cat.isUnitDone(u.family.id, u.params));
+  const todo = plan.units.filter((u) => !cat.isUnitDone(u.family.id, u.params, statsSignature(u)));
   const total = todo.reduce((s, u) => s + u.objects, 0n);
   if (total > o.maxObjects) {
     throw new LimitError(`building up to n = ${o.nMax} visits ${total} objects, above the limit ${o.maxObjects}; raise it with --max-objects`, 'max-objects');
@@ -43,7 +43,7 @@ export function buildCatalogue(cat: Catalogue, o: BuildOptions): BuildReport {
     const r = tallyUnit(u.family, u.params, u.stats);
     const seconds = (Date.now() - t1) / 1000;
     cat.writeUnit(u.family.id, u.params, r.objects, seconds, r.rows,
-      provenance({ family: u.family.id, params: u.params, statistics: u.stats.map((s) => s.id) }, 'exhaustive enumeration, exact integer tallies', [], seconds));
+      provenance({ family: u.family.id, params: u.params, statistics: u.stats.map((s) => s.id) }, 'exhaustive enumeration, exact integer tallies', [], seconds), statsSignature(u));
     rows += r.rows.length;
     done += r.objects;
     o.progress.update(Number(done));

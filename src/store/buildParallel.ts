@@ -7,7 +7,7 @@ import { Worker } from 'node:worker_threads';
 import { LimitError } from '../core/errors.js';
 import type { BuildOptions, BuildReport } from './buildCatalogue.js';
 import type { Catalogue } from './catalogue.js';
-import { planUnits, type Unit } from './planUnits.js';
+import { planUnits, statsSignature, type Unit } from './planUnits.js';
 import { provenance } from './provenance.js';
 import { mergeRaw, type RawTally } from './rawTally.js';
 import { rowsOfTally } from './tallyUnit.js';
@@ -19,7 +19,7 @@ const SHARD_MIN = 200_000n;
 
 export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & { readonly workers: number; readonly shardMin?: bigint }): Promise<BuildReport> {
   const plan = planUnits(o.nMax, o.families);
-  const todo = plan.units.filter((u) => !cat.isUnitDone(u.family.id, u.params));
+  const todo = plan.units.filter((u) => !cat.isUnitDone(u.family.id, u.params, statsSignature(u)));
   const total = todo.reduce((s, u) => s + u.objects, 0n);
   if (total > o.maxObjects) {
     throw new LimitError(`building up to n = ${o.nMax} visits ${total} objects, above the limit ${o.maxObjects}; raise it with --max-objects`, 'max-objects');
@@ -49,7 +49,7 @@ export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & {
       const r = rowsOfTally(unit.family, unit.params, unit.stats, raw);
       const seconds = (Date.now() - started) / 1000;
       cat.writeUnit(unit.family.id, unit.params, r.objects, seconds, r.rows,
-        provenance({ family: unit.family.id, params: unit.params, statistics: unit.stats.map((s) => s.id) }, `exhaustive enumeration, exact integer tallies (${o.workers} worker threads)`, [], seconds));
+        provenance({ family: unit.family.id, params: unit.params, statistics: unit.stats.map((s) => s.id) }, `exhaustive enumeration, exact integer tallies (${o.workers} worker threads)`, [], seconds), statsSignature(unit));
       rows += r.rows.length;
       done += r.objects;
       o.progress.update(Number(done));

@@ -107,26 +107,30 @@ export class Catalogue {
     this.db.close();
   }
 
-  isUnitDone(family: string, params: Readonly<Record<string, number>>): boolean {
-    return this.db.prepare('SELECT 1 FROM units WHERE family = ? AND params = ?').get(family, paramsKey(params)) !== undefined;
+  /** True when the unit is stored, and (given a statistics signature) was built with the same statistics. */
+  isUnitDone(family: string, params: Readonly<Record<string, number>>, statistics?: string): boolean {
+    const r = this.db.prepare('SELECT statistics FROM units WHERE family = ? AND params = ?').get(family, paramsKey(params)) as { statistics: string } | undefined;
+    return r !== undefined && (statistics === undefined || r.statistics === statistics);
   }
 
   /** All rows of one unit (family × params) and its completion mark, in one transaction. */
-  writeUnit(family: string, params: Readonly<Record<string, number>>, objects: bigint, seconds: number, rows: readonly DistributionRow[], prov: Provenance): void {
+  writeUnit(family: string, params: Readonly<Record<string, number>>, objects: bigint, seconds: number, rows: readonly DistributionRow[], prov: Provenance, statistics = ''): void {
     const ins = this.db.prepare(
       `INSERT OR REPLACE INTO distributions (family, params, n, k, statistics, combine, transform, kind, series, at_one, hash, provenance)
        VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
     );
-    const unit = this.db.prepare('INSERT OR REPLACE INTO units (family, params, n, k, objects, seconds, provenance) VALUES (?, ?, ?, ?, ?, ?, ?)');
+    const unit = this.db.prepare('INSERT OR REPLACE INTO units (family, params, n, k, objects, seconds, provenance, statistics) VALUES (?, ?, ?, ?, ?, ?, ?, ?)');
+    const stale = this.db.prepare('DELETE FROM distributions WHERE family = ? AND params = ?');
     const provText = JSON.stringify(prov);
     this.db.transaction(() => {
+      stale.run(family, paramsKey(params)); // rows of an earlier build of this unit
       for (const r of rows) {
         // each row carries its own inputs; the unit row keeps the full list of statistics
         const rowProv = JSON.stringify({ ...prov, inputs: { family: r.family, params: r.params, statistics: r.statistics, combine: r.combine, transform: r.transform } });
         ins.run(r.family, paramsKey(r.params), r.n, r.k ?? null, r.statistics.join(','), r.combine, r.transform, r.series.kind,
           toJsonText(seriesToJson(r.series)), seriesAtOne(r.series).toString(), seriesHash(r.series), rowProv);
       }
-      unit.run(family, paramsKey(params), params['n'] ?? 0, params['k'] ?? null, objects.toString(), seconds, provText);
+      unit.run(family, paramsKey(params), params['n'] ?? 0, params['k'] ?? null, objects.toString(), seconds, provText, statistics);
     })();
   }
 

@@ -26,6 +26,8 @@ export const MIGRATIONS: readonly string[] = [
    CREATE TABLE search_results (
      id INTEGER PRIMARY KEY, created TEXT NOT NULL, target TEXT NOT NULL,
      result TEXT NOT NULL, provenance TEXT NOT NULL);`,
+  // 2: the statistics a unit was built with, so that a build redoes units whose set changed
+  `ALTER TABLE units ADD COLUMN statistics TEXT NOT NULL DEFAULT '';`,
 ];
 
 export const SCHEMA_VERSION = MIGRATIONS.length;

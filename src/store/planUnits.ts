@@ -61,3 +61,8 @@ export function statsOfFamily(family: Family<unknown>): TallyStat[] {
   const via = transformsFrom(family.id).map((t) => ({ t, stats: statisticsOfFamily(t.to) })).filter((x) => x.stats.length > 0);
   return tallyStats(family, own, via);
 }
+
+/** The statistics of a unit as one text (a change of the registry makes units stale). */
+export function statsSignature(u: Unit): string {
+  return u.stats.map((s) => s.id).join(',');
+}

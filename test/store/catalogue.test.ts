@@ -9,7 +9,7 @@ import { qSeries } from '../../src/series/series.js';
 import { Catalogue } from '../../src/store/catalogue.js';
 import { cataloguePath } from '../../src/store/cataloguePath.js';
 import { commandResultCache } from '../../src/store/commandResultCache.js';
-import { SCHEMA_VERSION } from '../../src/store/migrations.js';
+import { MIGRATIONS, SCHEMA_VERSION } from '../../src/store/migrations.js';
 import { provenance } from '../../src/store/provenance.js';
 import { seriesHash } from '../../src/store/seriesHash.js';
 
@@ -71,6 +71,23 @@ describe('catalogue', () => {
     const p = join(dir(), 'bad.sqlite');
     writeFileSync(p, 'this is not a database file, just some bytes '.repeat(100));
     expect(() => Catalogue.open(p)).toThrow(/damaged.*gradus catalogue rebuild/);
+  });
+  it('migrates a version-1 file: its units count as stale for a build with a statistics signature', () => {
+    const p = join(dir(), 'v1.sqlite');
+    const db = new Database(p);
+    db.exec(MIGRATIONS[0]!);
+    db.prepare("INSERT INTO units (family, params, n, k, objects, seconds, provenance) VALUES ('f', '{\"n\":1}', 1, NULL, '1', 0, '{}')").run();
+    db.pragma('user_version = 1');
+    db.close();
+    const c = Catalogue.open(p);
+    expect(c.info().schema).toBe(SCHEMA_VERSION);
+    expect(SCHEMA_VERSION).toBeGreaterThanOrEqual(2);
+    expect(c.isUnitDone('f', { n: 1 })).toBe(true);
+    expect(c.isUnitDone('f', { n: 1 }, 'a,b')).toBe(false);
+    c.writeUnit('f', { n: 1 }, 1n, 0, [], provenance({}, 'test'), 'a,b');
+    expect(c.isUnitDone('f', { n: 1 }, 'a,b')).toBe(true);
+    expect(c.isUnitDone('f', { n: 1 }, 'a,b,c')).toBe(false);
+    c.close();
   });
   it('a file from a newer gradus is refused with a clear message', () => {
     const p = join(dir(), 'new.sqlite');
