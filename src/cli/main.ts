@@ -6,7 +6,7 @@ import { isUserError } from '../core/errors.js';
 import { unknownNameMessage } from '../core/suggest.js';
 import { VERSION } from '../version.js';
 import type { CommandIO } from './command.js';
-import { COMMANDS } from './commands/index.js';
+import { COMMAND_NAMES, loadAllCommands, loadCommand } from './commands/index.js';
 import { commandHelp, mainHelp } from './help.js';
 import { parseArgs } from './parse-args.js';
 import { stderrProgress } from './progress.js';
@@ -27,26 +27,26 @@ export async function main(argv: readonly string[], io: CommandIO = defaultIO())
   try {
     if (name === undefined) {
       // No command: the terminal app on its demo session, or the text demo without it.
-      const start = COMMANDS.find((c) => c.name === 'app') ?? COMMANDS.find((c) => c.name === 'demo');
+      const start = (await loadCommand('app')) ?? (await loadCommand('demo'));
       if (!start) {
-        io.out(mainHelp(COMMANDS, VERSION));
+        io.out(mainHelp(await loadAllCommands(), VERSION));
         return 0;
       }
       await start.run({ positionals: [], options: {} }, io);
       return 0;
     }
     if (name === '--help' || name === '-h' || name === 'help') {
-      const target = rest[0] ? COMMANDS.find((c) => c.name === rest[0]) : undefined;
-      io.out(target ? commandHelp(target) : mainHelp(COMMANDS, VERSION));
+      const target = rest[0] ? await loadCommand(rest[0]) : undefined;
+      io.out(target ? commandHelp(target) : mainHelp(await loadAllCommands(), VERSION));
       return 0;
     }
     if (name === '--version') {
       io.out(VERSION);
       return 0;
     }
-    const spec = COMMANDS.find((c) => c.name === name);
+    const spec = await loadCommand(name);
     if (!spec) {
-      io.err(`gradus: ${unknownNameMessage('command', name, COMMANDS.map((c) => c.name))}; see gradus --help`);
+      io.err(`gradus: ${unknownNameMessage('command', name, COMMAND_NAMES)}; see gradus --help`);
       return 2;
     }
     if (rest.includes('--help') || rest.includes('-h')) {

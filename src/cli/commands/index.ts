@@ -1,18 +1,39 @@
-/** Every command of the command line, in the order `gradus --help` lists them. */
+/**
+ * Every command of the command line, in the order `gradus --help` lists them. Each is
+ * loaded only when used, so a command starts without loading the other engines.
+ */
 import type { CommandSpec } from '../command.js';
-import { appCommand } from './app.js';
-import { catalogueCommand } from './catalogue.js';
-import { searchCommand } from './search.js';
-import { exportCommand } from './export.js';
-import { demoCommand } from './demo.js';
-import { distCommand } from './dist.js';
-import { familiesCommand } from './families.js';
-import { moduleCommand } from './module.js';
-import { quotientCommand } from './quotient.js';
-import { qseriesCommand } from './qseries.js';
-import { showCommand } from './show.js';
-import { statisticsCommand } from './statistics.js';
-import { symCommand } from './sym.js';
-import { versionCommand } from './version.js';
 
-export const COMMANDS: readonly CommandSpec[] = [qseriesCommand, demoCommand, versionCommand, appCommand, catalogueCommand, searchCommand, exportCommand, moduleCommand, quotientCommand, familiesCommand, showCommand, statisticsCommand, distCommand, symCommand];
+export interface CommandEntry {
+  readonly name: string;
+  load(): Promise<CommandSpec>;
+}
+
+export const COMMAND_ENTRIES: readonly CommandEntry[] = [
+  { name: 'families', load: async () => (await import('./families.js')).familiesCommand },
+  { name: 'show', load: async () => (await import('./show.js')).showCommand },
+  { name: 'statistics', load: async () => (await import('./statistics.js')).statisticsCommand },
+  { name: 'dist', load: async () => (await import('./dist.js')).distCommand },
+  { name: 'sym', load: async () => (await import('./sym.js')).symCommand },
+  { name: 'module', load: async () => (await import('./module.js')).moduleCommand },
+  { name: 'quotient', load: async () => (await import('./quotient.js')).quotientCommand },
+  { name: 'search', load: async () => (await import('./search.js')).searchCommand },
+  { name: 'catalogue', load: async () => (await import('./catalogue.js')).catalogueCommand },
+  { name: 'export', load: async () => (await import('./export.js')).exportCommand },
+  { name: 'qseries', load: async () => (await import('./qseries.js')).qseriesCommand },
+  { name: 'app', load: async () => (await import('./app.js')).appCommand },
+  { name: 'demo', load: async () => (await import('./demo.js')).demoCommand },
+  { name: 'version', load: async () => (await import('./version.js')).versionCommand },
+];
+
+export const COMMAND_NAMES: readonly string[] = COMMAND_ENTRIES.map((c) => c.name);
+
+/** The command named `name`, loaded; undefined when there is none. */
+export async function loadCommand(name: string): Promise<CommandSpec | undefined> {
+  return COMMAND_ENTRIES.find((c) => c.name === name)?.load();
+}
+
+/** Every command, loaded (for the full help text). */
+export async function loadAllCommands(): Promise<CommandSpec[]> {
+  return Promise.all(COMMAND_ENTRIES.map((c) => c.load()));
+}
