@@ -6,6 +6,7 @@ import { InputError } from '../src/core/errors.js';
 import { unknownNameMessage } from '../src/core/suggest.js';
 import type { Statistic } from '../src/enumerate/plugin.js';
 import { binaryInversions, ones, subsetSum } from './binary-words.js';
+import { blockIndexSum } from './block-index-sum.js';
 import { tableauCharge, tableauCocharge, wordCharge, wordCocharge } from './charge.js';
 import { compositionLargestPart, compositionMajorIndex, compositionParts } from './composition-parts.js';
 import { cycles } from './cycles.js';
@@ -34,6 +35,7 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   binaryInversions,
   ones,
   subsetSum,
+  blockIndexSum,
   tableauCharge,
   tableauCocharge,
   wordCharge,
