@@ -1,32 +1,11 @@
 /** `gradus module`: closure of a seed under operator families, with Hilbert and Frobenius series. */
-import { InputError } from '../../core/errors.js';
-import { unknownNameMessage } from '../../core/suggest.js';
-import { computeModuleAsync, DEFAULT_MAX_WORK, type ModuleMethod } from '../../modules/compute-module.js';
+import { computeModuleAsync, DEFAULT_MAX_WORK } from '../../modules/compute-module.js';
 import { resultToJson, resultToText } from '../../modules/format-result.js';
-import { SEED_NAMES, type SeedName } from '../../modules/seeds.js';
+import { SEED_NAMES } from '../../modules/seeds.js';
+import { MODULE_METHODS as METHODS, moduleRequestFromArgs } from '../module-request.js';
 import { formatDuration } from '../progress.js';
-import { flagOpt, intOpt, listOpt, strOpt, type CommandSpec } from '../command.js';
+import { flagOpt, type CommandSpec } from '../command.js';
 import { toJsonText } from '../json-output.js';
-
-const METHODS: readonly ModuleMethod[] = ['auto', 'young', 'iterated', 'exact'];
-
-function intList(args: Parameters<CommandSpec['run']>[0], name: string): number[] | undefined {
-  const raw = listOpt(args, name);
-  if (!raw) return undefined;
-  return raw.map((s) => {
-    if (!/^\d+$/.test(s)) throw new InputError(`--${name} must be comma-separated non-negative integers (got "${s}")`, name);
-    return Number(s);
-  });
-}
-
-export function parseWork(text: string | undefined, option = 'max-work'): number | undefined {
-  if (text === undefined) return undefined;
-  const v = Number(text);
-  if (!/^\d+(\.\d+)?(e\d+)?$/i.test(text.trim()) || !Number.isFinite(v) || v <= 0) {
-    throw new InputError(`--${option} must be a positive number of work units such as 5e9 (got "${text}")`, option);
-  }
-  return v;
-}
 
 export const moduleCommand: CommandSpec = {
   name: 'module',
@@ -61,42 +40,14 @@ export const moduleCommand: CommandSpec = {
     'example: gradus module --seed superspace-vandermonde --n 4 --k 2 --ops x,theta --frobenius',
   ].join('\n'),
   async run(args, io) {
-    const seedName = strOpt(args, 'seed');
-    if (!seedName) throw new InputError(`module needs --seed NAME (${SEED_NAMES.join(', ')})`, 'seed');
-    if (!(SEED_NAMES as readonly string[]).includes(seedName)) throw new InputError(`--seed: ${unknownNameMessage('seed', seedName, SEED_NAMES)}`, 'seed');
-    const n = intOpt(args, 'n');
-    if (n === undefined) throw new InputError('module needs --n N (1..10)', 'n');
-    const ops = listOpt(args, 'ops');
-    if (!ops) throw new InputError('module needs --ops (x, y, theta, polar1, polar2, …), e.g. --ops x,theta', 'ops');
-    const method = (strOpt(args, 'method') ?? 'auto') as ModuleMethod;
-    if (!METHODS.includes(method)) throw new InputError(`--method: ${unknownNameMessage('method', method, METHODS)}`, 'method');
-    if (flagOpt(args, 'symmetrize') && flagOpt(args, 'antisymmetrize')) throw new InputError('--symmetrize and --antisymmetrize exclude each other', 'symmetrize');
-    const symmetrizer = flagOpt(args, 'symmetrize') ? 'symmetrize' : flagOpt(args, 'antisymmetrize') ? 'antisymmetrize' : undefined;
-    const k = intOpt(args, 'k');
-    const height = intOpt(args, 'height');
-    const xe = intList(args, 'x-exponents');
-    const ye = intList(args, 'y-exponents');
-    const th = intList(args, 'theta');
-    const poly = strOpt(args, 'poly');
-    const prime = intOpt(args, 'prime');
+    const request = moduleRequestFromArgs(args);
     const result = await computeModuleAsync(
-      {
-        seed: seedName as SeedName,
-        n,
-        ops,
-        ...(k !== undefined ? { k } : {}),
-        ...(height !== undefined ? { height } : {}),
-        ...(xe ? { xExponents: xe } : {}),
-        ...(ye ? { yExponents: ye } : {}),
-        ...(th ? { theta: th } : {}),
-        ...(poly !== undefined ? { poly } : {}),
-        ...(symmetrizer ? { symmetrizer } : {}),
-      },
+      request.spec,
       {
         frobenius: flagOpt(args, 'frobenius'),
-        method,
-        ...(prime !== undefined ? { prime } : {}),
-        ...(strOpt(args, 'max-work') !== undefined ? { maxWork: parseWork(strOpt(args, 'max-work')) } : {}),
+        method: request.method,
+        ...(request.prime !== undefined ? { prime: request.prime } : {}),
+        ...(request.maxWork !== undefined ? { maxWork: request.maxWork } : {}),
         onEstimate: (units, seconds) => io.err(`estimated work: ${units.toExponential(2)} units (about ${formatDuration(seconds)} per prime, two primes)`),
         onProgress: (done, total, label) => {
           if (done <= 1) io.progress.start('module', total || undefined);
