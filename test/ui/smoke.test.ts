@@ -16,11 +16,17 @@ beforeAll(() => {
 });
 afterAll(() => rmSync(cat.dir, { recursive: true, force: true }));
 
+function withoutCiVariables(env: NodeJS.ProcessEnv): NodeJS.ProcessEnv {
+  const { CI: _ci, CONTINUOUS_INTEGRATION: _cont, ...rest } = env;
+  return rest;
+}
+
 function runInPty(keys: readonly { after: string | RegExp; send: string }[], timeoutMs = 30_000): Promise<{ code: number | null; out: string }> {
   return new Promise((resolve, reject) => {
     const child = spawn('script', ['-qfec', 'stty cols 80 rows 24; node bin/gradus.mjs', '/dev/null'], {
       cwd: ROOT,
-      env: { ...process.env, NO_COLOR: '', GRADUS_CATALOGUE: cat.path },
+      // A user's terminal: ink draws nothing until exit when it believes it runs under CI.
+      env: { ...withoutCiVariables(process.env), NO_COLOR: '', GRADUS_CATALOGUE: cat.path },
       stdio: ['pipe', 'pipe', 'pipe'],
     });
     let out = '';
