@@ -107,7 +107,7 @@ function printText(io: CommandIO, d: SearchDocument, id: number, limit: number):
   for (const x of r.recurrences) io.out(`recurrence: ${x.text}${x.name ? `  [${x.name}]` : ''}  (checked on ${x.checked} entries)`);
   io.out(flagsText(r));
   const t = d.tried;
-  const triedLine = `tried ${t.candidates} candidates at n = ${t.anchor?.n ?? '-'}${t.anchor?.k === undefined ? '' : `, k = ${t.anchor.k}`} (${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there) over ${t.families.length} families [${t.families.join(', ')}], ${t.statistics.length} statistics, forms ${t.combines.join('/')}, variants ${t.variants.join(', ')}; catalogue n ≤ ${t.catalogueMaxN}`;
+  const triedLine = `tried ${t.candidates} candidates at n = ${t.anchor?.n ?? '-'}${t.anchor?.k === undefined ? '' : `, k = ${t.anchor.k}`} (whole distributions: ${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there${t.combines.includes('slice') ? '; slices of joint distributions by their second statistic checked apart' : ''}) over ${t.families.length} families [${t.families.join(', ')}], ${t.statistics.length} statistics, forms ${t.combines.join('/')}, variants ${t.variants.join(', ')}; catalogue n ≤ ${t.catalogueMaxN}`;
   if (d.matches.length === 0) {
     io.out('no match: no distribution in the catalogue equals the target or any of its variants.');
     if ((d.target as { kind?: string }).kind === 'multi') io.out('the target is a table with three or more varying gradings; the catalogue holds series in q, in q and t, and Frobenius series');

@@ -6,7 +6,7 @@ export function triedText(d: SearchDocument): string {
   const t = d.tried;
   const at = t.anchor ? `n = ${t.anchor.n}${t.anchor.k === undefined ? '' : `, k = ${t.anchor.k}`}` : 'no size in the catalogue';
   return (
-    `${t.candidates} candidates at ${at} (${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there) ` +
+    `${t.candidates} candidates at ${at} (whole distributions: ${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there${t.combines.includes('slice') ? '; slices checked apart' : ''}) ` +
     `over ${t.families.length} families and ${t.statistics.length} statistics, forms ${t.combines.join('/')}, ` +
     `variants ${t.variants.join(', ')}; catalogue n ≤ ${t.catalogueMaxN}`
   );
