@@ -15,6 +15,8 @@ export interface ModuleRequest {
   readonly method: ModuleMethod;
   readonly prime?: number;
   readonly maxWork?: number;
+  /** --resume FILE: the checkpoint file of a resumable run. */
+  readonly checkpoint?: string;
 }
 
 function intList(args: ParsedArgs, name: string): number[] | undefined {
@@ -56,6 +58,8 @@ export function moduleRequestFromArgs(args: ParsedArgs): ModuleRequest {
   const poly = strOpt(args, 'poly');
   const prime = intOpt(args, 'prime');
   const maxWork = parseWork(strOpt(args, 'max-work'));
+  const checkpoint = strOpt(args, 'resume');
+  if (checkpoint !== undefined && checkpoint.trim() === '') throw new InputError('--resume needs a file name', 'resume');
   return {
     spec: {
       seed: seed as SeedName,
@@ -72,5 +76,6 @@ export function moduleRequestFromArgs(args: ParsedArgs): ModuleRequest {
     method,
     ...(prime !== undefined ? { prime } : {}),
     ...(maxWork !== undefined ? { maxWork } : {}),
+    ...(checkpoint !== undefined ? { checkpoint } : {}),
   };
 }

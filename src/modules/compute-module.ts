@@ -11,11 +11,12 @@ import { toBigIntExact } from '../core/rational.js';
 import { VERSION } from '../version.js';
 import { moduleChecks } from './checks.js';
 import { primeCoeffs, rationalCoeffs } from './coefficients.js';
-import { cellsFromRanks, degreeBox, derivativeRanks } from './derivative-closure.js';
+import { cellsFromRanks, closurePlan, degreeBox, derivativeRanks } from './derivative-closure.js';
 import { integerSeedSupport } from './integer-seed.js';
 import { exactClosure } from './exact-closure.js';
 import { iteratedClosure } from './iterated-closure.js';
 import type { ModuleCell } from './module-cell.js';
+import { ModuleCheckpoint } from './module-checkpoint.js';
 import type { Axis, ModuleResult } from './module-result.js';
 import { estimateModuleWork } from './module-cost.js';
 import { familyName, isDerivativeOnly, parseOperatorFamilies } from './operators.js';
@@ -49,11 +50,18 @@ export interface ModuleOptions {
   readonly precomputed?: ReadonlyMap<number, readonly ModuleCell[]>;
   /** computeModuleAsync: use worker threads when the estimate exceeds this many seconds. */
   readonly parallelAboveSeconds?: number;
+  /** Resumable run: finished work is appended to this file and read back on the next start. */
+  readonly checkpoint?: string;
   /** Internal (workers): compute the first prime only, without confirmation. */
   readonly onePrime?: boolean;
 }
 
 export const DEFAULT_MAX_WORK = 2e9;
+
+/** What a checkpoint file must match: everything that changes the result. */
+function openCheckpoint(file: string, spec: ModuleSpec, options: ModuleOptions, primes: readonly number[]): ModuleCheckpoint {
+  return new ModuleCheckpoint(file, { gradus: VERSION, spec, frobenius: options.frobenius ?? false, method: options.method ?? 'auto', primes });
+}
 const EXACT_MAX_WORK = 2e6;
 
 export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): ModuleResult {
@@ -106,7 +114,8 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
     const cache = new Map<number, readonly ModuleCell[]>(options.precomputed ?? []);
     const exactSeed = method === 'young' && derivOnly ? integerSeedSupport(probeSupport, terms) : undefined;
     if (exactSeed) notes.push('matrix entries are exact integers below 2^53: one enumeration serves both primes');
-    const run = (p: number): readonly ModuleCell[] => {
+    const cp = options.checkpoint !== undefined && !options.onePrime ? openCheckpoint(options.checkpoint, spec, options, [p1, p2]) : undefined;
+    const compute = (p: number): readonly ModuleCell[] => {
       const hit = cache.get(p);
       if (hit) return hit;
       const sp = p === p1 ? probe : buildSeedPolynomial(spec.n, terms, primeCoeffs(p), needs);
@@ -119,7 +128,12 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
       if (method === 'young') {
         if (exactSeed && (p === p1 || p === p2)) {
           const given = options.youngRanks;
-          const ranks = given && given.primes[0] === p1 && given.primes[1] === p2 ? given.ranks : derivativeRanks([exactSeed], dops, chi, [p1, p2], 0, hooks);
+          const ranks =
+            given && given.primes[0] === p1 && given.primes[1] === p2
+              ? given.ranks
+              : cp
+              ? cp.fillTasks(derivativeRanks([exactSeed], dops, chi, [p1, p2], 0, { ...hooks, onTask: (t, r) => cp.recordTask(t, r) }, cp.missingTasks(closurePlan(spec.n, chi).length)))
+              : derivativeRanks([exactSeed], dops, chi, [p1, p2], 0, hooks);
           const box = degreeBox([exactSeed]);
           cache.set(p1, cellsFromRanks(spec.n, box, chi, ranks[0]!));
           cache.set(p2, cellsFromRanks(spec.n, box, chi, ranks[1]!));
@@ -129,6 +143,14 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
         return cellsFromRanks(spec.n, degreeBox([support]), chi, derivativeRanks([support], dops, chi, [p], p, hooks)[0]!);
       }
       return iteratedClosure(sp.alg, sp.f, probeSupport.degree, ops, { frobenius: chi !== 0, p, onProgress: options.onProgress, signal: options.signal });
+    };
+    // with a checkpoint, whole one-prime runs are recorded (the exact-integer route records tasks)
+    const run = (p: number): readonly ModuleCell[] => {
+      const saved = cp?.cells(p);
+      if (saved) return saved;
+      const cells = compute(p);
+      if (cp && !(exactSeed && (p === p1 || p === p2))) cp.recordCells(p, cells);
+      return cells;
     };
     const merged = options.onePrime
       ? { cells: run(p1), primes: [p1], confirmation: 'one prime only (a worker thread; the caller confirms with a second prime)' }
@@ -143,8 +165,10 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
         : method === 'young'
         ? 'derivative closure: graded pieces as images of the seed-coefficient maps; Schur multiplicities from ranks of Young-subgroup invariants (h) and anti-invariants (e) solved with Kostka numbers'
         : 'iterated closure degree by degree (semi-echelon form mod p); Schur multiplicities from ranks of Young-subgroup folds of each basis';
+    if (cp) notes.push(cp.note());
     notes.push('ranks mod p are lower bounds of ranks over Q; multiplicities are integer combinations of ranks, so no character value is lifted from F_p');
   }
+  if (method === 'exact' && options.checkpoint !== undefined) notes.push('the exact route keeps no checkpoint (its work limit keeps it small)');
   if (!frobOk) cells = cells.map((c) => ({ degree: c.degree, dim: c.dim }));
   const live = cells.filter((c) => c.dim > 0);
   const sp = probe.alg.space;
@@ -190,7 +214,8 @@ export async function computeModuleAsync(spec: ModuleSpec, options: ModuleOption
   const limit = options.maxWork ?? DEFAULT_MAX_WORK;
   if (est.seconds < (options.parallelAboveSeconds ?? PARALLEL_THRESHOLD_SECONDS) || est.units > limit) return computeModule(spec, options);
   options.onEstimate?.(est.units, est.seconds);
-  const quiet = { ...options, onEstimate: undefined };
+  const quiet = { ...options, onEstimate: undefined, checkpoint: undefined };
+  const cp = options.checkpoint !== undefined ? openCheckpoint(options.checkpoint, spec, options, [p1, p2]) : undefined;
   const t0 = performance.now();
   const exact = young && derivOnly ? integerSeedSupport(support, terms) : undefined;
   let result: ModuleResult;
@@ -198,15 +223,25 @@ export async function computeModuleAsync(spec: ModuleSpec, options: ModuleOption
     // one enumeration per Young subgroup serves both primes: a task queue over both cores
     const chi = probe.character === 'sign' ? -1 : probe.character === 'trivial' ? 1 : 0;
     const dops = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
-    const ranks = await parallelRanks(exact, dops, chi, [p1, p2], { onProgress: options.onProgress, signal: options.signal });
+    const hooks = { onProgress: options.onProgress, signal: options.signal, ...(cp ? { onTask: (t: number, r: number[][]) => cp.recordTask(t, r) } : {}) };
+    const computed = await parallelRanks(exact, dops, chi, [p1, p2], hooks, undefined, cp?.missingTasks(closurePlan(spec.n, chi).length));
+    const ranks = cp ? cp.fillTasks(computed) : computed;
     result = computeModule(spec, { ...quiet, youngRanks: { primes: [p1, p2], ranks } });
   } else {
     // one prime per core
-    const runs = await Promise.all([p1, p2].map((p) => moduleInWorker(spec, { frobenius: options.frobenius, method, maxWork: limit, prime: p }, options.signal)));
+    const runs = await Promise.all(
+      [p1, p2].map(async (p) => {
+        const saved = cp?.cells(p);
+        if (saved) return saved;
+        const cells = await moduleInWorker(spec, { frobenius: options.frobenius, method, maxWork: limit, prime: p }, options.signal);
+        cp?.recordCells(p, cells);
+        return cells;
+      }),
+    );
     result = computeModule(spec, { ...quiet, precomputed: new Map([[p1, runs[0]!], [p2, runs[1]!]]) });
   }
   const seconds = (performance.now() - t0) / 1000;
-  return { ...result, provenance: { ...result.provenance, seconds, notes: [...result.provenance.notes, 'computed on worker threads'] } };
+  return { ...result, provenance: { ...result.provenance, seconds, notes: [...result.provenance.notes, ...(cp ? [cp.note()] : []), 'computed on worker threads'] } };
 }
 
 function moduleInWorker(spec: ModuleSpec, options: Pick<ModuleOptions, 'frobenius' | 'method' | 'maxWork' | 'prime'>, signal?: AbortSignal): Promise<readonly ModuleCell[]> {

@@ -21,6 +21,8 @@ export interface DerivativeOps {
 export interface ClosureHooks {
   readonly onProgress?: (done: number, total: number, label: string) => void;
   readonly signal?: AbortSignal;
+  /** Called as each task finishes, with its ranks per prime (checkpoints). */
+  readonly onTask?: (task: number, ranks: number[][]) => void;
 }
 
 export function closurePlan(n: number, chi: SeedChi): readonly YoungTask[] {
@@ -63,6 +65,7 @@ export function derivativeRanks(
     primes.forEach((p, pi) => {
       out[pi]![ti] = builder.cells.map((m) => matrixRank(m, p));
     });
+    hooks.onTask?.(ti, out.map((perPrime) => perPrime[ti]!));
     done++;
     hooks.onProgress?.(done, which.length, `task ${plan[ti]!.blocks.join(',')} ${plan[ti]!.mode}`);
   }

@@ -5,7 +5,7 @@
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
-import { closurePlan, type DerivativeOps } from './derivative-closure.js';
+import { closurePlan, type ClosureHooks, type DerivativeOps } from './derivative-closure.js';
 import type { SeedChi } from './derivative-matrices.js';
 import type { RankWorkerData } from './rank-worker.js';
 import type { SeedSupport } from './seed-support.js';
@@ -21,11 +21,13 @@ export async function parallelRanks(
   ops: DerivativeOps,
   chi: SeedChi,
   primes: readonly number[],
-  hooks: { onProgress?: (done: number, total: number, label: string) => void; signal?: AbortSignal } = {},
+  hooks: ClosureHooks = {},
   threads = Math.min(2, availableParallelism()),
+  tasks?: readonly number[],
 ): Promise<number[][][]> {
   const plan = closurePlan(seed.space.n, chi);
-  const queue = plan.map((_, i) => i).sort((a, b) => groupOrder(plan[a]!.blocks) - groupOrder(plan[b]!.blocks));
+  const total = tasks?.length ?? plan.length;
+  const queue = [...(tasks ?? plan.map((_, i) => i))].sort((a, b) => groupOrder(plan[a]!.blocks) - groupOrder(plan[b]!.blocks));
   const out = primes.map(() => plan.map(() => [] as number[]));
   const { space, ...rest } = seed;
   const data: RankWorkerData = { space: { n: space.n, hasY: space.hasY, hasTheta: space.hasTheta, radix: space.radix }, seed: rest, ops, chi, primes };
@@ -48,8 +50,9 @@ export async function parallelRanks(
           };
           w.on('message', (msg: { task: number; ranks: number[][] }) => {
             msg.ranks.forEach((r, pi) => (out[pi]![msg.task] = r));
+            hooks.onTask?.(msg.task, msg.ranks);
             done++;
-            hooks.onProgress?.(done, plan.length, `task ${plan[msg.task]!.blocks.join(',')}`);
+            hooks.onProgress?.(done, total, `task ${plan[msg.task]!.blocks.join(',')}`);
             next();
           });
           w.on('error', reject);

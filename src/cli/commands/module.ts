@@ -11,7 +11,7 @@ export const moduleCommand: CommandSpec = {
   name: 'module',
   summary: 'closure of a seed under derivatives and polarizations: multigraded Hilbert and Frobenius series',
   usage:
-    'module --seed NAME --n N [--k K] [--height S] [--x-exponents …] [--y-exponents …] [--theta …] [--poly "…"] [--symmetrize|--antisymmetrize] --ops x,theta,… [--frobenius] [--prime P] [--method M] [--max-work W] [--json]',
+    'module --seed NAME --n N [--k K] [--height S] [--x-exponents …] [--y-exponents …] [--theta …] [--poly "…"] [--symmetrize|--antisymmetrize] --ops x,theta,… [--frobenius] [--prime P] [--method M] [--max-work W] [--resume FILE] [--json]',
   options: [
     { name: 'seed', type: 'string', description: `seed: ${SEED_NAMES.join(', ')}`, placeholder: 'NAME' },
     { name: 'n', type: 'int', description: 'number of variables of each kind', placeholder: 'N', min: 1, max: 10 },
@@ -28,6 +28,7 @@ export const moduleCommand: CommandSpec = {
     { name: 'prime', type: 'int', description: 'first prime (below 2^26); a second prime always confirms', placeholder: 'P', min: 2, max: 2 ** 26 - 1 },
     { name: 'method', type: 'string', description: `route: ${METHODS.join(', ')} (auto: young for derivative operators, iterated otherwise; exact: over Q, small cases)`, placeholder: 'M' },
     { name: 'max-work', type: 'string', description: `refuse estimated work above W units (default ${DEFAULT_MAX_WORK.toExponential(0)})`, placeholder: 'W' },
+    { name: 'resume', type: 'string', description: 'checkpoint file: finished work is appended to it, and a rerun of the same request reads it back instead of recomputing', placeholder: 'FILE' },
   ],
   producesData: true,
   details: [
@@ -38,6 +39,7 @@ export const moduleCommand: CommandSpec = {
     '  monomial                 --x-exponents, --y-exponents, --theta; antisymmetrized (or --symmetrize)',
     '  poly                     --poly "<superpolynomial>" as typed (or --symmetrize / --antisymmetrize)',
     'example: gradus module --seed superspace-vandermonde --n 4 --k 2 --ops x,theta --frobenius',
+    'long runs: add --resume run.ckpt; after an interruption the same command continues where it stopped',
   ].join('\n'),
   async run(args, io) {
     const request = moduleRequestFromArgs(args);
@@ -48,6 +50,7 @@ export const moduleCommand: CommandSpec = {
         method: request.method,
         ...(request.prime !== undefined ? { prime: request.prime } : {}),
         ...(request.maxWork !== undefined ? { maxWork: request.maxWork } : {}),
+        ...(request.checkpoint !== undefined ? { checkpoint: request.checkpoint } : {}),
         onEstimate: (units, seconds) => io.err(`estimated work: ${units.toExponential(2)} units (about ${formatDuration(seconds)} per prime, two primes)`),
         onProgress: (done, total, label) => {
           if (done <= 1) io.progress.start('module', total || undefined);
