@@ -34,7 +34,11 @@ export class ModuleCheckpoint {
     if (end < text.length) truncateSync(file, Buffer.byteLength(text.slice(0, end)));
     const lines = text.slice(0, end).split('\n').filter((l) => l.length > 0);
     if (lines.length === 0) {
-      writeFileSync(file, `${header}\n`);
+      try {
+        writeFileSync(file, `${header}\n`);
+      } catch (e) {
+        throw new InputError(`--resume: cannot write ${file} (${(e as Error).message})`, 'resume');
+      }
       this.reused = 0;
       return;
     }
@@ -49,8 +53,13 @@ export class ModuleCheckpoint {
       const diff = Object.keys({ ...request, ...got }).filter((k) => stable(got[k]) !== stable(request[k]));
       throw new InputError(`--resume: ${file} was written for another request (differs in ${diff.join(', ') || 'format'}); use a new file or repeat that request`, 'resume');
     }
-    for (const line of lines.slice(1)) {
-      const e = JSON.parse(line) as Entry;
+    for (const [i, line] of lines.slice(1).entries()) {
+      let e: Entry;
+      try {
+        e = JSON.parse(line) as Entry;
+      } catch {
+        throw new InputError(`--resume: line ${i + 2} of ${file} is damaged (only a torn last line is dropped); use a new file`, 'resume');
+      }
       if ('task' in e) this.tasks.set(e.task, e.ranks);
       else this.primes.set(e.prime, e.cells);
     }

@@ -113,6 +113,7 @@ describe('a checkpoint of another request', () => {
     const other = (): unknown => computeModule({ ...young, k: 3 }, { frobenius: false, checkpoint: file });
     expect(other).toThrow(InputError);
     expect(other).toThrow(/--resume: .* another request \(differs in .*spec.*frobenius/);
+    expect(() => computeModule(young, { checkpoint: join(dir, 'no-such-dir', 'x.ckpt') })).toThrow(/--resume: cannot write/);
     writeFileSync(file, 'not json\n');
     expect(() => computeModule(young, { checkpoint: file })).toThrow(/--resume: .* not a module checkpoint/);
   });
