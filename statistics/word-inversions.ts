@@ -1,6 +1,7 @@
 /** Inversions of a word (multiset permutation). */
 import type { Statistic } from '../src/enumerate/plugin.js';
 import type { Word } from '../objects/types.js';
+import { inversions } from './inversions.js';
 
 export const wordInversions: Statistic<Word> = {
   id: 'word-inversions',
@@ -14,14 +15,7 @@ export const wordInversions: Statistic<Word> = {
     [[1, 2, 1, 2], 1],
     [[2, 2, 1, 1], 4],
   ],
-  step: (_at, _v, _prev, rank) => rank, // smaller letters still to come,
-  compute(w) {
-    const n = w.length;
-    let s = 0;
-    for (let i = 0; i < n - 1; i++) {
-      const x = w[i]!;
-      for (let j = i + 1; j < n; j++) if (w[j]! < x) s++;
-    }
-    return s;
-  },
+  // the same count as on permutations: equal letters are never counted
+  step: inversions.step,
+  compute: inversions.compute,
 };

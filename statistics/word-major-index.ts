@@ -1,6 +1,8 @@
 /** Major index and descents of a word (multiset permutation). */
 import type { Statistic } from '../src/enumerate/plugin.js';
 import type { Word } from '../objects/types.js';
+import { descents } from './descents.js';
+import { majorIndex } from './major-index.js';
 
 export const wordMajorIndex: Statistic<Word> = {
   id: 'word-major-index',
@@ -13,12 +15,9 @@ export const wordMajorIndex: Statistic<Word> = {
     [[1, 2, 1, 2], 2],
     [[2, 2, 1, 1], 2],
   ],
-  step: (at, v, prev) => (prev > v ? at : 0),
-  compute(w) {
-    let s = 0;
-    for (let i = 1; i < w.length; i++) if (w[i - 1]! > w[i]!) s += i;
-    return s;
-  },
+  // descents are strict, so the permutation kernel applies to words as they are
+  step: majorIndex.step,
+  compute: majorIndex.compute,
 };
 
 export const wordDescents: Statistic<Word> = {
@@ -31,10 +30,6 @@ export const wordDescents: Statistic<Word> = {
     [[2, 1, 2, 1], 2],
     [[2, 2, 1, 1], 1],
   ],
-  step: (_at, v, prev) => (prev > v ? 1 : 0),
-  compute(w) {
-    let s = 0;
-    for (let i = 1; i < w.length; i++) if (w[i - 1]! > w[i]!) s++;
-    return s;
-  },
+  step: descents.step,
+  compute: descents.compute,
 };
