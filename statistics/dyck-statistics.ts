@@ -4,20 +4,9 @@
  * Rows are counted bottom to top; a_i (the area sequence) is the number of whole cells
  * between the diagonal and the path in row i.
  */
+import { areaSequence } from '../objects/support/dyck.js';
 import type { Statistic } from '../src/enumerate/plugin.js';
 import type { DyckPath } from '../objects/types.js';
-
-/** The area sequence a_1, …, a_n of a Dyck path. */
-function areaSequence(p: DyckPath): Int32Array {
-  const a = new Int32Array(p.length >> 1);
-  let row = 0;
-  let east = 0;
-  for (const s of p) {
-    if (s === 1) a[row] = row++ - east;
-    else east++;
-  }
-  return a;
-}
 
 const HAGLUND = 'Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, AMS 2008';
 

@@ -5,22 +5,11 @@
  * Rows are counted bottom to top; a_i is the area of row i and l_i its car. dinv counts
  * pairs of rows i < j with a_i = a_j and l_i < l_j, or a_i = a_j + 1 and l_i > l_j.
  */
+import { areaSequence } from '../objects/support/dyck.js';
 import type { Statistic } from '../src/enumerate/plugin.js';
-import type { DecoratedLabelledDyckPath, DyckPath, LabelledDyckPath } from '../objects/types.js';
+import type { DecoratedLabelledDyckPath, LabelledDyckPath } from '../objects/types.js';
 
-/** The area sequence a_1, …, a_n of a Dyck path. */
-function areaSequence(p: DyckPath): Int32Array {
-  const a = new Int32Array(p.length >> 1);
-  let row = 0;
-  let east = 0;
-  for (const s of p) {
-    if (s === 1) a[row] = row++ - east;
-    else east++;
-  }
-  return a;
-}
-
-function dinvOf(a: Int32Array, l: readonly number[]): number {
+function dinvOf(a: readonly number[], l: readonly number[]): number {
   let s = 0;
   for (let i = 0; i < a.length; i++) {
     for (let j = i + 1; j < a.length; j++) {

@@ -57,7 +57,14 @@ export function northColumns(path: DyckPath): number[] {
 
 /** The area sequence a_r = (r−1) − column of row r: full cells between path and diagonal. */
 export function areaSequence(path: DyckPath): number[] {
-  return northColumns(path).map((c, r) => r - c);
+  const a = new Array<number>(path.length >> 1);
+  let row = 0;
+  let east = 0;
+  for (const s of path) {
+    if (s === 1) a[row] = row++ - east;
+    else east++;
+  }
+  return a;
 }
 
 /** A uniform Dyck path by the cycle lemma (rotate a random ±1 word of sum −1). */
