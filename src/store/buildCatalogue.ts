@@ -5,7 +5,7 @@
 import { LimitError } from '../core/errors.js';
 import type { Progress } from '../cli/progress.js';
 import type { Catalogue } from './catalogue.js';
-import { planUnits, statsSignature } from './planUnits.js';
+import { planUnits, statsSignature, type Unit } from './planUnits.js';
 import { provenance } from './provenance.js';
 import { tallyUnit } from './tallyUnit.js';
 
@@ -27,13 +27,19 @@ export interface BuildReport {
   readonly familiesLeftOut: readonly { family: string; why: string }[];
 }
 
-export function buildCatalogue(cat: Catalogue, o: BuildOptions): BuildReport {
+/** The units still to build (those not done with the same statistics) and their object count, within the limit. */
+export function pendingWork(cat: Catalogue, o: BuildOptions): { plan: ReturnType<typeof planUnits>; todo: Unit[]; total: bigint } {
   const plan = planUnits(o.nMax, o.families);
   const todo = plan.units.filter((u) => !cat.isUnitDone(u.family.id, u.params, statsSignature(u)));
   const total = todo.reduce((s, u) => s + u.objects, 0n);
   if (total > o.maxObjects) {
     throw new LimitError(`building up to n = ${o.nMax} visits ${total} objects, above the limit ${o.maxObjects}; raise it with --max-objects`, 'max-objects');
   }
+  return { plan, todo, total };
+}
+
+export function buildCatalogue(cat: Catalogue, o: BuildOptions): BuildReport {
+  const { plan, todo, total } = pendingWork(cat, o);
   const t0 = Date.now();
   let done = 0n;
   let rows = 0;

@@ -4,10 +4,9 @@
  * its own transaction, as the single-thread build does.
  */
 import { Worker } from 'node:worker_threads';
-import { LimitError } from '../core/errors.js';
-import type { BuildOptions, BuildReport } from './buildCatalogue.js';
+import { pendingWork, type BuildOptions, type BuildReport } from './buildCatalogue.js';
 import type { Catalogue } from './catalogue.js';
-import { planUnits, statsSignature, type Unit } from './planUnits.js';
+import { statsSignature, type Unit } from './planUnits.js';
 import { provenance } from './provenance.js';
 import { mergeRaw, type RawTally } from './rawTally.js';
 import { rowsOfTally } from './tallyUnit.js';
@@ -18,12 +17,7 @@ const ENTRY = new URL('./tally-worker-entry.mjs', import.meta.url);
 const SHARD_MIN = 200_000n;
 
 export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & { readonly workers: number; readonly shardMin?: bigint }): Promise<BuildReport> {
-  const plan = planUnits(o.nMax, o.families);
-  const todo = plan.units.filter((u) => !cat.isUnitDone(u.family.id, u.params, statsSignature(u)));
-  const total = todo.reduce((s, u) => s + u.objects, 0n);
-  if (total > o.maxObjects) {
-    throw new LimitError(`building up to n = ${o.nMax} visits ${total} objects, above the limit ${o.maxObjects}; raise it with --max-objects`, 'max-objects');
-  }
+  const { plan, todo, total } = pendingWork(cat, o);
   const t0 = Date.now();
   const jobs: { unit: Unit; job: TallyJob }[] = [];
   let nextId = 1;
