@@ -6,6 +6,7 @@
  * Returns undefined when the sum is not symmetric.
  */
 import { partitionKey, partitionList } from '../core/partitions.js';
+import { compositionMask, maskComposition } from '../symfun/quasisym.js';
 
 export type CountMap = Map<number, number>;
 
@@ -23,16 +24,6 @@ function sameMap(a: CountMap, b: CountMap): boolean {
   return true;
 }
 
-function maskOf(alpha: readonly number[]): number {
-  let mask = 0;
-  let s = 0;
-  for (let i = 0; i < alpha.length - 1; i++) {
-    s += alpha[i]!;
-    mask |= 1 << (s - 1);
-  }
-  return mask;
-}
-
 export function fundamentalToSchurFast(n: number, byMask: ReadonlyMap<number, CountMap>): Map<string, CountMap> | undefined {
   const size = n === 0 ? 1 : 1 << (n - 1);
   const m: CountMap[] = Array.from({ length: size }, () => new Map());
@@ -40,14 +31,8 @@ export function fundamentalToSchurFast(n: number, byMask: ReadonlyMap<number, Co
   for (let b = 0; b < n - 1; b++) for (let T = 0; T < size; T++) if (T & (1 << b)) addInto(m[T]!, m[T ^ (1 << b)]!);
   // symmetry: the M_α coefficient depends only on the multiset of parts of α
   for (let T = 0; T < size; T++) {
-    const alpha: number[] = [];
-    let last = 0;
-    for (let i = 1; i < n; i++) if (T & (1 << (i - 1))) {
-      alpha.push(i - last);
-      last = i;
-    }
-    alpha.push(n - last);
-    if (!sameMap(m[T]!, m[maskOf([...alpha].sort((x, y) => y - x))]!)) return undefined;
+    const sortedParts = maskComposition(n, T).sort((x, y) => y - x);
+    if (!sameMap(m[T]!, m[compositionMask(sortedParts)]!)) return undefined;
   }
   const out = new Map<string, CountMap>();
   for (const lambda of partitionList(n)) {
@@ -57,7 +42,7 @@ export function fundamentalToSchurFast(n: number, byMask: ReadonlyMap<number, Co
     const alpha = new Array<number>(l).fill(0);
     const rec = (i: number, sign: number): void => {
       if (i === l) {
-        addInto(acc, m[maskOf(alpha.filter((a) => a > 0))]!, sign);
+        addInto(acc, m[compositionMask(alpha.filter((a) => a > 0))]!, sign);
         return;
       }
       for (let s = 1; s <= l; s++) {
