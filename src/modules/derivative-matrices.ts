@@ -13,7 +13,8 @@ import { KeyTable } from './key-table.js';
 import type { SeedSupport } from './seed-support.js';
 import type { SuperSpace } from './superspace.js';
 import { thetaDerivativeSign } from './superspace.js';
-import { blockOf, YoungFolder, type FoldMode } from './young-fold.js';
+import { BlockCoder } from './block-code.js';
+import { blockOf, type FoldMode } from './young-fold.js';
 
 export interface RankTask {
   readonly blocks: readonly number[];
@@ -48,19 +49,17 @@ export function boxIndex(box: DegreeBox, dx: number, dy: number, dt: number): nu
   return (dx * box.y + dy) * box.theta + dt;
 }
 
-interface SideTables {
-  readonly fold: KeyTable;
-  readonly index: KeyTable;
-}
-
 export class DerivativeMatrixBuilder {
   readonly cells: CellMatrix[] = [];
-  private readonly targetTables: SideTables;
+  private readonly targetIndex: KeyTable;
   private readonly repIsOp: boolean;
-  private readonly folder: YoungFolder;
+  private readonly foldAlt: boolean;
   private readonly repKill: number;
   private readonly foldKill: number;
   private readonly block: Int32Array;
+  private readonly blockStart: Int32Array;
+  private readonly blockEnd: Uint8Array;
+  private readonly coder: BlockCoder;
   private readonly fall: Float64Array;
 
   constructor(
@@ -79,11 +78,20 @@ export class DerivativeMatrixBuilder {
     const targetMode: FoldMode = task.mode;
     const opMode: FoldMode = (task.mode === 'alt') !== (chi === -1) ? 'alt' : 'sym';
     this.repIsOp = opMode === 'alt' || targetMode !== 'alt';
-    this.folder = new YoungFolder(space, task.blocks, this.repIsOp ? targetMode : opMode);
+    const foldMode = this.repIsOp ? targetMode : opMode;
+    this.foldAlt = foldMode === 'alt';
     this.repKill = (this.repIsOp ? opMode : targetMode) === 'sym' ? 1 : 0;
-    this.foldKill = (this.repIsOp ? targetMode : opMode) === 'sym' ? 1 : 0;
-    this.block = blockOf(space.n, task.blocks);
-    this.targetTables = this.newTables();
+    this.foldKill = foldMode === 'sym' ? 1 : 0;
+    const n = space.n;
+    this.block = blockOf(n, task.blocks);
+    this.blockStart = new Int32Array(n);
+    this.blockEnd = new Uint8Array(n);
+    for (let i = 0; i < n; i++) {
+      this.blockStart[i] = i > 0 && this.block[i] === this.block[i - 1] ? this.blockStart[i - 1]! : i;
+      this.blockEnd[i] = i === n - 1 || this.block[i + 1] !== this.block[i] ? 1 : 0;
+    }
+    this.coder = new BlockCoder(space, this.block);
+    this.targetIndex = this.newIndex();
     const R = space.radix;
     this.fall = new Float64Array(R * R);
     for (let e = 0; e < R; e++) {
@@ -95,10 +103,10 @@ export class DerivativeMatrixBuilder {
     }
   }
 
-  private newTables(): SideTables {
+  /** Orbit code → row or column number in its cell. */
+  private newIndex(): KeyTable {
     // per-seed operator tables are many and sparse: hashed; a single seed may use flat tables
-    const bound = this.singleSeed ? this.space.keyBound : Number.POSITIVE_INFINITY;
-    return { fold: new KeyTable(bound), index: new KeyTable(bound) };
+    return new KeyTable(this.singleSeed ? this.coder.range : Number.POSITIVE_INFINITY);
   }
 
   /** Add the entries of one seed's derivative maps, for the operator families given. */
@@ -106,25 +114,21 @@ export class DerivativeMatrixBuilder {
     const sp = this.space;
     const n = sp.n;
     const R = sp.radix;
-    const { modulus, chi, box, block, fall, repIsOp, folder, repKill, foldKill } = this;
+    const { modulus, chi, box, block, blockStart, blockEnd, fall, repIsOp, foldAlt, repKill, foldKill } = this;
     const [Sx, Sy, St] = seed.degree;
     const range = { x: ops.x ? Sx : 0, y: ops.y ? Sy : 0, theta: ops.theta ? St : 0 };
-    const opTables = this.singleSeed ? this.sharedOp() : this.newTables();
-    const foldT = repIsOp ? this.targetTables.fold : opTables.fold;
-    const foldIdx = repIsOp ? this.targetTables.index : opTables.index;
-    const repIdx = repIsOp ? opTables.index : this.targetTables.index;
-    const foldArr = foldT.array;
-    const foldIdxArr = foldIdx.array;
+    const opIndex = this.singleSeed ? this.sharedOp() : this.newIndex();
+    const foldIdx = repIsOp ? this.targetIndex : opIndex;
+    const repIdx = repIsOp ? opIndex : this.targetIndex;
+    const foldArr = foldIdx.array;
     const repArr = repIdx.array;
+    const { dense, term, letters: L } = this.coder;
     const cells = this.cells;
-    const xPow = sp.powers;
-    const base = sp.maskBase;
     const hasY = sp.hasY;
     const xs = seed.xs;
     const ys = seed.ys;
     let off = 0;
     let gMask = 0;
-    let gKey = 0;
     let gCoeff = 0;
 
     const push = (cell: CellMatrix, r: number, c: number, v: number): void => {
@@ -146,51 +150,37 @@ export class DerivativeMatrixBuilder {
       cell.len++;
     };
 
-    const leaf = (aTot: number, bTot: number, cTot: number, lin: number, tMask: number, val: number): void => {
-      const cell = cells[boxIndex(box, Sx - aTot, Sy - bTot, St - cTot)]!;
-      const opKey = lin * base + tMask;
-      const target = gKey - (lin * base + gMask) + (gMask & ~tMask);
-      const foldKey = repIsOp ? target : opKey;
-      const repKey = repIsOp ? opKey : target;
-      let code = foldArr ? foldArr[foldKey]! : foldT.get(foldKey);
-      if (code === -2) {
-        const rep = folder.repOf(foldKey);
-        if (rep < 0) code = -1;
-        else {
-          const parity = rep % 2;
-          const rk = (rep - parity) / 2;
-          let idx = foldIdxArr ? foldIdxArr[rk]! : foldIdx.get(rk);
-          if (idx === -2) {
-            idx = repIsOp ? cell.cols++ : cell.rows++;
-            if (foldIdxArr) foldIdxArr[rk] = idx;
-            else foldIdx.set(rk, idx);
-          }
-          code = 2 * idx + parity;
-        }
-        if (foldArr) foldArr[foldKey] = code;
-        else foldT.set(foldKey, code);
-      }
-      if (code < 0) return;
+    const leaf = (aTot: number, bTot: number, cTot: number, tMask: number, val: number, repCode: number, foldCode: number, parity: number): void => {
       let v = modulus ? (val * gCoeff) % modulus : val * gCoeff;
       if (v === 0) return;
-      if ((thetaDerivativeSign(tMask, gMask) < 0) !== ((code & 1) === 1)) v = -v;
-      let r = repArr ? repArr[repKey]! : repIdx.get(repKey);
+      if ((thetaDerivativeSign(tMask, gMask) < 0) !== (parity === 1)) v = -v;
+      const cell = cells[boxIndex(box, Sx - aTot, Sy - bTot, St - cTot)]!;
+      let f = foldArr ? foldArr[foldCode]! : foldIdx.get(foldCode);
+      if (f === -2) {
+        f = repIsOp ? cell.cols++ : cell.rows++;
+        if (foldArr) foldArr[foldCode] = f;
+        else foldIdx.set(foldCode, f);
+      }
+      let r = repArr ? repArr[repCode]! : repIdx.get(repCode);
       if (r === -2) {
         r = repIsOp ? cell.rows++ : cell.cols++;
-        if (repArr) repArr[repKey] = r;
-        else repIdx.set(repKey, r);
+        if (repArr) repArr[repCode] = r;
+        else repIdx.set(repCode, r);
       }
-      if (repIsOp) push(cell, r, code >> 1, v);
-      else push(cell, code >> 1, r, v);
+      if (repIsOp) push(cell, r, f, v);
+      else push(cell, f, r, v);
     };
 
     // letters of the folded side already used in each block (a repetition kills the fold)
     const letterSpace = 2 * R * R;
     const used = new Uint8Array(this.task.blocks.length * letterSpace);
+    // the folded side's letters by position, and the current block sorted (its representative)
+    const foldLetters = new Int32Array(n);
+    const sorted = new Int32Array(n);
 
-    const rec = (i: number, aTot: number, bTot: number, cTot: number, lin: number, tMask: number, val: number, prev: number): void => {
+    const rec = (i: number, aTot: number, bTot: number, cTot: number, tMask: number, val: number, prev: number, repCode: number, foldCode: number, parity: number): void => {
       if (i === n) {
-        leaf(aTot, bTot, cTot, lin, tMask, val);
+        leaf(aTot, bTot, cTot, tMask, val, repCode, foldCode, parity);
         return;
       }
       const ex = xs[off + i]!;
@@ -200,9 +190,10 @@ export class DerivativeMatrixBuilder {
       const maxA = Math.min(ex, range.x - aTot);
       const maxB = Math.min(ey, range.y - bTot);
       const maxT = si && cTot < range.theta ? 1 : 0;
+      const last = blockEnd[i] === 1;
+      const first = blockStart[i]!;
       for (let a = 0; a <= maxA; a++) {
         const va = a ? (modulus ? (val * fall[ex * R + a]!) % modulus : val * fall[ex * R + a]!) : val;
-        const la = lin + a * xPow[i]!;
         for (let b = 0; b <= maxB; b++) {
           const vb = b ? (modulus ? (va * fall[ey * R + b]!) % modulus : va * fall[ey * R + b]!) : va;
           for (let t = 0; t <= maxT; t++) {
@@ -214,15 +205,34 @@ export class DerivativeMatrixBuilder {
               if (repLetter < prev) continue;
               if (repLetter === prev && repLetter % 2 === repKill) continue; // the orbit sum vanishes
             }
-            const next = b ? la + b * xPow[n + i]! : la;
             const mask = t ? tMask | (1 << i) : tMask;
+            const rc = repCode + term[i * L + dense[repLetter]!]!;
+            foldLetters[i] = foldLetter;
+            let fc = foldCode;
+            let par = parity;
+            if (last) {
+              // the block is complete: sort its folded letters (insertion sort counts the
+              // inversions: the sign for 'alt', and the θ re-sorting sign) and code them
+              for (let u = first; u <= i; u++) {
+                const l = foldLetters[u]!;
+                let j = u - 1;
+                while (j >= first && sorted[j]! > l) {
+                  if (foldAlt) par ^= 1;
+                  if (sorted[j]! & l & 1) par ^= 1;
+                  sorted[j + 1] = sorted[j]!;
+                  j--;
+                }
+                sorted[j + 1] = l;
+              }
+              for (let u = first; u <= i; u++) fc += term[u * L + dense[sorted[u]!]!]!;
+            }
             if (chi !== 0 && foldLetter % 2 === foldKill) {
               const u = block[i]! * letterSpace + foldLetter;
               if (used[u]) continue;
               used[u] = 1;
-              rec(i + 1, aTot + a, bTot + b, cTot + t, next, mask, vb, repLetter);
+              rec(i + 1, aTot + a, bTot + b, cTot + t, mask, vb, repLetter, rc, fc, par);
               used[u] = 0;
-            } else rec(i + 1, aTot + a, bTot + b, cTot + t, next, mask, vb, repLetter);
+            } else rec(i + 1, aTot + a, bTot + b, cTot + t, mask, vb, repLetter, rc, fc, par);
           }
         }
       }
@@ -231,15 +241,14 @@ export class DerivativeMatrixBuilder {
     for (let t = 0; t < seed.count; t++) {
       off = t * n;
       gMask = seed.masks[t]!;
-      gKey = seed.keys[t]!;
       gCoeff = seed.coeffs[t]!;
-      rec(0, 0, 0, 0, 0, 0, 1, -1);
+      rec(0, 0, 0, 0, 0, 1, -1, 0, 0, 0);
     }
   }
 
-  private opShared: SideTables | undefined;
-  private sharedOp(): SideTables {
-    this.opShared ??= this.newTables();
+  private opShared: KeyTable | undefined;
+  private sharedOp(): KeyTable {
+    this.opShared ??= this.newIndex();
     return this.opShared;
   }
 }

@@ -1,5 +1,5 @@
 /**
- * A map from monomial keys to small non-negative integers: a flat Int32Array when the key
+ * A map from monomial or orbit codes to small non-negative integers: a flat Int32Array when the key
  * range is small enough (fast, no hashing), a Map otherwise.
  */
 export const DIRECT_TABLE_LIMIT = 2 ** 25;
