@@ -25,6 +25,7 @@ import { seedSupport } from './seed-support.js';
 import { seedTerms, type SeedSpec } from './seeds.js';
 import { mergeRuns } from './merge-runs.js';
 import { parallelRanks } from './parallel-ranks.js';
+import { youngPlan } from './young-plan.js';
 import { independentSeeds, polarizationReducible, polarizedSeeds } from './polarized-seeds.js';
 import type { SuperAlgebra } from './super-algebra.js';
 
@@ -60,7 +61,9 @@ export const DEFAULT_MAX_WORK = 2e9;
 
 /** What a checkpoint file must match: everything that changes the result. */
 function openCheckpoint(file: string, spec: ModuleSpec, options: ModuleOptions, primes: readonly number[]): ModuleCheckpoint {
-  return new ModuleCheckpoint(file, { gradus: VERSION, spec, frobenius: options.frobenius ?? false, method: options.method ?? 'auto', primes });
+  // the subgroup plan names the tasks whose ranks the file holds
+  const plan = youngPlan(spec.n).map((t) => t.label);
+  return new ModuleCheckpoint(file, { gradus: VERSION, spec, frobenius: options.frobenius ?? false, method: options.method ?? 'auto', primes, plan });
 }
 const EXACT_MAX_WORK = 2e6;
 

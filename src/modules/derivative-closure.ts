@@ -26,7 +26,7 @@ export interface ClosureHooks {
 }
 
 export function closurePlan(n: number, chi: SeedChi): readonly YoungTask[] {
-  return chi === 0 ? [{ lambda: [], blocks: new Array<number>(n).fill(1), mode: 'sym' }] : youngPlan(n);
+  return chi === 0 ? [{ blocks: new Array<number>(n).fill(1), modes: new Array<'sym'>(n).fill('sym'), pairing: [], label: 'all' }] : youngPlan(n);
 }
 
 /** The box of target degrees reached from the seeds (ranges start at 0). */
@@ -67,7 +67,7 @@ export function derivativeRanks(
     });
     hooks.onTask?.(ti, out.map((perPrime) => perPrime[ti]!));
     done++;
-    hooks.onProgress?.(done, which.length, `task ${plan[ti]!.blocks.join(',')} ${plan[ti]!.mode}`);
+    hooks.onProgress?.(done, which.length, `task ${plan[ti]!.label}`);
   }
   return out;
 }

@@ -18,7 +18,8 @@ import { blockOf, type FoldMode } from './young-fold.js';
 
 export interface RankTask {
   readonly blocks: readonly number[];
-  readonly mode: FoldMode;
+  /** Character of each block on the targets. */
+  readonly modes: readonly FoldMode[];
 }
 
 /** Seed character under transpositions: −1 (sign), +1 (trivial), 0 (neither: no row pruning). */
@@ -52,10 +53,13 @@ export function boxIndex(box: DegreeBox, dx: number, dy: number, dt: number): nu
 export class DerivativeMatrixBuilder {
   readonly cells: CellMatrix[] = [];
   private readonly targetIndex: KeyTable;
-  private readonly repIsOp: boolean;
-  private readonly foldAlt: boolean;
-  private readonly repKill: number;
-  private readonly foldKill: number;
+  /** Per position (constant on blocks): 1 when the operator side is enumerated as representatives. */
+  private readonly repIsOp: Uint8Array;
+  /** Per position: 1 when the folded side's block carries the sign character. */
+  private readonly foldAlt: Uint8Array;
+  /** Per position: the θ bit (1) or θ-free (0) kind of letter whose repetition kills the orbit sum, on each side. */
+  private readonly repKill: Uint8Array;
+  private readonly foldKill: Uint8Array;
   private readonly block: Int32Array;
   private readonly blockStart: Int32Array;
   private readonly blockEnd: Uint8Array;
@@ -72,18 +76,25 @@ export class DerivativeMatrixBuilder {
   ) {
     const count = box.x * box.y * box.theta;
     for (let i = 0; i < count; i++) this.cells.push({ rows: 0, cols: 0, len: 0, r: new Int32Array(64), c: new Int32Array(64), v: new Float64Array(64) });
-    // Enumerate the side whose fold kills repeated θ-free letters (strict representatives, far
-    // fewer); fold the other. The operator side folds with the seed's character folded in
-    // (design note: C(σg) = χ(σ) σ C(g)).
-    const targetMode: FoldMode = task.mode;
-    const opMode: FoldMode = (task.mode === 'alt') !== (chi === -1) ? 'alt' : 'sym';
-    this.repIsOp = opMode === 'alt' || targetMode !== 'alt';
-    const foldMode = this.repIsOp ? targetMode : opMode;
-    this.foldAlt = foldMode === 'alt';
-    this.repKill = (this.repIsOp ? opMode : targetMode) === 'sym' ? 1 : 0;
-    this.foldKill = foldMode === 'sym' ? 1 : 0;
     const n = space.n;
     this.block = blockOf(n, task.blocks);
+    // In each block, enumerate the side whose fold kills repeated θ-free letters (strict
+    // representatives, far fewer); fold the other. The operator side folds with the seed's
+    // character folded in (design note: C(σg) = χ(σ) σ C(g)).
+    this.repIsOp = new Uint8Array(n);
+    this.foldAlt = new Uint8Array(n);
+    this.repKill = new Uint8Array(n);
+    this.foldKill = new Uint8Array(n);
+    for (let i = 0; i < n; i++) {
+      const targetMode = task.modes[this.block[i]!]!;
+      const opMode: FoldMode = (targetMode === 'alt') !== (chi === -1) ? 'alt' : 'sym';
+      const repIsOp = opMode === 'alt' || targetMode !== 'alt';
+      const foldMode = repIsOp ? targetMode : opMode;
+      this.repIsOp[i] = repIsOp ? 1 : 0;
+      this.foldAlt[i] = foldMode === 'alt' ? 1 : 0;
+      this.repKill[i] = (repIsOp ? opMode : targetMode) === 'sym' ? 1 : 0;
+      this.foldKill[i] = foldMode === 'sym' ? 1 : 0;
+    }
     this.blockStart = new Int32Array(n);
     this.blockEnd = new Uint8Array(n);
     for (let i = 0; i < n; i++) {
@@ -118,10 +129,9 @@ export class DerivativeMatrixBuilder {
     const [Sx, Sy, St] = seed.degree;
     const range = { x: ops.x ? Sx : 0, y: ops.y ? Sy : 0, theta: ops.theta ? St : 0 };
     const opIndex = this.singleSeed ? this.sharedOp() : this.newIndex();
-    const foldIdx = repIsOp ? this.targetIndex : opIndex;
-    const repIdx = repIsOp ? opIndex : this.targetIndex;
-    const foldArr = foldIdx.array;
-    const repArr = repIdx.array;
+    const tgIndex = this.targetIndex;
+    const opArr = opIndex.array;
+    const tgArr = tgIndex.array;
     const { dense, term, letters: L } = this.coder;
     const cells = this.cells;
     const hasY = sp.hasY;
@@ -150,25 +160,24 @@ export class DerivativeMatrixBuilder {
       cell.len++;
     };
 
-    const leaf = (aTot: number, bTot: number, cTot: number, tMask: number, val: number, repCode: number, foldCode: number, parity: number): void => {
+    const leaf = (aTot: number, bTot: number, cTot: number, tMask: number, val: number, opCode: number, tgCode: number, parity: number): void => {
       let v = modulus ? (val * gCoeff) % modulus : val * gCoeff;
       if (v === 0) return;
       if ((thetaDerivativeSign(tMask, gMask) < 0) !== (parity === 1)) v = -v;
       const cell = cells[boxIndex(box, Sx - aTot, Sy - bTot, St - cTot)]!;
-      let f = foldArr ? foldArr[foldCode]! : foldIdx.get(foldCode);
-      if (f === -2) {
-        f = repIsOp ? cell.cols++ : cell.rows++;
-        if (foldArr) foldArr[foldCode] = f;
-        else foldIdx.set(foldCode, f);
-      }
-      let r = repArr ? repArr[repCode]! : repIdx.get(repCode);
+      let r = opArr ? opArr[opCode]! : opIndex.get(opCode);
       if (r === -2) {
-        r = repIsOp ? cell.rows++ : cell.cols++;
-        if (repArr) repArr[repCode] = r;
-        else repIdx.set(repCode, r);
+        r = cell.rows++;
+        if (opArr) opArr[opCode] = r;
+        else opIndex.set(opCode, r);
       }
-      if (repIsOp) push(cell, r, f, v);
-      else push(cell, f, r, v);
+      let c = tgArr ? tgArr[tgCode]! : tgIndex.get(tgCode);
+      if (c === -2) {
+        c = cell.cols++;
+        if (tgArr) tgArr[tgCode] = c;
+        else tgIndex.set(tgCode, c);
+      }
+      push(cell, r, c, v);
     };
 
     // letters of the folded side already used in each block (a repetition kills the fold)
@@ -178,9 +187,11 @@ export class DerivativeMatrixBuilder {
     const foldLetters = new Int32Array(n);
     const sorted = new Int32Array(n);
 
-    const rec = (i: number, aTot: number, bTot: number, cTot: number, tMask: number, val: number, prev: number, repCode: number, foldCode: number, parity: number): void => {
+    // opCode and tgCode: the orbit codes of both sides so far (each block's representative
+    // side adds its letters as they come, the folded side when its block is complete)
+    const rec = (i: number, aTot: number, bTot: number, cTot: number, tMask: number, val: number, prev: number, opCode: number, tgCode: number, parity: number): void => {
       if (i === n) {
-        leaf(aTot, bTot, cTot, tMask, val, repCode, foldCode, parity);
+        leaf(aTot, bTot, cTot, tMask, val, opCode, tgCode, parity);
         return;
       }
       const ex = xs[off + i]!;
@@ -192,6 +203,10 @@ export class DerivativeMatrixBuilder {
       const maxT = si && cTot < range.theta ? 1 : 0;
       const last = blockEnd[i] === 1;
       const first = blockStart[i]!;
+      const opRep = repIsOp[i] === 1;
+      const alt = foldAlt[i] === 1;
+      const rKill = repKill[i]!;
+      const fKill = foldKill[i]!;
       for (let a = 0; a <= maxA; a++) {
         const va = a ? (modulus ? (val * fall[ex * R + a]!) % modulus : val * fall[ex * R + a]!) : val;
         for (let b = 0; b <= maxB; b++) {
@@ -199,17 +214,18 @@ export class DerivativeMatrixBuilder {
           for (let t = 0; t <= maxT; t++) {
             const opLetter = (a * R + b) * 2 + t;
             const tgLetter = ((ex - a) * R + (ey - b)) * 2 + (si - t);
-            const repLetter = repIsOp ? opLetter : tgLetter;
-            const foldLetter = repIsOp ? tgLetter : opLetter;
+            const repLetter = opRep ? opLetter : tgLetter;
+            const foldLetter = opRep ? tgLetter : opLetter;
             if (sameBlock && chi !== 0) {
               if (repLetter < prev) continue;
-              if (repLetter === prev && repLetter % 2 === repKill) continue; // the orbit sum vanishes
+              if (repLetter === prev && repLetter % 2 === rKill) continue; // the orbit sum vanishes
             }
             const mask = t ? tMask | (1 << i) : tMask;
-            const rc = repCode + term[i * L + dense[repLetter]!]!;
-            foldLetters[i] = foldLetter;
-            let fc = foldCode;
+            const repTerm = term[i * L + dense[repLetter]!]!;
+            let oc = opRep ? opCode + repTerm : opCode;
+            let tc = opRep ? tgCode : tgCode + repTerm;
             let par = parity;
+            foldLetters[i] = foldLetter;
             if (last) {
               // the block is complete: sort its folded letters (insertion sort counts the
               // inversions: the sign for 'alt', and the θ re-sorting sign) and code them
@@ -217,22 +233,25 @@ export class DerivativeMatrixBuilder {
                 const l = foldLetters[u]!;
                 let j = u - 1;
                 while (j >= first && sorted[j]! > l) {
-                  if (foldAlt) par ^= 1;
+                  if (alt) par ^= 1;
                   if (sorted[j]! & l & 1) par ^= 1;
                   sorted[j + 1] = sorted[j]!;
                   j--;
                 }
                 sorted[j + 1] = l;
               }
+              let fc = 0;
               for (let u = first; u <= i; u++) fc += term[u * L + dense[sorted[u]!]!]!;
+              if (opRep) tc += fc;
+              else oc += fc;
             }
-            if (chi !== 0 && foldLetter % 2 === foldKill) {
+            if (chi !== 0 && foldLetter % 2 === fKill) {
               const u = block[i]! * letterSpace + foldLetter;
               if (used[u]) continue;
               used[u] = 1;
-              rec(i + 1, aTot + a, bTot + b, cTot + t, mask, vb, repLetter, rc, fc, par);
+              rec(i + 1, aTot + a, bTot + b, cTot + t, mask, vb, repLetter, oc, tc, par);
               used[u] = 0;
-            } else rec(i + 1, aTot + a, bTot + b, cTot + t, mask, vb, repLetter, rc, fc, par);
+            } else rec(i + 1, aTot + a, bTot + b, cTot + t, mask, vb, repLetter, oc, tc, par);
           }
         }
       }

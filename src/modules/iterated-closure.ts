@@ -119,7 +119,7 @@ function rowsAsPolys(c: CellState): SuperPoly<number>[] {
 
 /** dim of the S_μ-(anti-)invariants of span(basis): rank of the folded vectors. */
 export function foldRank(alg: SuperAlgebra<number>, basis: readonly SuperPoly<number>[], task: YoungTask, p: number): number {
-  const folder = new YoungFolder(alg.space, task.blocks, task.mode);
+  const folder = new YoungFolder(alg.space, task.blocks, task.modes);
   const ech = new EchelonModP(p);
   for (const b of basis) {
     const cols: number[] = [];

@@ -52,7 +52,7 @@ export async function parallelRanks(
             msg.ranks.forEach((r, pi) => (out[pi]![msg.task] = r));
             hooks.onTask?.(msg.task, msg.ranks);
             done++;
-            hooks.onProgress?.(done, total, `task ${plan[msg.task]!.blocks.join(',')}`);
+            hooks.onProgress?.(done, total, `task ${plan[msg.task]!.label}`);
             next();
           });
           w.on('error', reject);

@@ -122,7 +122,7 @@ function plainCell(alg: SuperAlgebra<number>, p: number, gens: readonly Gen[], d
 function frobeniusCell(alg: SuperAlgebra<number>, p: number, gens: readonly Gen[], plan: readonly YoungTask[], deg: [number, number, number], fl: readonly number[]): ModuleCell {
   const monos = monomialsOfDegree(alg, ...deg);
   const values = plan.map((task) => {
-    const folder = new YoungFolder(alg.space, task.blocks, task.mode);
+    const folder = new YoungFolder(alg.space, task.blocks, task.modes);
     for (const m of monos) folder.fold(m);
     const ambient = folder.columns;
     if (ambient === 0) return 0;

@@ -1,8 +1,8 @@
 /**
  * Folding vectors onto the (anti-)invariants of a Young subgroup S_μ (blocks of consecutive
- * positions of sizes μ_1, μ_2, …). The S_μ-symmetrization (mode 'sym') or antisymmetrization
- * ('alt') of a vector is fixed by its coefficients at orbit representatives: monomials whose
- * letters (x_i, y_i, θ_i) increase weakly inside every block. A monomial folds to its
+ * positions of sizes μ_1, μ_2, …), each block with its own character. The symmetrization
+ * (mode 'sym') or antisymmetrization ('alt') of a vector is fixed by its coefficients at
+ * orbit representatives: monomials whose letters (x_i, y_i, θ_i) increase weakly inside every block. A monomial folds to its
  * representative with a sign (θ re-sorting, and the permutation's sign for 'alt'), or to
  * nothing when its stabilizer kills it (two equal θ-letters for 'sym', two equal θ-free
  * letters for 'alt'). Column scales |Stab| are dropped: they do not change ranks.
@@ -30,14 +30,17 @@ export class YoungFolder {
   private readonly y: Int32Array;
   private readonly letters: Float64Array;
   private readonly order: Int32Array;
+  private readonly altAt: Uint8Array;
 
   constructor(
     readonly space: SuperSpace,
     readonly blocks: readonly number[],
-    readonly mode: FoldMode,
+    readonly modes: readonly FoldMode[],
   ) {
     const n = space.n;
     this.block = blockOf(n, blocks);
+    this.altAt = new Uint8Array(n);
+    for (let i = 0; i < n; i++) this.altAt[i] = modes[this.block[i]!] === 'alt' ? 1 : 0;
     this.x = new Int32Array(n);
     this.y = new Int32Array(n);
     this.letters = new Float64Array(n);
@@ -80,9 +83,9 @@ export class YoungFolder {
     const L = this.letters;
     for (let i = 0; i < n; i++) L[i] = ((this.x[i]! * R + (sp.hasY ? this.y[i]! : 0)) * 2) + ((mask >> i) & 1);
     let parity = 0;
-    const alt = this.mode === 'alt';
     // inversions inside blocks (blocks are contiguous, so only same-block pairs can invert)
     for (let i = 0; i < n; i++) {
+      const alt = this.altAt[i] === 1;
       for (let j = i + 1; j < n && this.block[j] === this.block[i]; j++) {
         const li = L[i]!;
         const lj = L[j]!;
