@@ -2,10 +2,11 @@
  * Folding vectors onto the (anti-)invariants of a Young subgroup S_μ (blocks of consecutive
  * positions of sizes μ_1, μ_2, …), each block with its own character. The symmetrization
  * (mode 'sym') or antisymmetrization ('alt') of a vector is fixed by its coefficients at
- * orbit representatives: monomials whose letters (x_i, y_i, θ_i) increase weakly inside every block. A monomial folds to its
- * representative with a sign (θ re-sorting, and the permutation's sign for 'alt'), or to
- * nothing when its stabilizer kills it (two equal θ-letters for 'sym', two equal θ-free
- * letters for 'alt'). Column scales |Stab| are dropped: they do not change ranks.
+ * orbit representatives: monomials whose letters (x_i, y_i, θ_i) increase weakly inside
+ * every block. A monomial folds to its representative with a sign (θ re-sorting, and the
+ * permutation's sign for 'alt'), or to nothing when its stabilizer kills it (two equal
+ * θ-letters for 'sym', two equal θ-free letters for 'alt'). Column scales |Stab| are
+ * dropped: they do not change ranks.
  */
 import type { SuperSpace } from './superspace.js';
 
