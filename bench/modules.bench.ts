@@ -4,6 +4,7 @@
  *   npm run bench -- modules                      (all but n = 9)
  *   MODULES_BENCH=vandermonde8,delta8 npm run bench -- modules
  *   MODULES_BENCH=vandermonde9 npm run bench -- modules   (long: target 15 minutes)
+ *   MODULES_BENCH=xtheta8 npm run bench -- modules        (long: target 60 minutes)
  * Targets (issue): Vandermonde n = 8 ≤ 30 s; n = 9 ≤ 15 min; δ_{8,k} x-closures, all k,
  * ≤ 5 min; x/θ tables of δ_{7,k} with Frobenius, all k, ≤ 100 s; polarized δ_{6,k}, all k,
  * ≤ 10 min. Also compares polarized closures with Δ'_{e_{k−1}} e_n where that is cheap.
@@ -41,15 +42,40 @@ function report(name: string, total: number, target: number): void {
   console.log(`  => ${name}: ${total.toFixed(1)} s (target ${target} s, ratio ${(total / target).toFixed(2)}), peak RSS ${peakMB().toFixed(0)} MB`);
 }
 
-if (wanted.includes('vandermonde8')) {
-  const [r, wall, cpu] = await timed({ seed: 'vandermonde', n: 8, ops: ['x'] });
-  line('Vandermonde n=8 (x)', r, wall, cpu);
-  report('Vandermonde n = 8, Hilbert + graded Frobenius', wall, 30);
+/** Standard Young tableaux by adding n to a corner (independent of the engine). */
+function syt(n: number): { shape: number[]; rowOf: number[] }[] {
+  if (n === 0) return [{ shape: [], rowOf: [] }];
+  const out: { shape: number[]; rowOf: number[] }[] = [];
+  for (const t of syt(n - 1)) {
+    for (let r = 0; r <= t.shape.length; r++) {
+      if (r > 0 && (t.shape[r] ?? 0) + 1 > t.shape[r - 1]!) continue;
+      const shape = t.shape.slice();
+      shape[r] = (shape[r] ?? 0) + 1;
+      out.push({ shape, rowOf: [...t.rowOf, r] });
+    }
+  }
+  return out;
 }
-if (wanted.includes('vandermonde9')) {
-  const [r, wall, cpu] = await timed({ seed: 'vandermonde', n: 9, ops: ['x'] });
-  line('Vandermonde n=9 (x)', r, wall, cpu);
-  report('Vandermonde n = 9', wall, 900);
+
+/** The graded Frobenius series against Σ_T q^maj(T) s_shape(T) (MATH.md §4). */
+function majCheck(r: ModuleResult, n: number): string {
+  const expected = new Map<string, Poly>();
+  for (const t of syt(n)) {
+    let maj = 0;
+    for (let i = 1; i < n; i++) if (t.rowOf[i]! > t.rowOf[i - 1]!) maj += i;
+    const key = partitionKey(t.shape);
+    expected.set(key, (expected.get(key) ?? Poly.zero).add(Poly.monomial(1, maj)));
+  }
+  const same = partitionList(n).every((l, i) => Poly.fromTerms(r.cells.map((c) => [c.degree[0], 0, BigInt(c.multiplicities![i]!)] as const)).equals(expected.get(partitionKey(l)) ?? Poly.zero));
+  return `  Frobenius ${same ? 'equals' : 'DIFFERS FROM'} Σ_T q^maj(T) s_shape(T) over the ${syt(n).length} standard tableaux`;
+}
+
+for (const n of [8, 9]) {
+  if (!wanted.includes(`vandermonde${n}`)) continue;
+  const [r, wall, cpu] = await timed({ seed: 'vandermonde', n, ops: ['x'] });
+  line(`Vandermonde n=${n} (x)`, r, wall, cpu);
+  console.log(majCheck(r, n));
+  report(`Vandermonde n = ${n}, Hilbert + graded Frobenius`, wall, n === 8 ? 30 : 900);
 }
 if (wanted.includes('delta8')) {
   let total = 0;
@@ -68,6 +94,15 @@ if (wanted.includes('xtheta7')) {
     line(`δ_{7,${k}} (x, θ)`, r, wall, cpu);
   }
   report('x/θ tables of δ_{7,k} with Frobenius, every k', total, 100);
+}
+if (wanted.includes('xtheta8')) {
+  let total = 0;
+  for (let k = 1; k <= 8; k++) {
+    const [r, wall, cpu] = await timed({ seed: 'superspace-vandermonde', n: 8, k, ops: ['x', 'theta'] });
+    total += wall;
+    line(`δ_{8,${k}} (x, θ)`, r, wall, cpu);
+  }
+  report('x/θ tables of δ_{8,k} with Frobenius, every k', total, 3600);
 }
 if (wanted.includes('polar6')) {
   let total = 0;
