@@ -2,6 +2,7 @@
  * One formula for a whole family of q-series: c · q^{s(n,k)} · Π [A_i(n,k)]_q!^{e_i} with
  * each A_i affine in n and k (small coefficients) and s a small integer combination of
  * 1, n, k, C(n,2), C(k,2), nk — found on the richest entry and verified on every entry.
+ * The integer factor c is a constant or itself affine in n and k, as in (n+1)·[n]_q!.
  */
 import type { Poly } from '../core/poly.js';
 import { asQProduct, productText, type QProduct } from './qProduct.js';
@@ -20,7 +21,10 @@ export interface Affine {
 }
 
 export interface FamilyFormula {
+  /** The constant integer factor (1 when the factor is affine). */
   readonly content: bigint;
+  /** The integer factor as an affine function of n and k, when it varies. */
+  readonly contentArg?: Affine;
   readonly shift: readonly number[]; // coefficients of SHIFT_BASIS
   readonly factors: readonly { readonly arg: Affine; readonly exp: number }[];
   readonly text: string;
@@ -106,9 +110,14 @@ export function recogniseFamily(points: readonly FamilyPoint[]): FamilyFormula |
     if (!qp) return undefined;
     products.push(qp);
   }
-  const content = products[0]!.content;
-  if (products.some((p) => p.content !== content)) return undefined;
   const hasK = points.some((p) => p.k !== undefined);
+  let content = products[0]!.content;
+  let contentArg: Affine | undefined;
+  if (products.some((p) => p.content !== content)) {
+    contentArg = affineContent(points, products, hasK);
+    if (!contentArg) return undefined;
+    content = 1n;
+  }
   const shift = findShift(points, products, hasK);
   if (!shift) return undefined;
   // the richest entry: most distinct factorial arguments, then the largest n
@@ -155,7 +164,22 @@ export function recogniseFamily(points: readonly FamilyPoint[]): FamilyFormula |
   };
   rec(0);
   if (!best) return undefined;
-  return { content, shift, factors: best.factors, text: formulaText(content, shift, best.factors), verifiedOn: points.length };
+  return {
+    content,
+    ...(contentArg ? { contentArg } : {}),
+    shift,
+    factors: best.factors,
+    text: formulaText(contentArg ? `(${affineText(contentArg)})` : content !== 1n ? String(content) : '', shift, best.factors),
+    verifiedOn: points.length,
+  };
+}
+
+/** The integer factors as a·n + b·k + c (small coefficients, a ≠ 0 or b ≠ 0), or undefined. */
+function affineContent(points: readonly FamilyPoint[], products: readonly QProduct[], hasK: boolean): Affine | undefined {
+  const options: Affine[] = [];
+  for (const a of [0, 1, 2]) for (const b of hasK ? [0, 1, -1, 2] : [0]) for (let c = -3; c <= 3; c++) if (a || b) options.push({ a, b, c });
+  options.sort((x, y) => affCost(x) - affCost(y));
+  return options.find((x) => points.every((p, j) => BigInt(evalAffine(x, p.n, p.k ?? 0)) === products[j]!.content));
 }
 
 function affCost(x: Affine): number {
@@ -176,9 +200,9 @@ function sameAffine(x: Affine, y: Affine): boolean {
   return x.a === y.a && x.b === y.b && x.c === y.c;
 }
 
-function formulaText(content: bigint, shift: readonly number[], factors: readonly { arg: Affine; exp: number }[]): string {
+function formulaText(factor: string, shift: readonly number[], factors: readonly { arg: Affine; exp: number }[]): string {
   const prefix: string[] = [];
-  if (content !== 1n) prefix.push(String(content));
+  if (factor) prefix.push(factor);
   const s = shiftText(shift);
   if (s) prefix.push(/[+-]/.test(s) ? `q^(${s})` : `q^${s}`);
   const num = factors.filter((f) => f.exp > 0);

@@ -61,6 +61,13 @@ describe('q-products', () => {
     expect(recogniseFamily(shifted)!.text).toBe('q^C(n,2) · [n]_q!');
     expect(recogniseFamily(grid(6, (n, k) => qMultinomial([k, k, n - k])))!.text).toBe('[n+k; k, k, n-k]_q');
   });
+  it('an integer factor affine in n: (n+1)·[n]_q!, and none for (n² + 1)·[n]_q! (computed here)', () => {
+    const pts = [2, 3, 4, 5, 6].map((n) => ({ n, poly: qFactorial(n).scale(BigInt(n + 1)) }));
+    expect(recogniseFamily(pts)!.text).toBe('(n+1) · [n]_q!');
+    const odd = [2, 3, 4, 5].map((n) => ({ n, poly: qFactorial(n).scale(BigInt(n * n + 1)) }));
+    expect(recogniseFamily(odd)).toBeUndefined();
+  });
+
   it('no product formula for q-Stirling numbers, nor for one odd entry among q-binomials (negative cases)', () => {
     expect(recogniseFamily(grid(6, (n, k) => qStirling2(n, k)))).toBeUndefined();
     const pts = grid(6, (n, k) => qBinomial(n, k));
