@@ -2,19 +2,13 @@
  * A cost estimate before starting, in work units (pairs of seed term and operator monomial
  * the route visits), with a rough time calibrated on this code (measured in the benchmark).
  */
-import { conjugate, partitionList } from '../core/partitions.js';
 import type { OperatorFamily } from './operators.js';
 import type { SeedSupport } from './seed-support.js';
+import { groupOrder, youngPlan } from './young-plan.js';
 
 const SECONDS_PER_UNIT = 1.5e-7;
 // polarized and iterated closures: measured on δ_{6,6} with P_1..P_5 (about 400 s of CPU, both primes)
 const SECONDS_PER_UNIT_POLAR = 4e-6; // measured on the derivative route (Vandermonde n = 8, one core, both primes)
-
-function groupOrder(l: readonly number[]): number {
-  let s = 1;
-  for (const part of l) for (let i = 2; i <= part; i++) s *= i;
-  return s;
-}
 
 export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFamily[], route: 'young' | 'iterated'): { units: number; seconds: number } {
   const n = seed.space.n;
@@ -25,7 +19,7 @@ export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFami
   let units: number;
   if (route === 'young') {
     let shrink = 0;
-    for (const l of partitionList(n)) shrink += 1 / Math.max(groupOrder(l), groupOrder(conjugate(l)));
+    for (const t of youngPlan(n)) shrink += 1 / groupOrder(t.blocks);
     units = seed.count * boxes * shrink;
   } else {
     const polar = ops.some((o) => o.kind === 'polar');
