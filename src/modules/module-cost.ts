@@ -1,29 +1,126 @@
 /**
- * A cost estimate before starting, in work units (pairs of seed term and operator monomial
- * the route visits), with a rough time calibrated on this code (measured in the benchmark).
+ * A cost estimate before starting, with a rough time calibrated on this code (measured in the
+ * benchmark). Two parts for the subgroup route: the enumeration (pairs of seed term and
+ * operator monomial visited, shrunk by the plan's group orders) and the eliminations, from
+ * the sizes of the matrices: the operator and target monomials of every cell are the
+ * S_n-orbits of the divisors of the seed's terms, counted exactly from one term per orbit,
+ * and each task divides both sides by its group order.
  */
 import type { OperatorFamily } from './operators.js';
 import type { SeedSupport } from './seed-support.js';
 import { groupOrder, youngPlan } from './young-plan.js';
 
-const SECONDS_PER_UNIT = 1.5e-7;
+// measured on the derivative route (Vandermonde n = 8 and 9, δ_{8,k}; both primes, CPU time)
+const SECONDS_PER_UNIT = 4e-8;
+const SECONDS_PER_ELIMINATION_UNIT = 2e-10;
 // polarized and iterated closures: measured on δ_{6,6} with P_1..P_5 (about 400 s of CPU, both primes)
-const SECONDS_PER_UNIT_POLAR = 4e-6; // measured on the derivative route (Vandermonde n = 8, one core, both primes)
+const SECONDS_PER_UNIT_POLAR = 4e-6;
+/** Orbits of seed terms looked at for the matrix sizes (antisymmetrized seeds have one). */
+const MAX_ORBITS = 64;
 
-export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFamily[], route: 'young' | 'iterated'): { units: number; seconds: number } {
+export interface ModuleWork {
+  readonly units: number;
+  readonly seconds: number;
+}
+
+export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFamily[], route: 'young' | 'iterated'): ModuleWork {
   const n = seed.space.n;
   let boxes = 1;
   for (let i = 0; i < n; i++) {
     boxes *= (seed.xs[i]! + 1) * (seed.ys[i]! + 1) * (((seed.masks[0] ?? 0) >> i) & 1 ? 2 : 1);
   }
-  let units: number;
-  if (route === 'young') {
-    let shrink = 0;
-    for (const t of youngPlan(n)) shrink += 1 / groupOrder(t.blocks);
-    units = seed.count * boxes * shrink;
-  } else {
+  if (route !== 'young') {
     const polar = ops.some((o) => o.kind === 'polar');
-    units = seed.count * boxes * ops.length * (polar ? 4 * n : 1);
+    const units = seed.count * boxes * ops.length * (polar ? 4 * n : 1);
+    return { units, seconds: units * SECONDS_PER_UNIT_POLAR };
   }
-  return { units, seconds: units * (route === 'young' ? SECONDS_PER_UNIT : SECONDS_PER_UNIT_POLAR) };
+  const plan = youngPlan(n);
+  let shrink = 0;
+  for (const t of plan) shrink += 1 / groupOrder(t.blocks);
+  const units = seed.count * boxes * shrink;
+  const sizes = cellSizes(seed, { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') });
+  let elimination = 0;
+  for (const t of plan) {
+    const g = groupOrder(t.blocks);
+    for (const [rowsAll, colsAll] of sizes) {
+      const rows = rowsAll / g;
+      const cols = colsAll / g;
+      elimination += rows * cols * Math.min(rows, cols);
+    }
+  }
+  return { units, seconds: units * SECONDS_PER_UNIT + elimination * SECONDS_PER_ELIMINATION_UNIT };
+}
+
+/**
+ * (operator monomials, target monomials) of every cell, counted as whole S_n-orbits of the
+ * divisors of the seed's terms (one term per orbit).
+ */
+export function cellSizes(seed: SeedSupport, fam: { x: boolean; y: boolean; theta: boolean }): [number, number][] {
+  const n = seed.space.n;
+  const fact = [1];
+  for (let i = 1; i <= n; i++) fact.push(fact[i - 1]! * i);
+  const orbitSize = (letters: number[]): number => {
+    let s = fact[n]!;
+    let run = 1;
+    for (let i = 1; i <= n; i++) {
+      if (i < n && letters[i] === letters[i - 1]) run++;
+      else {
+        s /= fact[run]!;
+        run = 1;
+      }
+    }
+    return s;
+  };
+  const seenTerms = new Set<string>();
+  const ops = new Map<number, Map<number, number>>();
+  const targets = new Map<number, Map<number, number>>();
+  const sorted = new Array<number>(n).fill(0);
+  // orbit key: the sorted letters hashed mod a prime below 2^44 (letters < 2^9, so no
+  // overflow of 2^53); a collision would only miscount an estimate
+  const HASH_P = 17592186044399;
+  const note = (table: Map<number, Map<number, number>>, cell: number, letters: number[]): void => {
+    for (let i = 0; i < n; i++) {
+      const l = letters[i]!;
+      let j = i - 1;
+      while (j >= 0 && sorted[j]! > l) {
+        sorted[j + 1] = sorted[j]!;
+        j--;
+      }
+      sorted[j + 1] = l;
+    }
+    let key = 0;
+    for (let i = 0; i < n; i++) key = (key * 512 + sorted[i]!) % HASH_P;
+    let m = table.get(cell);
+    if (!m) table.set(cell, (m = new Map()));
+    if (!m.has(key)) m.set(key, orbitSize(sorted));
+  };
+  const R = seed.space.radix;
+  for (let t = 0; t < seed.count && seenTerms.size < MAX_ORBITS; t++) {
+    const x = Array.from(seed.xs.subarray(t * n, (t + 1) * n));
+    const y = Array.from(seed.ys.subarray(t * n, (t + 1) * n));
+    const th = Array.from({ length: n }, (_, i) => (seed.masks[t]! >> i) & 1);
+    const orbitKey = x.map((v, i) => (v * R + y[i]!) * 2 + th[i]!).sort((a, b) => a - b).join(',');
+    if (seenTerms.has(orbitKey)) continue;
+    seenTerms.add(orbitKey);
+    const op = new Array<number>(n).fill(0);
+    const tg = new Array<number>(n).fill(0);
+    const walk = (i: number, dx: number, dy: number, dt: number): void => {
+      if (i === n) {
+        const cell = (dx * 1024 + dy) * 1024 + dt;
+        note(ops, cell, op);
+        note(targets, cell, tg);
+        return;
+      }
+      for (let a = 0; a <= (fam.x ? x[i]! : 0); a++)
+        for (let b = 0; b <= (fam.y ? y[i]! : 0); b++)
+          for (let c = 0; c <= (fam.theta ? th[i]! : 0); c++) {
+            op[i] = (a * R + b) * 2 + c;
+            tg[i] = ((x[i]! - a) * R + (y[i]! - b)) * 2 + (th[i]! - c);
+            walk(i + 1, dx + a, dy + b, dt + c);
+          }
+    };
+    walk(0, 0, 0, 0);
+  }
+  const total = (m: Map<number, number> | undefined): number => [...(m?.values() ?? [])].reduce((s, v) => s + v, 0);
+  return [...targets.keys()].map((cell) => [total(ops.get(cell)), total(targets.get(cell))]);
 }

@@ -51,7 +51,7 @@ export const moduleCommand: CommandSpec = {
         ...(request.prime !== undefined ? { prime: request.prime } : {}),
         ...(request.maxWork !== undefined ? { maxWork: request.maxWork } : {}),
         ...(request.checkpoint !== undefined ? { checkpoint: request.checkpoint } : {}),
-        onEstimate: (units, seconds) => io.err(`estimated work: ${units.toExponential(2)} units (about ${formatDuration(seconds)} per prime, two primes)`),
+        onEstimate: (units, seconds) => io.err(`estimated work: ${units.toExponential(2)} units (about ${formatDuration(seconds)} of processor time, both primes)`),
         onProgress: (done, total, label) => {
           if (done <= 1) io.progress.start('module', total || undefined);
           io.progress.update(done);

@@ -49,7 +49,7 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
       method: req.method,
       ...(req.prime !== undefined ? { prime: req.prime } : {}),
       ...(req.maxWork !== undefined ? { maxWork: req.maxWork } : {}),
-      onEstimate: (units, seconds) => progress(`estimated ${units.toExponential(1)} units, ~${Math.ceil(seconds)}s per prime`, 0),
+      onEstimate: (units, seconds) => progress(`estimated ${units.toExponential(1)} units, ~${Math.ceil(seconds)}s of processor time`, 0),
       onProgress: (done, total, label) => progress(label || 'closure', done, total || undefined),
     });
     return { result, json: resultToJson(result) };
