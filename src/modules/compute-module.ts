@@ -57,7 +57,8 @@ export interface ModuleOptions {
   readonly onePrime?: boolean;
 }
 
-export const DEFAULT_MAX_WORK = 2e9;
+/** About ten minutes of processor time (module-cost units). */
+export const DEFAULT_MAX_WORK = 1.5e10;
 
 /** What a checkpoint file must match: everything that changes the result. */
 function openCheckpoint(file: string, spec: ModuleSpec, options: ModuleOptions, primes: readonly number[]): ModuleCheckpoint {
