@@ -5,6 +5,7 @@
  *   MODULES_BENCH=vandermonde8,delta8 npm run bench -- modules
  *   MODULES_BENCH=vandermonde9 npm run bench -- modules   (long: target 15 minutes)
  *   MODULES_BENCH=xtheta8 npm run bench -- modules        (long: target 60 minutes)
+ *   MODULES_BENCH=polar7 POLAR7_K=1,2,3 npm run bench -- modules   (stretch: polarized n = 7)
  * Targets (issue): Vandermonde n = 8 ≤ 30 s; n = 9 ≤ 15 min; δ_{8,k} x-closures, all k,
  * ≤ 5 min; x/θ tables of δ_{7,k} with Frobenius, all k, ≤ 100 s; polarized δ_{6,k}, all k,
  * ≤ 10 min. Also compares polarized closures with Δ'_{e_{k−1}} e_n where that is cheap.
@@ -104,14 +105,14 @@ if (wanted.includes('xtheta8')) {
   }
   report('x/θ tables of δ_{8,k} with Frobenius, every k', total, 3600);
 }
-if (wanted.includes('polar6')) {
+/** Polarized closures of δ_{n,k} (∂x, ∂y, P_1..P_{n−1}), each compared with Δ'_{e_{k−1}} e_n. */
+async function polarized(n: number, ks: readonly number[]): Promise<number> {
   let total = 0;
-  const n = 6;
-  for (let k = 1; k <= n; k++) {
+  for (const k of ks) {
     const ops = ['x', 'y', ...Array.from({ length: n - 1 }, (_, j) => `polar${j + 1}`)];
     const [r, wall, cpu] = await timed({ seed: 'superspace-vandermonde', n, k, ops });
     total += wall;
-    line(`δ_{6,${k}} (x, y, P1..P5)`, r, wall, cpu);
+    line(`δ_{${n},${k}} (x, y, P1..P${n - 1})`, r, wall, cpu);
     // Δ'_{e_{k−1}} e_n (MATH.md §4: theorem for k = n, conjecture otherwise)
     const t0 = performance.now();
     const g = k === 1 ? SymFun.one : SymFun.basisElement('e', [k - 1]);
@@ -124,5 +125,11 @@ if (wanted.includes('polar6')) {
     });
     console.log(`  Δ'_{e_${k - 1}} e_${n}: ${same ? 'equal' : 'DIFFERENT'} (symmetric-function side ${((performance.now() - t0) / 1000).toFixed(1)} s)`);
   }
-  report('polarized δ_{6,k}, every k', total, 600);
+  return total;
+}
+if (wanted.includes('polar6')) report('polarized δ_{6,k}, every k', await polarized(6, [1, 2, 3, 4, 5, 6]), 600);
+if (wanted.includes('polar7')) {
+  // stretch: POLAR7_K=1,2,3 picks the k (default all)
+  const ks = (process.env['POLAR7_K'] ?? '1,2,3,4,5,6,7').split(',').map(Number);
+  report(`polarized δ_{7,k}, k = ${ks.join(',')}`, await polarized(7, ks), 3600);
 }
