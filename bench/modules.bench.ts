@@ -17,6 +17,7 @@ import { computeModuleAsync, type ModuleSpec } from '../src/modules/compute-modu
 import type { ModuleResult } from '../src/modules/module-result.js';
 import { deltaPrimeOfEn } from '../src/symfun/operators.js';
 import { SymFun } from '../src/symfun/symfun.js';
+import { majFrobenius, standardTableaux } from '../test/helpers/maj-frobenius.js';
 
 const wanted = (process.env['MODULES_BENCH'] ?? 'vandermonde8,delta8,xtheta7,polar6').split(',');
 
@@ -43,32 +44,11 @@ function report(name: string, total: number, target: number): void {
   console.log(`  => ${name}: ${total.toFixed(1)} s (target ${target} s, ratio ${(total / target).toFixed(2)}), peak RSS ${peakMB().toFixed(0)} MB`);
 }
 
-/** Standard Young tableaux by adding n to a corner (independent of the engine). */
-function syt(n: number): { shape: number[]; rowOf: number[] }[] {
-  if (n === 0) return [{ shape: [], rowOf: [] }];
-  const out: { shape: number[]; rowOf: number[] }[] = [];
-  for (const t of syt(n - 1)) {
-    for (let r = 0; r <= t.shape.length; r++) {
-      if (r > 0 && (t.shape[r] ?? 0) + 1 > t.shape[r - 1]!) continue;
-      const shape = t.shape.slice();
-      shape[r] = (shape[r] ?? 0) + 1;
-      out.push({ shape, rowOf: [...t.rowOf, r] });
-    }
-  }
-  return out;
-}
-
 /** The graded Frobenius series against Σ_T q^maj(T) s_shape(T) (MATH.md §4). */
 function majCheck(r: ModuleResult, n: number): string {
-  const expected = new Map<string, Poly>();
-  for (const t of syt(n)) {
-    let maj = 0;
-    for (let i = 1; i < n; i++) if (t.rowOf[i]! > t.rowOf[i - 1]!) maj += i;
-    const key = partitionKey(t.shape);
-    expected.set(key, (expected.get(key) ?? Poly.zero).add(Poly.monomial(1, maj)));
-  }
+  const expected = majFrobenius(n);
   const same = partitionList(n).every((l, i) => Poly.fromTerms(r.cells.map((c) => [c.degree[0], 0, BigInt(c.multiplicities![i]!)] as const)).equals(expected.get(partitionKey(l)) ?? Poly.zero));
-  return `  Frobenius ${same ? 'equals' : 'DIFFERS FROM'} Σ_T q^maj(T) s_shape(T) over the ${syt(n).length} standard tableaux`;
+  return `  Frobenius ${same ? 'equals' : 'DIFFERS FROM'} Σ_T q^maj(T) s_shape(T) over the ${standardTableaux(n).length} standard tableaux`;
 }
 
 for (const n of [8, 9]) {

@@ -8,6 +8,7 @@ import { Poly } from '../../src/core/poly.js';
 import { computeModule } from '../../src/modules/compute-module.js';
 import { computeQuotient } from '../../src/modules/compute-quotient.js';
 import type { ModuleCell } from '../../src/modules/module-cell.js';
+import { majFrobenius } from '../helpers/maj-frobenius.js';
 
 /** [n]_q! computed here by multiplying out (common practice). */
 function qFact(n: number): Poly {
@@ -25,33 +26,12 @@ function hilbert(cells: readonly ModuleCell[]): Poly {
   return Poly.fromTerms(cells.map((c) => [c.degree[0], 0, BigInt(c.dim)] as const));
 }
 
-/** Standard Young tableaux of every shape of n by adding n to a corner (independent of the engine). */
-function syt(n: number): { shape: number[]; rowOf: number[] }[] {
-  if (n === 0) return [{ shape: [], rowOf: [] }];
-  const out: { shape: number[]; rowOf: number[] }[] = [];
-  for (const t of syt(n - 1)) {
-    for (let r = 0; r <= t.shape.length; r++) {
-      if (r > 0 && (t.shape[r] ?? 0) + 1 > t.shape[r - 1]!) continue;
-      const shape = t.shape.slice();
-      shape[r] = (shape[r] ?? 0) + 1;
-      out.push({ shape, rowOf: [...t.rowOf, r] });
-    }
-  }
-  return out;
-}
-
 describe('x-closure of the Vandermonde (Lusztig–Stanley, MATH.md §4)', () => {
   for (const n of [1, 2, 3, 4, 5]) {
     it(`n = ${n}: Hilbert series [n]_q!, Frobenius Σ_T q^maj(T) s_shape(T)`, () => {
       const r = computeModule({ seed: 'vandermonde', n, ops: ['x'] }, { frobenius: true });
       expect(hilbert(r.cells).equals(qFact(n))).toBe(true);
-      const expected = new Map<string, Poly>();
-      for (const t of syt(n)) {
-        let maj = 0;
-        for (let i = 1; i < n; i++) if (t.rowOf[i]! > t.rowOf[i - 1]!) maj += i;
-        const key = partitionKey(t.shape);
-        expected.set(key, (expected.get(key) ?? Poly.zero).add(Poly.monomial(1, maj)));
-      }
+      const expected = majFrobenius(n);
       const shapes = partitionList(n);
       shapes.forEach((l: Partition, i) => {
         const got = Poly.fromTerms(r.cells.map((c) => [c.degree[0], 0, BigInt(c.multiplicities![i]!)] as const));
