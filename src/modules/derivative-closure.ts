@@ -61,15 +61,73 @@ export function derivativeRanks(
   for (const ti of which) {
     hooks.signal?.throwIfAborted();
     const builder = new DerivativeMatrixBuilder(space, box, plan[ti]!, chi, modulus, seeds.length === 1);
-    for (const seed of seeds) builder.addSeed(seed, ops);
-    primes.forEach((p, pi) => {
-      out[pi]![ti] = builder.cells.map((m) => matrixRank(m, p));
-    });
+    if (seeds.length === 1) {
+      builder.addSeed(seeds[0]!, ops);
+      primes.forEach((p, pi) => {
+        out[pi]![ti] = builder.cells.map((m) => matrixRank(m, p));
+      });
+    } else {
+      const ranks = incrementalRanks(builder, seeds, ops, primes, hooks.signal);
+      primes.forEach((_, pi) => (out[pi]![ti] = ranks[pi]!));
+    }
     hooks.onTask?.(ti, out.map((perPrime) => perPrime[ti]!));
     done++;
     hooks.onProgress?.(done, which.length, `task ${plan[ti]!.label}`);
   }
   return out;
+}
+
+/** Entries held before the rows gathered so far go into the echelons (about 16 bytes each). */
+const FLUSH_ENTRIES = 1 << 22;
+
+/**
+ * Many seeds (polarized closures): their rows pass into one echelon per cell and prime as
+ * they are produced, a batch of seeds at a time, so memory holds a batch of entries and the
+ * echelons rather than whole matrices (rows of different seeds never share an index, columns
+ * are shared by every seed).
+ */
+function incrementalRanks(builder: DerivativeMatrixBuilder, seeds: readonly SeedSupport[], ops: DerivativeOps, primes: readonly number[], signal?: AbortSignal): number[][] {
+  const cells = builder.cells;
+  const echelons = primes.map((p) => cells.map((m) => new EchelonModP(p, Math.max(16, m.cols))));
+  const firstRow = new Int32Array(cells.length); // rows below this were flushed before
+  const flush = (): void => {
+    cells.forEach((m, ci) => {
+      if (m.len === 0) return;
+      const lo = firstRow[ci]!;
+      const count = m.rows - lo;
+      // group the entries by row (counting sort), then insert row by row
+      const start = new Int32Array(count + 1);
+      for (let e = 0; e < m.len; e++) start[m.r[e]! - lo + 1]!++;
+      for (let r = 0; r < count; r++) start[r + 1]! += start[r]!;
+      const fill = start.slice(0, count);
+      const cols = new Int32Array(m.len);
+      const vals = new Float64Array(m.len);
+      for (let e = 0; e < m.len; e++) {
+        const at = fill[m.r[e]! - lo]!++;
+        cols[at] = m.c[e]!;
+        vals[at] = m.v[e]!;
+      }
+      // short rows first, as in directRank (less fill-in)
+      const order = Array.from({ length: count }, (_, r) => r).sort((a, b) => start[a + 1]! - start[a]! - (start[b + 1]! - start[b]!));
+      echelons.forEach((perCell) => {
+        const ech = perCell[ci]!;
+        for (const r of order) {
+          // every column seen so far is a pivot: nothing more can be independent
+          if (ech.rank === m.cols) break;
+          ech.insert(cols.subarray(start[r]!), vals.subarray(start[r]!), start[r + 1]! - start[r]!);
+        }
+      });
+      firstRow[ci] = m.rows;
+      m.len = 0;
+    });
+  };
+  for (const seed of seeds) {
+    signal?.throwIfAborted();
+    builder.addSeed(seed, ops);
+    if (cells.reduce((s, m) => s + m.len, 0) >= FLUSH_ENTRIES) flush();
+  }
+  flush();
+  return echelons.map((perCell) => perCell.map((e) => e.rank));
 }
 
 /** Cells from the ranks of one prime (all cells of the box, zero ones included). */
