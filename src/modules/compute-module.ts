@@ -86,7 +86,7 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
 
   const probe = buildSeedPolynomial(spec.n, terms, primeCoeffs(p1), needs);
   const probeSupport = seedSupport(probe.alg.space, p1, probe.f);
-  const est = estimateModuleWork(probeSupport, ops, method === 'young' && derivOnly ? 'young' : 'iterated');
+  const est = estimateModuleWork(probeSupport, ops, method !== 'young' ? 'iterated' : derivOnly ? 'young' : 'polarized');
   options.onEstimate?.(est.units, est.seconds);
   const limit = method === 'exact' ? EXACT_MAX_WORK : options.maxWork ?? DEFAULT_MAX_WORK;
   if (est.units > limit) {
@@ -214,7 +214,7 @@ export async function computeModuleAsync(spec: ModuleSpec, options: ModuleOption
   const probe = buildSeedPolynomial(spec.n, terms, primeCoeffs(p1), needs);
   const support = seedSupport(probe.alg.space, p1, probe.f);
   const young = (method === 'auto' || method === 'young') && (derivOnly || polarizationReducible(ops));
-  const est = estimateModuleWork(support, ops, young && derivOnly ? 'young' : 'iterated');
+  const est = estimateModuleWork(support, ops, !young ? 'iterated' : derivOnly ? 'young' : 'polarized');
   const limit = options.maxWork ?? DEFAULT_MAX_WORK;
   if (est.seconds < (options.parallelAboveSeconds ?? PARALLEL_THRESHOLD_SECONDS) || est.units > limit) return computeModule(spec, options);
   options.onEstimate?.(est.units, est.seconds);

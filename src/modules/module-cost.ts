@@ -14,8 +14,10 @@ import { groupOrder, youngPlan } from './young-plan.js';
 // measured on the derivative route (Vandermonde n = 8 and 9, δ_{8,k}; both primes, CPU time)
 const SECONDS_PER_UNIT = 4e-8;
 const SECONDS_PER_ELIMINATION_UNIT = 2e-10;
-// polarized and iterated closures: measured on δ_{6,6} with P_1..P_5 (about 400 s of CPU, both primes)
+// iterated closures: measured on δ_{6,6} with P_1..P_5 (about 400 s of CPU, both primes)
 const SECONDS_PER_UNIT_POLAR = 4e-6;
+// polarized closures by the derivative route: per (unit of one seed's closure, candidate seed P_J f)
+const SECONDS_PER_POLARIZED_PAIR = 3e-6;
 /** Orbits of seed terms looked at for the matrix sizes (antisymmetrized seeds have one). */
 const MAX_ORBITS = 64;
 
@@ -24,8 +26,20 @@ export interface ModuleWork {
   readonly seconds: number;
 }
 
-export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFamily[], route: 'young' | 'iterated'): ModuleWork {
+/**
+ * Routes: 'young' (derivative closures), 'polarized' (polarizations normal-ordered into the
+ * derivative closures of the seeds P_J f), 'iterated' (anything else).
+ */
+export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFamily[], route: 'young' | 'polarized' | 'iterated'): ModuleWork {
   const n = seed.space.n;
+  if (route === 'polarized') {
+    // one derivative closure per candidate seed P_J f: the multisets J of the polarization
+    // orders with Σ J ≤ the x-degree (measured on δ_{6,k} and δ_{7,3}: within a factor 5 above)
+    const single = estimateModuleWork(seed, ops, 'young');
+    const orders = ops.flatMap((o) => (o.kind === 'polar' ? [o.order] : []));
+    const seconds = single.units * multisetsUpTo(orders, seed.degree[0]) * SECONDS_PER_POLARIZED_PAIR;
+    return { units: seconds / SECONDS_PER_UNIT, seconds };
+  }
   let boxes = 1;
   for (let i = 0; i < n; i++) {
     boxes *= (seed.xs[i]! + 1) * (seed.ys[i]! + 1) * (((seed.masks[0] ?? 0) >> i) & 1 ? 2 : 1);
@@ -127,4 +141,12 @@ export function cellSizes(seed: SeedSupport, fam: { x: boolean; y: boolean; thet
   }
   const total = (m: Map<number, number> | undefined): number => [...(m?.values() ?? [])].reduce((s, v) => s + v, 0);
   return [...targets.keys()].map((cell) => [total(ops.get(cell)), total(targets.get(cell))]);
+}
+
+/** Number of multisets of the given parts (with repetition) whose sum is at most `max`. */
+export function multisetsUpTo(parts: readonly number[], max: number): number {
+  const ways = new Array<number>(max + 1).fill(0);
+  ways[0] = 1;
+  for (const part of new Set(parts)) for (let m = part; m <= max; m++) ways[m]! += ways[m - part]!;
+  return ways.reduce((s, w) => s + w, 0);
 }
