@@ -66,7 +66,7 @@ function openCheckpoint(file: string, spec: ModuleSpec, options: ModuleOptions, 
   const plan = youngPlan(spec.n).map((t) => t.label);
   return new ModuleCheckpoint(file, { gradus: VERSION, spec, frobenius: options.frobenius ?? false, method: options.method ?? 'auto', primes, plan });
 }
-const EXACT_MAX_WORK = 2e6;
+const EXACT_MAX_WORK = 2e8; // about 8 s in module-cost units (the exact route is far slower per unit)
 
 export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): ModuleResult {
   const t0 = performance.now();

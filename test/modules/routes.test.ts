@@ -40,6 +40,16 @@ describe('routes agree', () => {
       expect(norm(computeModule(spec, { frobenius: true }).cells)).toBe(norm(computeModule(spec, { frobenius: true, method: 'exact' }).cells));
     }
   });
+  it('n = 4 and 5 (subgroup plans with mixed h_μ e_ν tasks): Young route equals exact route', () => {
+    for (const spec of [
+      { seed: 'monomial', n: 4, xExponents: [2, 1, 1, 0], yExponents: [0, 1, 0, 1], theta: [2, 3], ops: ['x', 'y', 'theta'] },
+      { seed: 'monomial', n: 4, xExponents: [1, 1, 0, 0], yExponents: [1, 0, 1, 0], theta: [1], symmetrizer: 'symmetrize', ops: ['x', 'y', 'theta'] },
+      { seed: 'superspace-vandermonde', n: 4, k: 2, ops: ['x', 'y', 'polar1', 'polar2'] },
+      { seed: 'superspace-vandermonde', n: 5, k: 3, ops: ['x', 'theta'] },
+    ] as ModuleSpec[]) {
+      expect(norm(computeModule(spec, { frobenius: true, method: 'young' }).cells)).toBe(norm(computeModule(spec, { frobenius: true, method: 'exact' }).cells));
+    }
+  });
   it('random antisymmetrized monomials: Young route equals exact route (property)', () => {
     fc.assert(
       fc.property(fc.array(fc.nat(3), { minLength: 3, maxLength: 3 }), fc.nat(7), fc.boolean(), (x, mask, sym) => {
