@@ -116,8 +116,7 @@ export class DerivativeMatrixBuilder {
 
   /** Orbit code → row or column number in its cell. */
   private newIndex(): KeyTable {
-    // per-seed operator tables are many and sparse: hashed; a single seed may use flat tables
-    return new KeyTable(this.singleSeed ? this.coder.range : Number.POSITIVE_INFINITY);
+    return new KeyTable(this.coder.range);
   }
 
   /** Add the entries of one seed's derivative maps, for the operator families given. */
@@ -128,7 +127,9 @@ export class DerivativeMatrixBuilder {
     const { modulus, chi, box, block, blockStart, blockEnd, fall, repIsOp, foldAlt, repKill, foldKill } = this;
     const [Sx, Sy, St] = seed.degree;
     const range = { x: ops.x ? Sx : 0, y: ops.y ? Sy : 0, theta: ops.theta ? St : 0 };
-    const opIndex = this.singleSeed ? this.sharedOp() : this.newIndex();
+    // one operator table for every seed, emptied between seeds: each seed's operators are rows of their own
+    const opIndex = this.sharedOp();
+    if (!this.singleSeed) opIndex.clear();
     const tgIndex = this.targetIndex;
     const opArr = opIndex.array;
     const tgArr = tgIndex.array;
@@ -168,14 +169,12 @@ export class DerivativeMatrixBuilder {
       let r = opArr ? opArr[opCode]! : opIndex.get(opCode);
       if (r === -2) {
         r = cell.rows++;
-        if (opArr) opArr[opCode] = r;
-        else opIndex.set(opCode, r);
+        opIndex.set(opCode, r); // once per row: through set, so clear() can undo it
       }
       let c = tgArr ? tgArr[tgCode]! : tgIndex.get(tgCode);
       if (c === -2) {
         c = cell.cols++;
-        if (tgArr) tgArr[tgCode] = c;
-        else tgIndex.set(tgCode, c);
+        tgIndex.set(tgCode, c);
       }
       push(cell, r, c, v);
     };

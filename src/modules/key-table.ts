@@ -10,7 +10,7 @@ const EMPTY = -1; // keys are ≥ 0
 
 export class KeyTable {
   private readonly direct: Int32Array | undefined;
-  /** The flat table, when used (callers in hot loops index it directly). */
+  /** The flat table, when used (callers in hot loops read it directly; writes go through `set`). */
   get array(): Int32Array | undefined {
     return this.direct;
   }
@@ -30,6 +30,21 @@ export class KeyTable {
       this.values = new Int32Array(1024);
       this.mask = 1023;
     }
+  }
+
+  /** Keys set in flat mode since the last clear (to undo them without a full refill). */
+  private touched: Int32Array = new Int32Array(0);
+  private touchedLen = 0;
+
+  /** Forget every key; flat tables undo only what was set (callers must set through `set`). */
+  clear(): void {
+    if (this.direct) {
+      for (let i = 0; i < this.touchedLen; i++) this.direct[this.touched[i]!] = -2;
+      this.touchedLen = 0;
+      return;
+    }
+    this.keys.fill(EMPTY);
+    this.count = 0;
   }
 
   /** Number of keys stored (hashed mode). */
@@ -59,6 +74,14 @@ export class KeyTable {
 
   set(key: number, value: number): void {
     if (this.direct) {
+      if (this.direct[key] === -2) {
+        if (this.touchedLen === this.touched.length) {
+          const grown = new Int32Array(Math.max(1024, 2 * this.touched.length));
+          grown.set(this.touched);
+          this.touched = grown;
+        }
+        this.touched[this.touchedLen++] = key;
+      }
       this.direct[key] = value;
       return;
     }
