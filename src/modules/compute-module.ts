@@ -11,7 +11,7 @@ import { toBigIntExact } from '../core/rational.js';
 import { VERSION } from '../version.js';
 import { moduleChecks } from './checks.js';
 import { primeCoeffs, rationalCoeffs } from './coefficients.js';
-import { cellsFromRanks, closurePlan, degreeBox, derivativeRanks } from './derivative-closure.js';
+import { cellsFromRanks, closurePlan, computedTasks, degreeBox, derivativeRanks, mirrorHolds } from './derivative-closure.js';
 import { integerSeedSupport } from './integer-seed.js';
 import { exactClosure } from './exact-closure.js';
 import { iteratedClosure } from './iterated-closure.js';
@@ -25,7 +25,7 @@ import { seedSupport } from './seed-support.js';
 import { seedTerms, type SeedSpec } from './seeds.js';
 import { mergeRuns } from './merge-runs.js';
 import { parallelRanks } from './parallel-ranks.js';
-import { youngPlan } from './young-plan.js';
+import type { YoungTask } from './young-plan.js';
 import { independentSeeds, polarizationReducible, polarizedSeeds } from './polarized-seeds.js';
 import type { SuperAlgebra } from './super-algebra.js';
 
@@ -61,10 +61,10 @@ export interface ModuleOptions {
 export const DEFAULT_MAX_WORK = 1.5e10;
 
 /** What a checkpoint file must match: everything that changes the result. */
-function openCheckpoint(file: string, spec: ModuleSpec, options: ModuleOptions, primes: readonly number[]): ModuleCheckpoint {
+function openCheckpoint(file: string, spec: ModuleSpec, options: ModuleOptions, primes: readonly number[], plan: readonly YoungTask[]): ModuleCheckpoint {
   // the subgroup plan names the tasks whose ranks the file holds
-  const plan = youngPlan(spec.n).map((t) => t.label);
-  return new ModuleCheckpoint(file, { gradus: VERSION, spec, frobenius: options.frobenius ?? false, method: options.method ?? 'auto', primes, plan });
+  const tasks = plan.map((t) => t.label);
+  return new ModuleCheckpoint(file, { gradus: VERSION, spec, frobenius: options.frobenius ?? false, method: options.method ?? 'auto', primes, plan: tasks });
 }
 const EXACT_MAX_WORK = 2e8; // about 8 s in module-cost units (the exact route is far slower per unit)
 
@@ -117,8 +117,10 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
     const hooks = { onProgress: options.onProgress, signal: options.signal };
     const cache = new Map<number, readonly ModuleCell[]>(options.precomputed ?? []);
     const exactSeed = method === 'young' && derivOnly ? integerSeedSupport(probeSupport, terms) : undefined;
+    const mirrored = mirrorHolds([probeSupport], dops); // one seed, same degree for every prime
     if (exactSeed) notes.push('matrix entries are exact integers below 2^53: one enumeration serves both primes');
-    const cp = options.checkpoint !== undefined && !options.onePrime ? openCheckpoint(options.checkpoint, spec, options, [p1, p2]) : undefined;
+    const cp =
+      options.checkpoint !== undefined && !options.onePrime ? openCheckpoint(options.checkpoint, spec, options, [p1, p2], closurePlan(spec.n, chiOf(probe.character), mirrored)) : undefined;
     const compute = (p: number): readonly ModuleCell[] => {
       const hit = cache.get(p);
       if (hit) return hit;
@@ -127,7 +129,7 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
       if (method === 'young' && !derivOnly) {
         const orders = ops.flatMap((o) => (o.kind === 'polar' ? [o.order] : []));
         const seeds = independentSeeds(sp.alg as SuperAlgebra<number>, polarizedSeeds(sp.alg, sp.f, orders), p).map((g) => seedSupport(sp.alg.space, p, g));
-        return cellsFromRanks(spec.n, degreeBox(seeds), chi, derivativeRanks(seeds, dops, chi, [p], p, hooks)[0]!);
+        return cellsFromRanks(spec.n, degreeBox(seeds), chi, derivativeRanks(seeds, dops, chi, [p], p, hooks)[0]!, mirrorHolds(seeds, dops));
       }
       if (method === 'young') {
         if (exactSeed && (p === p1 || p === p2)) {
@@ -136,15 +138,15 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
             given && given.primes[0] === p1 && given.primes[1] === p2
               ? given.ranks
               : cp
-              ? cp.fillTasks(derivativeRanks([exactSeed], dops, chi, [p1, p2], 0, { ...hooks, onTask: (t, r) => cp.recordTask(t, r) }, cp.missingTasks(closurePlan(spec.n, chi).length)))
+              ? cp.fillTasks(derivativeRanks([exactSeed], dops, chi, [p1, p2], 0, { ...hooks, onTask: (t, r) => cp.recordTask(t, r) }, cp.missingTasks(computedTasks(closurePlan(spec.n, chi, mirrored)))))
               : derivativeRanks([exactSeed], dops, chi, [p1, p2], 0, hooks);
           const box = degreeBox([exactSeed]);
-          cache.set(p1, cellsFromRanks(spec.n, box, chi, ranks[0]!));
-          cache.set(p2, cellsFromRanks(spec.n, box, chi, ranks[1]!));
+          cache.set(p1, cellsFromRanks(spec.n, box, chi, ranks[0]!, mirrored));
+          cache.set(p2, cellsFromRanks(spec.n, box, chi, ranks[1]!, mirrored));
           return cache.get(p)!;
         }
         const support = p === p1 ? probeSupport : seedSupport(sp.alg.space, p, sp.f);
-        return cellsFromRanks(spec.n, degreeBox([support]), chi, derivativeRanks([support], dops, chi, [p], p, hooks)[0]!);
+        return cellsFromRanks(spec.n, degreeBox([support]), chi, derivativeRanks([support], dops, chi, [p], p, hooks)[0]!, mirrored);
       }
       return iteratedClosure(sp.alg, sp.f, probeSupport.degree, ops, { frobenius: chi !== 0, p, onProgress: options.onProgress, signal: options.signal });
     };
@@ -219,16 +221,17 @@ export async function computeModuleAsync(spec: ModuleSpec, options: ModuleOption
   if (est.seconds < (options.parallelAboveSeconds ?? PARALLEL_THRESHOLD_SECONDS) || est.units > limit) return computeModule(spec, options);
   options.onEstimate?.(est.units, est.seconds);
   const quiet = { ...options, onEstimate: undefined, checkpoint: undefined };
-  const cp = options.checkpoint !== undefined ? openCheckpoint(options.checkpoint, spec, options, [p1, p2]) : undefined;
+  const chi = probe.character === 'sign' ? -1 : probe.character === 'trivial' ? 1 : 0;
+  const dops = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
+  // the same header as the synchronous route writes for this request
+  const cp = options.checkpoint !== undefined ? openCheckpoint(options.checkpoint, spec, options, [p1, p2], closurePlan(spec.n, chi, mirrorHolds([support], dops))) : undefined;
   const t0 = performance.now();
   const exact = young && derivOnly ? integerSeedSupport(support, terms) : undefined;
   let result: ModuleResult;
   if (exact) {
     // one enumeration per Young subgroup serves both primes: a task queue over both cores
-    const chi = probe.character === 'sign' ? -1 : probe.character === 'trivial' ? 1 : 0;
-    const dops = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
     const hooks = { onProgress: options.onProgress, signal: options.signal, ...(cp ? { onTask: (t: number, r: number[][]) => cp.recordTask(t, r) } : {}) };
-    const computed = await parallelRanks(exact, dops, chi, [p1, p2], hooks, undefined, cp?.missingTasks(closurePlan(spec.n, chi).length));
+    const computed = await parallelRanks(exact, dops, chi, [p1, p2], hooks, undefined, cp?.missingTasks(computedTasks(closurePlan(spec.n, chi, mirrorHolds([exact], dops)))));
     const ranks = cp ? cp.fillTasks(computed) : computed;
     result = computeModule(spec, { ...quiet, youngRanks: { primes: [p1, p2], ranks } });
   } else {

@@ -25,8 +25,27 @@ export interface ClosureHooks {
   readonly onTask?: (task: number, ranks: number[][]) => void;
 }
 
-export function closurePlan(n: number, chi: SeedChi): readonly YoungTask[] {
-  return chi === 0 ? [{ blocks: new Array<number>(n).fill(1), modes: new Array<'sym'>(n).fill('sym'), pairing: [], label: 'all' }] : youngPlan(n);
+/**
+ * The tasks for a seed of this character; `mirrored` (see mirrorHolds) pairs tasks whose ranks
+ * are each other's read backwards, which pays for a seed with the sign character.
+ */
+export function closurePlan(n: number, chi: SeedChi, mirrored = false): readonly YoungTask[] {
+  return chi === 0 ? [{ blocks: new Array<number>(n).fill(1), modes: new Array<'sym'>(n).fill('sym'), pairing: [], label: 'all' }] : youngPlan(n, mirrored && chi === -1);
+}
+
+/**
+ * Degree d and D − d are transposes of each other (young-plan) when there is one seed and the
+ * operators differentiate in every kind of variable it has.
+ */
+export function mirrorHolds(seeds: readonly SeedSupport[], ops: DerivativeOps): boolean {
+  if (seeds.length !== 1) return false;
+  const [dx, dy, dt] = seeds[0]!.degree;
+  return (dx === 0 || ops.x) && (dy === 0 || ops.y) && (dt === 0 || ops.theta);
+}
+
+/** Indices of the tasks that are computed (not read off a mirror). */
+export function computedTasks(plan: readonly YoungTask[]): number[] {
+  return plan.flatMap((t, i) => (t.mirrorOf === undefined ? [i] : []));
 }
 
 /** The box of target degrees reached from the seeds (ranges start at 0). */
@@ -53,9 +72,9 @@ export function derivativeRanks(
   tasks?: readonly number[],
 ): number[][][] {
   const space = seeds[0]!.space;
-  const plan = closurePlan(space.n, chi);
+  const plan = closurePlan(space.n, chi, mirrorHolds(seeds, ops));
   const box = degreeBox(seeds);
-  const which = tasks ?? plan.map((_, i) => i);
+  const which = (tasks ?? plan.map((_, i) => i)).filter((i) => plan[i]!.mirrorOf === undefined);
   const out = primes.map(() => plan.map(() => [] as number[]));
   let done = 0;
   for (const ti of which) {
@@ -130,9 +149,12 @@ function incrementalRanks(builder: DerivativeMatrixBuilder, seeds: readonly Seed
   return echelons.map((perCell) => perCell.map((e) => e.rank));
 }
 
-/** Cells from the ranks of one prime (all cells of the box, zero ones included). */
-export function cellsFromRanks(n: number, box: DegreeBox, chi: SeedChi, ranks: readonly (readonly number[])[]): ModuleCell[] {
-  const plan = closurePlan(n, chi);
+/**
+ * Cells from the ranks of one prime (all cells of the box, zero ones included); mirrored tasks
+ * read their source task at the opposite corner of the box.
+ */
+export function cellsFromRanks(n: number, box: DegreeBox, chi: SeedChi, ranks: readonly (readonly number[])[], mirrored = false): ModuleCell[] {
+  const plan = closurePlan(n, chi, mirrored);
   const fl = partitionList(n).map((l) => Number(fLambda(l)));
   const cells: ModuleCell[] = [];
   for (let dx = box.x - 1; dx >= 0; dx--)
@@ -140,7 +162,8 @@ export function cellsFromRanks(n: number, box: DegreeBox, chi: SeedChi, ranks: r
       for (let dt = box.theta - 1; dt >= 0; dt--) {
         const idx = boxIndex(box, dx, dy, dt);
         const degree: [number, number, number] = [dx, dy, dt];
-        const values = plan.map((_, ti) => ranks[ti]![idx]!);
+        const opposite = boxIndex(box, box.x - 1 - dx, box.y - 1 - dy, box.theta - 1 - dt);
+        const values = plan.map((t, ti) => (t.mirrorOf === undefined ? ranks[ti]![idx]! : ranks[t.mirrorOf]![opposite]!));
         if (chi === 0) {
           cells.push({ degree, dim: values[0]! });
           continue;

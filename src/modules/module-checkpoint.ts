@@ -89,9 +89,9 @@ export class ModuleCheckpoint {
     return `${this.reused} finished unit${this.reused === 1 ? '' : 's'} (Young-subgroup tasks or one-prime runs) read from the checkpoint ${this.file}`;
   }
 
-  /** Task indices of a plan not yet recorded. */
-  missingTasks(planLength: number): number[] {
-    return Array.from({ length: planLength }, (_, i) => i).filter((i) => !this.tasks.has(i));
+  /** The given task indices not yet recorded. */
+  missingTasks(tasks: readonly number[]): number[] {
+    return tasks.filter((i) => !this.tasks.has(i));
   }
 
   /** Put the recorded tasks' ranks into ranks[prime][task]. */

@@ -5,7 +5,7 @@
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
-import { closurePlan, type ClosureHooks, type DerivativeOps } from './derivative-closure.js';
+import { closurePlan, computedTasks, mirrorHolds, type ClosureHooks, type DerivativeOps } from './derivative-closure.js';
 import type { SeedChi } from './derivative-matrices.js';
 import type { RankWorkerData } from './rank-worker.js';
 import type { SeedSupport } from './seed-support.js';
@@ -25,9 +25,9 @@ export async function parallelRanks(
   threads = Math.min(2, availableParallelism()),
   tasks?: readonly number[],
 ): Promise<number[][][]> {
-  const plan = closurePlan(seed.space.n, chi);
-  const total = tasks?.length ?? plan.length;
-  const queue = [...(tasks ?? plan.map((_, i) => i))].sort((a, b) => groupOrder(plan[a]!.blocks) - groupOrder(plan[b]!.blocks));
+  const plan = closurePlan(seed.space.n, chi, mirrorHolds([seed], ops));
+  const queue = (tasks ?? computedTasks(plan)).filter((i) => plan[i]!.mirrorOf === undefined).sort((a, b) => groupOrder(plan[a]!.blocks) - groupOrder(plan[b]!.blocks));
+  const total = queue.length;
   const out = primes.map(() => plan.map(() => [] as number[]));
   const { space, ...rest } = seed;
   const data: RankWorkerData = { space: { n: space.n, hasY: space.hasY, hasTheta: space.hasTheta, radix: space.radix }, seed: rest, ops, chi, primes };

@@ -24,6 +24,11 @@ export interface YoungTask {
   readonly pairing: readonly number[];
   /** Short name for progress lines: "h5,2 e1,1". */
   readonly label: string;
+  /**
+   * Not computed: its rank in the cell of degree d is the rank of task `mirrorOf` in the cell
+   * of degree D − d (see youngPlan).
+   */
+  readonly mirrorOf?: number;
 }
 
 function factorial(k: number): number {
@@ -73,10 +78,20 @@ function rankOf(rows: readonly (readonly number[])[]): number {
   return rank;
 }
 
-const planCache = new Map<number, readonly YoungTask[]>();
+const planCache = new Map<string, readonly YoungTask[]>();
 
-export function youngPlan(n: number): readonly YoungTask[] {
-  const hit = planCache.get(n);
+/**
+ * With `mirrored`, every computed task h_μ e_ν also yields e_μ h_ν for free: for one seed f of
+ * multidegree D with sign character, under derivatives in every kind of variable f has, the
+ * matrix of degree d is the transpose of the matrix of degree D − d up to row and column
+ * scales and one global sign (the form (g, h) ↦ [g(∂)h(∂)f]_0 is symmetric; the θ signs
+ * multiply to (−1)^C(|θ-degree|,2)), and transposing swaps the roles of operators, whose
+ * character is twisted by the seed's sign, and targets. So
+ * ⟨Frob M_d, h_μ e_ν⟩ = ⟨Frob M_{D−d}, e_μ h_ν⟩, and the plan keeps such pairs together.
+ */
+export function youngPlan(n: number, mirrored = false): readonly YoungTask[] {
+  const cacheKey = `${n}|${mirrored}`;
+  const hit = planCache.get(cacheKey);
   if (hit) return hit;
   const candidates: { mu: Partition; nu: Partition; order: number }[] = [];
   for (let a = n; a >= 0; a--)
@@ -87,21 +102,31 @@ export function youngPlan(n: number): readonly YoungTask[] {
   const target = partitionList(n).length;
   const plan: YoungTask[] = [];
   const rows: number[][] = [];
-  for (const c of ranked) {
-    if (plan.length === target) break;
-    const row = pairingRow(c.mu, c.nu);
-    if (rankOf([...rows, row]) === rows.length) continue;
+  const taken = new Set<string>();
+  const add = (mu: Partition, nu: Partition, mirrorOf?: number): boolean => {
+    const label = [mu.length ? `h${mu.join(',')}` : '', nu.length ? `e${nu.join(',')}` : ''].filter(Boolean).join(' ');
+    if (plan.length === target || taken.has(label)) return false;
+    const row = pairingRow(mu, nu);
+    if (rankOf([...rows, row]) === rows.length) return false;
     rows.push(row);
+    taken.add(label);
     // large blocks first: the enumeration's strictness constraints then prune near the root
-    const blocks = [...c.mu.map((b) => [b, 'sym'] as const), ...c.nu.map((b) => [b, 'alt'] as const)].sort((x, y) => y[0] - x[0]);
+    const blocks = [...mu.map((b) => [b, 'sym'] as const), ...nu.map((b) => [b, 'alt'] as const)].sort((x, y) => y[0] - x[0]);
     plan.push({
       blocks: blocks.map(([b]) => b),
       modes: blocks.map(([, m]) => m),
       pairing: row,
-      label: [c.mu.length ? `h${c.mu.join(',')}` : '', c.nu.length ? `e${c.nu.join(',')}` : ''].filter(Boolean).join(' '),
+      label,
+      ...(mirrorOf === undefined ? {} : { mirrorOf }),
     });
+    return true;
+  };
+  for (const c of ranked) {
+    if (plan.length === target) break;
+    if (!add(c.mu, c.nu)) continue;
+    if (mirrored) add(c.nu, c.mu, plan.length - 1);
   }
-  planCache.set(n, plan);
+  planCache.set(cacheKey, plan);
   return plan;
 }
 

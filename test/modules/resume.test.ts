@@ -32,7 +32,7 @@ function counted(spec: ModuleSpec, options: ModuleOptions): { result: ModuleResu
   return { result, computed };
 }
 
-const young: ModuleSpec = { seed: 'superspace-vandermonde', n: 4, k: 2, ops: ['x', 'theta'] };
+const young: ModuleSpec = { seed: 'superspace-vandermonde', n: 5, k: 3, ops: ['x', 'theta'] }; // four computed tasks
 const fresh = counted(young, { frobenius: true });
 
 describe('checkpoint on the Young-subgroup route', () => {
@@ -110,7 +110,7 @@ describe('a checkpoint of another request', () => {
   it('is an InputError naming --resume and the differing fields', () => {
     const file = newFile();
     computeModule(young, { frobenius: true, checkpoint: file });
-    const other = (): unknown => computeModule({ ...young, k: 3 }, { frobenius: false, checkpoint: file });
+    const other = (): unknown => computeModule({ ...young, k: 2 }, { frobenius: false, checkpoint: file });
     expect(other).toThrow(InputError);
     expect(other).toThrow(/--resume: .* another request \(differs in .*spec.*frobenius/);
     expect(() => computeModule(young, { checkpoint: join(dir, 'no-such-dir', 'x.ckpt') })).toThrow(/--resume: cannot write/);

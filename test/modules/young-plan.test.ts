@@ -53,9 +53,26 @@ describe('subgroup plan', () => {
     }
   });
 
+  it('mirrored plans pair h_μ e_ν with e_μ h_ν, whose pairing is the conjugate one (ω, common practice)', () => {
+    for (let n = 2; n <= 9; n++) {
+      const plan = youngPlan(n, true);
+      const lambdas = partitionList(n);
+      const index = new Map(lambdas.map((l, i) => [partitionKey(l), i]));
+      expect(plan.length).toBe(lambdas.length);
+      for (const t of plan) {
+        if (t.mirrorOf === undefined) continue;
+        const src = plan[t.mirrorOf]!;
+        expect(src.mirrorOf).toBeUndefined();
+        lambdas.forEach((l, i) => expect(t.pairing[i]).toBe(src.pairing[index.get(partitionKey(conjugate(l)))!]));
+      }
+      // the mirrored tasks are free: at n = 9, 16 of 30 tasks are computed
+      if (n === 9) expect(plan.filter((t) => t.mirrorOf === undefined)).toHaveLength(16);
+    }
+  });
+
   it('has unimodular pairing matrices up to n = 9 (every dimension vector solves in integers)', () => {
     for (let n = 2; n <= 9; n++) {
-      const plan = youngPlan(n);
+      const plan = youngPlan(n, n % 2 === 0);
       plan.forEach((_, j) => expect(() => solveMultiplicities(n, plan, plan.map((__, i) => (i === j ? 1 : 0)))).not.toThrow());
     }
   });
