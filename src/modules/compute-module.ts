@@ -26,8 +26,8 @@ import { seedTerms, type SeedSpec } from './seeds.js';
 import { mergeRuns } from './merge-runs.js';
 import { parallelRanks } from './parallel-ranks.js';
 import type { YoungTask } from './young-plan.js';
-import { independentSeeds, polarizationReducible, polarizedSeeds } from './polarized-seeds.js';
-import type { SuperAlgebra } from './super-algebra.js';
+import { independentPolarizedSeeds, polarizationReducible } from './polarized-seeds.js';
+import type { SuperAlgebra, SuperPoly } from './super-algebra.js';
 
 export interface ModuleSpec extends SeedSpec {
   /** Operator family names: x, y, theta, polar1, polar2, … */
@@ -128,7 +128,7 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
       const chi = chiOf(sp.character);
       if (method === 'young' && !derivOnly) {
         const orders = ops.flatMap((o) => (o.kind === 'polar' ? [o.order] : []));
-        const seeds = independentSeeds(sp.alg as SuperAlgebra<number>, polarizedSeeds(sp.alg, sp.f, orders), p).map((g) => seedSupport(sp.alg.space, p, g));
+        const seeds = independentPolarizedSeeds(sp.alg as SuperAlgebra<number>, sp.f as SuperPoly<number>, orders, p);
         return cellsFromRanks(spec.n, degreeBox(seeds), chi, derivativeRanks(seeds, dops, chi, [p], p, hooks)[0]!, mirrorHolds(seeds, dops));
       }
       if (method === 'young') {

@@ -8,6 +8,7 @@
 import { EchelonModP } from './echelon-mod-p.js';
 import type { OperatorFamily } from './operators.js';
 import type { SuperAlgebra, SuperPoly } from './super-algebra.js';
+import { seedSupport, type SeedSupport } from './seed-support.js';
 
 /** True when the normal-ordering argument applies to this operator set. */
 export function polarizationReducible(ops: readonly OperatorFamily[]): boolean {
@@ -16,29 +17,18 @@ export function polarizationReducible(ops: readonly OperatorFamily[]): boolean {
   return ops.some((o) => o.kind === 'polar') && (hasX || !hasY);
 }
 
-/** Every nonzero P_J f for multisets J of the given orders (f itself for J empty). */
-export function polarizedSeeds<T>(alg: SuperAlgebra<T>, f: SuperPoly<T>, orders: readonly number[]): SuperPoly<T>[] {
-  const sorted = [...new Set(orders)].sort((a, b) => a - b);
-  const out: SuperPoly<T>[] = [];
-  const walk = (g: SuperPoly<T>, from: number): void => {
-    out.push(g);
-    for (let i = from; i < sorted.length; i++) {
-      const h = alg.polarization(g, sorted[i]!);
-      if (h.size > 0) walk(h, i);
-    }
-  };
-  walk(f, 0);
-  return out;
-}
-
 /**
- * Keep, in each multidegree, only seeds independent of those kept before (mod p): a seed in
- * the span of others adds nothing to the sum of derivative closures.
+ * The seeds P_J f (J a multiset of the given orders, f itself for J empty) that are
+ * independent, mod p, of those before them in their multidegree (a seed in the span of
+ * others adds nothing to the sum of derivative closures), as flat supports. Each P_J f is
+ * made from its parent and dropped once its subtree is done, so only one chain of
+ * polynomials is held at a time (δ_{7,4}: 147 seeds, 11 million terms).
  */
-export function independentSeeds(alg: SuperAlgebra<number>, seeds: readonly SuperPoly<number>[], p: number): SuperPoly<number>[] {
+export function independentPolarizedSeeds(alg: SuperAlgebra<number>, f: SuperPoly<number>, orders: readonly number[], p: number): SeedSupport[] {
+  const sorted = [...new Set(orders)].sort((a, b) => a - b);
   const groups = new Map<string, { ech: EchelonModP; index: Map<number, number> }>();
-  const kept: SuperPoly<number>[] = [];
-  for (const g of seeds) {
+  const kept: SeedSupport[] = [];
+  const independent = (g: SuperPoly<number>): boolean => {
     const key = alg.space.degrees(g.keys().next().value as number).join(',');
     let grp = groups.get(key);
     if (!grp) {
@@ -56,7 +46,15 @@ export function independentSeeds(alg: SuperAlgebra<number>, seeds: readonly Supe
       cols.push(c);
       vals.push(v);
     }
-    if (grp.ech.insert(cols, vals, cols.length)) kept.push(g);
-  }
+    return grp.ech.insert(cols, vals, cols.length);
+  };
+  const walk = (g: SuperPoly<number>, from: number): void => {
+    if (independent(g)) kept.push(seedSupport(alg.space, p, g));
+    for (let i = from; i < sorted.length; i++) {
+      const h = alg.polarization(g, sorted[i]!);
+      if (h.size > 0) walk(h, i);
+    }
+  };
+  walk(f, 0);
   return kept;
 }
