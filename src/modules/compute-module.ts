@@ -86,7 +86,8 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
 
   const probe = buildSeedPolynomial(spec.n, terms, primeCoeffs(p1), needs);
   const probeSupport = seedSupport(probe.alg.space, p1, probe.f);
-  const est = estimateModuleWork(probeSupport, ops, method !== 'young' ? 'iterated' : derivOnly ? 'young' : 'polarized');
+  const derivFamilies = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
+  const est = estimateModuleWork(probeSupport, ops, method !== 'young' ? 'iterated' : derivOnly ? 'young' : 'polarized', probe.character === 'sign' && mirrorHolds([probeSupport], derivFamilies));
   options.onEstimate?.(est.units, est.seconds);
   const limit = method === 'exact' ? EXACT_MAX_WORK : options.maxWork ?? DEFAULT_MAX_WORK;
   if (est.units > limit) {
@@ -112,7 +113,7 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
     field = 'Q';
     methodText = 'closure over Q in reduced echelon form; characters by traces on the echelon basis';
   } else {
-    const dops = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
+    const dops = derivFamilies;
     const chiOf = (c: string): -1 | 0 | 1 => (c === 'sign' ? -1 : c === 'trivial' ? 1 : 0);
     const hooks = { onProgress: options.onProgress, signal: options.signal };
     const cache = new Map<number, readonly ModuleCell[]>(options.precomputed ?? []);
@@ -216,13 +217,13 @@ export async function computeModuleAsync(spec: ModuleSpec, options: ModuleOption
   const probe = buildSeedPolynomial(spec.n, terms, primeCoeffs(p1), needs);
   const support = seedSupport(probe.alg.space, p1, probe.f);
   const young = (method === 'auto' || method === 'young') && (derivOnly || polarizationReducible(ops));
-  const est = estimateModuleWork(support, ops, !young ? 'iterated' : derivOnly ? 'young' : 'polarized');
+  const chi = probe.character === 'sign' ? -1 : probe.character === 'trivial' ? 1 : 0;
+  const dops = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
+  const est = estimateModuleWork(support, ops, !young ? 'iterated' : derivOnly ? 'young' : 'polarized', chi === -1 && mirrorHolds([support], dops));
   const limit = options.maxWork ?? DEFAULT_MAX_WORK;
   if (est.seconds < (options.parallelAboveSeconds ?? PARALLEL_THRESHOLD_SECONDS) || est.units > limit) return computeModule(spec, options);
   options.onEstimate?.(est.units, est.seconds);
   const quiet = { ...options, onEstimate: undefined, checkpoint: undefined };
-  const chi = probe.character === 'sign' ? -1 : probe.character === 'trivial' ? 1 : 0;
-  const dops = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
   // the same header as the synchronous route writes for this request
   const cp = options.checkpoint !== undefined ? openCheckpoint(options.checkpoint, spec, options, [p1, p2], closurePlan(spec.n, chi, mirrorHolds([support], dops))) : undefined;
   const t0 = performance.now();

@@ -30,7 +30,7 @@ export interface ModuleWork {
  * Routes: 'young' (derivative closures), 'polarized' (polarizations normal-ordered into the
  * derivative closures of the seeds P_J f), 'iterated' (anything else).
  */
-export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFamily[], route: 'young' | 'polarized' | 'iterated'): ModuleWork {
+export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFamily[], route: 'young' | 'polarized' | 'iterated', mirrored = false): ModuleWork {
   const n = seed.space.n;
   if (route === 'polarized') {
     // one derivative closure per candidate seed P_J f: the multisets J of the polarization
@@ -50,7 +50,8 @@ export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFami
     const units = (steps * SECONDS_PER_UNIT_POLAR) / SECONDS_PER_UNIT;
     return { units, seconds: units * SECONDS_PER_UNIT };
   }
-  const plan = youngPlan(n);
+  // mirrored tasks (young-plan) cost nothing
+  const plan = youngPlan(n, mirrored).filter((t) => t.mirrorOf === undefined);
   let shrink = 0;
   for (const t of plan) shrink += 1 / groupOrder(t.blocks);
   const units = seed.count * boxes * shrink;
