@@ -26,8 +26,17 @@ export async function parallelRanks(
   tasks?: readonly number[],
 ): Promise<number[][][]> {
   const plan = closurePlan(seed.space.n, chi, mirrorHolds([seed], ops));
-  const queue = (tasks ?? computedTasks(plan)).filter((i) => plan[i]!.mirrorOf === undefined).sort((a, b) => groupOrder(plan[a]!.blocks) - groupOrder(plan[b]!.blocks));
-  const total = queue.length;
+  const order = (tasks ?? computedTasks(plan)).filter((i) => plan[i]!.mirrorOf === undefined).sort((a, b) => groupOrder(plan[a]!.blocks) - groupOrder(plan[b]!.blocks));
+  const total = order.length;
+  // A task far heavier than the rest would run alone at the end: such tasks (cost taken as
+  // |G|^-3, the eliminations' share) go out one prime per item, the enumeration repeated.
+  const cost = (t: number): number => groupOrder(plan[t]!.blocks) ** -3;
+  const sum = order.reduce((s, t) => s + cost(t), 0);
+  const all = primes.map((_, pi) => pi);
+  const queue: { task: number; primes: number[] }[] = order.flatMap((task) =>
+    primes.length > 1 && cost(task) > sum / (2 * threads) ? all.map((pi) => ({ task, primes: [pi] })) : [{ task, primes: all }],
+  );
+  const partial = new Map<number, number>(); // task -> primes still missing
   const out = primes.map(() => plan.map(() => [] as number[]));
   const { space, ...rest } = seed;
   const data: RankWorkerData = { space: { n: space.n, hasY: space.hasY, hasTheta: space.hasTheta, radix: space.radix }, seed: rest, ops, chi, primes };
@@ -44,15 +53,19 @@ export async function parallelRanks(
               reject(hooks.signal.reason ?? new Error('aborted'));
               return;
             }
-            const t = queue.shift();
-            w.postMessage(t === undefined ? null : t);
-            if (t === undefined) resolve();
+            const item = queue.shift();
+            w.postMessage(item ?? null);
+            if (item === undefined) resolve();
           };
-          w.on('message', (msg: { task: number; ranks: number[][] }) => {
-            msg.ranks.forEach((r, pi) => (out[pi]![msg.task] = r));
-            hooks.onTask?.(msg.task, msg.ranks);
-            done++;
-            hooks.onProgress?.(done, total, `task ${plan[msg.task]!.label}`);
+          w.on('message', (msg: { task: number; primes: number[]; ranks: number[][] }) => {
+            msg.primes.forEach((pi, j) => (out[pi]![msg.task] = msg.ranks[j]!));
+            const missing = (partial.get(msg.task) ?? primes.length) - msg.primes.length;
+            partial.set(msg.task, missing);
+            if (missing === 0) {
+              hooks.onTask?.(msg.task, out.map((perPrime) => perPrime[msg.task]!));
+              done++;
+              hooks.onProgress?.(done, total, `task ${plan[msg.task]!.label}`);
+            }
             next();
           });
           w.on('error', reject);

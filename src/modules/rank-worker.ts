@@ -1,6 +1,7 @@
 /**
  * Worker body for parallel Young-subgroup ranks: rebuilds the seed support from the shared
- * typed arrays, then answers one task index at a time with its ranks for every prime.
+ * typed arrays, then answers one task at a time with its ranks for the primes asked (indices
+ * into the primes given).
  */
 import { parentPort, workerData } from 'node:worker_threads';
 import { derivativeRanks, type DerivativeOps } from './derivative-closure.js';
@@ -18,11 +19,12 @@ export interface RankWorkerData {
 
 const data = workerData as RankWorkerData;
 const seed: SeedSupport = { ...data.seed, space: new SuperSpace(data.space.n, data.space.hasY, data.space.hasTheta, data.space.radix) };
-parentPort!.on('message', (task: number | null) => {
-  if (task === null) {
+parentPort!.on('message', (item: { task: number; primes: number[] } | null) => {
+  if (item === null) {
     parentPort!.close();
     return;
   }
-  const ranks = derivativeRanks([seed], data.ops, data.chi, data.primes, 0, {}, [task]);
-  parentPort!.postMessage({ task, ranks: ranks.map((perPrime) => perPrime[task]!) });
+  const { task, primes } = item;
+  const ranks = derivativeRanks([seed], data.ops, data.chi, primes.map((pi) => data.primes[pi]!), 0, {}, [task]);
+  parentPort!.postMessage({ task, primes, ranks: ranks.map((perPrime) => perPrime[task]!) });
 });
