@@ -1,7 +1,7 @@
 /**
- * Young-subgroup ranks on both cores: worker threads take tasks from a queue (largest
- * groups' complements first, i.e. the costliest first), each computing every prime.
- * Only for exact-integer seeds (one enumeration per task serves all primes).
+ * Subgroup ranks on both cores: worker threads take tasks from a queue, smallest groups (the
+ * costliest) first, each computing every prime from one enumeration, except a task heavy
+ * enough to finish alone, which is split by prime. Only for exact-integer seeds.
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
