@@ -43,7 +43,10 @@ export class KeyTable {
       this.touchedLen = 0;
       return;
     }
-    this.keys.fill(EMPTY);
+    // a fresh small table: refilling a grown one for every seed costs more than regrowing
+    this.keys = new Float64Array(1024).fill(EMPTY);
+    this.values = new Int32Array(1024);
+    this.mask = 1023;
     this.count = 0;
   }
 

@@ -20,6 +20,17 @@ describe('KeyTable', () => {
     );
   });
 
+  it('clear() forgets every key, flat or hashed', () => {
+    for (const bound of [1000, Number.POSITIVE_INFINITY]) {
+      const t = new KeyTable(bound);
+      for (let k = 0; k < 900; k++) t.set(k, k + 1);
+      t.clear();
+      for (let k = 0; k < 900; k++) expect(t.get(k)).toBe(-2);
+      t.set(5, 7);
+      expect(t.get(5)).toBe(7);
+    }
+  });
+
   it('uses a flat array below the limit and answers −2 for absent keys', () => {
     const t = new KeyTable(100);
     expect(t.array).toBeDefined();
