@@ -3,7 +3,9 @@
  * (design note): for each seed term γ, every S_μ-orbit representative of one side — the
  * operator monomial ∂x^α ∂y^β ∂θ_T or the target γ − g, whichever has strict representatives —
  * contributes c(γ)·Π γ!/(γ−α)!·(θ sign)·(fold sign) at (row = operator class, column = target
- * class); the other side is folded. No derivative is stored. Several seeds (all
+ * class); the other side is folded (sorted block by block as the enumeration completes each
+ * block), and both are numbered through compact orbit codes (block-code.ts). Each block of
+ * the task may carry its own character (young-plan). No derivative is stored. Several seeds (all
  * (anti)symmetric alike) may feed the same matrices: their closures add up (polarized
  * closures normal-order into derivatives of polarized seeds). Values are exact integers
  * (modulus 0, the caller guarantees |entries| < 2^53) or residues mod `modulus`. Cells are
