@@ -19,7 +19,7 @@ import type { ModuleCell } from './module-cell.js';
 import { ModuleCheckpoint } from './module-checkpoint.js';
 import type { Axis, ModuleResult } from './module-result.js';
 import { estimateModuleWork } from './module-cost.js';
-import { familyName, isDerivativeOnly, parseOperatorFamilies } from './operators.js';
+import { derivativeFamilies, familyName, isDerivativeOnly, parseOperatorFamilies } from './operators.js';
 import { buildSeedPolynomial } from './seed-polynomial.js';
 import { seedSupport } from './seed-support.js';
 import { seedTerms, type SeedSpec } from './seeds.js';
@@ -86,8 +86,9 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
 
   const probe = buildSeedPolynomial(spec.n, terms, primeCoeffs(p1), needs);
   const probeSupport = seedSupport(probe.alg.space, p1, probe.f);
-  const derivFamilies = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
-  const est = estimateModuleWork(probeSupport, ops, method !== 'young' ? 'iterated' : derivOnly ? 'young' : 'polarized', probe.character === 'sign' && mirrorHolds([probeSupport], derivFamilies));
+  const dops = derivativeFamilies(ops);
+  const mirrored = mirrorHolds([probeSupport], dops); // one seed, same degree for every prime
+  const est = estimateModuleWork(probeSupport, ops, method !== 'young' ? 'iterated' : derivOnly ? 'young' : 'polarized', probe.character === 'sign' && mirrored);
   options.onEstimate?.(est.units, est.seconds);
   const limit = method === 'exact' ? EXACT_MAX_WORK : options.maxWork ?? DEFAULT_MAX_WORK;
   if (est.units > limit) {
@@ -113,12 +114,10 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
     field = 'Q';
     methodText = 'closure over Q in reduced echelon form; characters by traces on the echelon basis';
   } else {
-    const dops = derivFamilies;
     const chiOf = (c: string): -1 | 0 | 1 => (c === 'sign' ? -1 : c === 'trivial' ? 1 : 0);
     const hooks = { onProgress: options.onProgress, signal: options.signal };
     const cache = new Map<number, readonly ModuleCell[]>(options.precomputed ?? []);
     const exactSeed = method === 'young' && derivOnly ? integerSeedSupport(probeSupport, terms) : undefined;
-    const mirrored = mirrorHolds([probeSupport], dops); // one seed, same degree for every prime
     if (exactSeed) notes.push('matrix entries are exact integers below 2^53: one enumeration serves both primes');
     const cp =
       options.checkpoint !== undefined && !options.onePrime ? openCheckpoint(options.checkpoint, spec, options, [p1, p2], closurePlan(spec.n, chiOf(probe.character), mirrored)) : undefined;
@@ -218,7 +217,7 @@ export async function computeModuleAsync(spec: ModuleSpec, options: ModuleOption
   const support = seedSupport(probe.alg.space, p1, probe.f);
   const young = (method === 'auto' || method === 'young') && (derivOnly || polarizationReducible(ops));
   const chi = probe.character === 'sign' ? -1 : probe.character === 'trivial' ? 1 : 0;
-  const dops = { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
+  const dops = derivativeFamilies(ops);
   const est = estimateModuleWork(support, ops, !young ? 'iterated' : derivOnly ? 'young' : 'polarized', chi === -1 && mirrorHolds([support], dops));
   const limit = options.maxWork ?? DEFAULT_MAX_WORK;
   if (est.seconds < (options.parallelAboveSeconds ?? PARALLEL_THRESHOLD_SECONDS) || est.units > limit) return computeModule(spec, options);

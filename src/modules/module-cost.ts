@@ -7,7 +7,7 @@
  * S_n-orbits of the divisors of the seed's terms, counted exactly from one term per orbit,
  * and each task divides both sides by its group order.
  */
-import type { OperatorFamily } from './operators.js';
+import { derivativeFamilies, type OperatorFamily } from './operators.js';
 import type { SeedSupport } from './seed-support.js';
 import { groupOrder, youngPlan } from './young-plan.js';
 
@@ -55,7 +55,7 @@ export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFami
   let shrink = 0;
   for (const t of plan) shrink += 1 / groupOrder(t.blocks);
   const units = seed.count * boxes * shrink;
-  const sizes = cellSizes(seed, { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') });
+  const sizes = cellSizes(seed, derivativeFamilies(ops));
   let elimination = 0;
   for (const t of plan) {
     const g = groupOrder(t.blocks);

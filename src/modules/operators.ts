@@ -32,6 +32,11 @@ export function parseOperatorFamilies(names: readonly string[]): OperatorFamily[
   return out;
 }
 
+/** Which derivative families are among the operators. */
+export function derivativeFamilies(ops: readonly OperatorFamily[]): { x: boolean; y: boolean; theta: boolean } {
+  return { x: ops.some((o) => o.kind === 'x'), y: ops.some((o) => o.kind === 'y'), theta: ops.some((o) => o.kind === 'theta') };
+}
+
 export function isDerivativeOnly(ops: readonly OperatorFamily[]): boolean {
   return ops.every((o) => o.kind !== 'polar');
 }

@@ -9,12 +9,7 @@ import { closurePlan, computedTasks, mirrorHolds, type ClosureHooks, type Deriva
 import type { SeedChi } from './derivative-matrices.js';
 import type { RankWorkerData } from './rank-worker.js';
 import type { SeedSupport } from './seed-support.js';
-
-function groupOrder(blocks: readonly number[]): number {
-  let s = 1;
-  for (const b of blocks) for (let i = 2; i <= b; i++) s *= i;
-  return s;
-}
+import { groupOrder } from './young-plan.js';
 
 export async function parallelRanks(
   seed: SeedSupport,

@@ -10,6 +10,7 @@
  * gives m_{6111} + m_{51111}, where S_{51111} has order 120). The multiplicities are then
  * the exact solution of the integer system.
  */
+import { factorial } from '../core/integers.js';
 import { conjugate, partitionKey, partitionList, partitions, type Partition } from '../core/partitions.js';
 import { kostkaNumber } from '../symfun/kostka.js';
 import { lrProduct } from '../symfun/littlewood-richardson.js';
@@ -31,14 +32,8 @@ export interface YoungTask {
   readonly mirrorOf?: number;
 }
 
-function factorial(k: number): number {
-  let s = 1;
-  for (let i = 2; i <= k; i++) s *= i;
-  return s;
-}
-
 export function groupOrder(blocks: readonly number[]): number {
-  return blocks.reduce((s, b) => s * factorial(b), 1);
+  return blocks.reduce((s, b) => s * Number(factorial(b)), 1);
 }
 
 /** ⟨s_λ, h_μ e_ν⟩ = Σ_{κ, ρ} K_{κμ} K_{ρ'ν} c^λ_{κρ}, for every λ ⊢ |μ| + |ν|. */
