@@ -8,7 +8,7 @@
 import { mkdtempSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { silentProgress } from '../src/cli/progress.js';
+import { silentProgress } from '../src/core/progress.js';
 import { Poly } from '../src/core/poly.js';
 import { qBinomial, qFactorial, qOrderedStirling } from '../src/core/qanalogs.js';
 import { recognise } from '../src/match/recognise.js';

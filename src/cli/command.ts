@@ -2,7 +2,7 @@
  * The shape of a command-line command. Each command lives in its own file under
  * src/cli/commands and is listed in src/cli/commands/index.ts.
  */
-import type { Progress } from './progress.js';
+import type { Progress } from '../core/progress.js';
 
 export type OptionType = 'string' | 'int' | 'flag' | 'list';
 

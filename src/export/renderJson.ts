@@ -1,5 +1,5 @@
 /** An export as JSON: our versioned schema "gradus-export" (version 1), with provenance. */
-import { toJsonText } from '../cli/json-output.js';
+import { toJsonText } from '../core/json-text.js';
 import { seriesToJson } from '../series/seriesJson.js';
 import type { ExportModel } from './exportModel.js';
 

@@ -4,7 +4,7 @@
  */
 import { InputError } from '../core/errors.js';
 import type { CommandIO } from '../cli/command.js';
-import { silentProgress } from '../cli/progress.js';
+import { silentProgress } from '../core/progress.js';
 import { seriesFromDocument, type Take } from '../series/fromDocument.js';
 import { makeTarget, type Target, type TargetEntry } from '../series/target.js';
 

@@ -3,7 +3,7 @@
  * keeps every finished unit and nothing of the unit under way; running again resumes).
  */
 import { LimitError } from '../core/errors.js';
-import type { Progress } from '../cli/progress.js';
+import type { Progress } from '../core/progress.js';
 import type { Catalogue } from './catalogue.js';
 import { planUnits, statsSignature, type Unit } from './planUnits.js';
 import { provenance } from './provenance.js';

@@ -8,7 +8,7 @@ import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import { InputError } from '../core/errors.js';
-import { toJsonText } from '../cli/json-output.js';
+import { toJsonText } from '../core/json-text.js';
 import { seriesFromJson, seriesToJson } from '../series/seriesJson.js';
 import { seriesAtOne, type Series, type SeriesKind } from '../series/series.js';
 import { MIGRATIONS, SCHEMA_VERSION } from './migrations.js';

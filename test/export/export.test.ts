@@ -3,7 +3,7 @@ import { existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { silentProgress } from '../../src/cli/progress.js';
+import { silentProgress } from '../../src/core/progress.js';
 import { atomicWrite } from '../../src/export/atomicWrite.js';
 import { exportModel } from '../../src/export/exportModel.js';
 import { latexText } from '../../src/export/latexText.js';

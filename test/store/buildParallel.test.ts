@@ -2,7 +2,7 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { silentProgress } from '../../src/cli/progress.js';
+import { silentProgress } from '../../src/core/progress.js';
 import { buildCatalogue } from '../../src/store/buildCatalogue.js';
 import { buildCatalogueParallel } from '../../src/store/buildParallel.js';
 import { Catalogue } from '../../src/store/catalogue.js';

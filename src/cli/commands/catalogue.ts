@@ -6,7 +6,7 @@ import { buildCatalogueParallel } from '../../store/buildParallel.js';
 import { Catalogue } from '../../store/catalogue.js';
 import { cataloguePath } from '../../store/cataloguePath.js';
 import { flagOpt, intOpt, listOpt, strOpt, type CommandSpec, type ParsedArgs } from '../command.js';
-import { toJsonText } from '../json-output.js';
+import { toJsonText } from '../../core/json-text.js';
 
 const ACTIONS = ['build', 'rebuild', 'info'] as const;
 const DEFAULT_REBUILD_N = 6;

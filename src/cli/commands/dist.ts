@@ -10,7 +10,7 @@ import type { Poly } from '../../core/poly.js';
 import { computeDistribution, DEFAULT_MAX_OBJECTS, paramsText, type Distribution } from '../../enumerate/distribution.js';
 import type { FrobeniusKind } from '../../enumerate/request.js';
 import { flagOpt, intOpt, strOpt, type CommandSpec, type ParsedArgs } from '../command.js';
-import { qtTableJson, toJsonText } from '../json-output.js';
+import { qtTableJson, toJsonText } from '../../core/json-text.js';
 import { familyParams, FAMILY_PARAM_OPTIONS } from './show.js';
 
 function seriesJson(p: Poly, two: boolean): unknown {

@@ -4,7 +4,7 @@ import { transformsFrom } from '../../../objects/transforms/index.js';
 import { statisticsOfFamily } from '../../../statistics/index.js';
 import type { ParamSpec } from '../../enumerate/plugin.js';
 import type { CommandSpec } from '../command.js';
-import { toJsonText } from '../json-output.js';
+import { toJsonText } from '../../core/json-text.js';
 
 function paramText(p: ParamSpec): string {
   const range = p.kind === 'int' ? `${p.min ?? 0}..${p.max ?? '∞'}` : p.kind === 'partition' ? `partition, size ≤ ${p.max ?? '∞'}` : `list, sum ≤ ${p.max ?? '∞'}`;

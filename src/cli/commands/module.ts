@@ -3,9 +3,9 @@ import { computeModuleAsync, DEFAULT_MAX_WORK } from '../../modules/compute-modu
 import { resultToJson, resultToText } from '../../modules/format-result.js';
 import { SEED_NAMES } from '../../modules/seeds.js';
 import { MODULE_METHODS as METHODS, moduleRequestFromArgs } from '../module-request.js';
-import { formatDuration } from '../progress.js';
+import { formatDuration } from '../../core/progress.js';
 import { flagOpt, type CommandSpec } from '../command.js';
-import { toJsonText } from '../json-output.js';
+import { toJsonText } from '../../core/json-text.js';
 
 export const moduleCommand: CommandSpec = {
   name: 'module',

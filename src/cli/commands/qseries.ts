@@ -4,7 +4,7 @@ import type { Poly } from '../../core/poly.js';
 import { qBinomial, qFactorial, qInteger, qMultinomial, qOrderedStirling, qStirling2 } from '../../core/qanalogs.js';
 import { unknownNameMessage } from '../../core/suggest.js';
 import { intOpt, listOpt, type CommandSpec, type ParsedArgs } from '../command.js';
-import { toJsonText } from '../json-output.js';
+import { toJsonText } from '../../core/json-text.js';
 
 interface QSeriesKind {
   readonly name: string;

@@ -4,7 +4,7 @@ import { computeQuotient } from '../../modules/compute-quotient.js';
 import { resultToJson, resultToText } from '../../modules/format-result.js';
 import { checkIdealName, IDEAL_NAMES } from '../../modules/ideals.js';
 import { flagOpt, intOpt, listOpt, strOpt, type CommandSpec } from '../command.js';
-import { toJsonText } from '../json-output.js';
+import { toJsonText } from '../../core/json-text.js';
 
 export const quotientCommand: CommandSpec = {
   name: 'quotient',

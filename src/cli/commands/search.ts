@@ -16,7 +16,7 @@ import { cataloguePath } from '../../store/cataloguePath.js';
 import { commandResultCache } from '../../store/commandResultCache.js';
 import { provenance } from '../../store/provenance.js';
 import { flagOpt, intOpt, strOpt, type CommandIO, type CommandSpec, type ParsedArgs } from '../command.js';
-import { toJsonText } from '../json-output.js';
+import { toJsonText } from '../../core/json-text.js';
 import { CATALOGUE_OPTION } from './catalogue.js';
 
 const N_MAX = 12;

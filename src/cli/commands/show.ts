@@ -12,7 +12,7 @@ import { unknownNameMessage } from '../../core/suggest.js';
 import type { Family, Params, Statistic } from '../../enumerate/plugin.js';
 import { statisticsOfFamily } from '../../../statistics/index.js';
 import { flagOpt, intOpt, listOpt, type OptionSpec, type ParsedArgs, type CommandSpec } from '../command.js';
-import { toJsonText } from '../json-output.js';
+import { toJsonText } from '../../core/json-text.js';
 
 /** The options that carry family parameters (each family uses some of them). */
 export const FAMILY_PARAM_OPTIONS: readonly OptionSpec[] = [

@@ -2,7 +2,7 @@
 import { familyById } from '../../../objects/index.js';
 import { STATISTICS } from '../../../statistics/index.js';
 import { strOpt, type CommandSpec } from '../command.js';
-import { toJsonText } from '../json-output.js';
+import { toJsonText } from '../../core/json-text.js';
 
 export const statisticsCommand: CommandSpec = {
   name: 'statistics',

@@ -7,7 +7,7 @@ import { MACDONALD_MAX_N } from '../../symfun/macdonald.js';
 import { formatLatex, formatText, integralCoefficients } from '../../symfun/sym-format.js';
 import { BASES, type Basis } from '../../symfun/transitions.js';
 import { flagOpt, intOpt, strOpt, type CommandSpec } from '../command.js';
-import { qtTableJson, toJsonText } from '../json-output.js';
+import { qtTableJson, toJsonText } from '../../core/json-text.js';
 
 const BASIS_WORDS: Record<Basis, string> = { s: 'Schur', m: 'monomial', e: 'elementary', h: 'complete homogeneous', p: 'power sum' };
 

@@ -1,6 +1,6 @@
 import { VERSION } from '../../version.js';
 import type { CommandSpec } from '../command.js';
-import { toJsonText } from '../json-output.js';
+import { toJsonText } from '../../core/json-text.js';
 
 export const versionCommand: CommandSpec = {
   name: 'version',

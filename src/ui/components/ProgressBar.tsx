@@ -1,6 +1,6 @@
 /** A progress bar with done/total, percentage and an estimate of the time left. */
 import { Text } from 'ink';
-import { formatCount, formatDuration } from '../../cli/progress.js';
+import { formatCount, formatDuration } from '../../core/progress.js';
 import { useTheme } from '../ThemeContext.js';
 
 export interface ProgressState {

@@ -5,7 +5,7 @@
  */
 import { existsSync } from 'node:fs';
 import { InputError } from '../../core/errors.js';
-import { toJsonText } from '../../cli/json-output.js';
+import { toJsonText } from '../../core/json-text.js';
 import { atomicWrite } from '../../export/atomicWrite.js';
 import { exportModel } from '../../export/exportModel.js';
 import { renderJson } from '../../export/renderJson.js';

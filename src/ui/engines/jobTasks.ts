@@ -93,7 +93,7 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
   // The same engine entry as `gradus sym`; text in the Schur basis, JSON as --json prints it.
   sym: async (input, progress) => {
     const [{ qtTableJson }, { schurSeries }, { seriesToJson }, { evaluateExpression }, { formatText, integralCoefficients }] = await Promise.all([
-      import('../../cli/json-output.js'),
+      import('../../core/json-text.js'),
       import('../../series/series.js'),
       import('../../series/seriesJson.js'),
       import('../../symfun/expression.js'),

@@ -3,8 +3,8 @@
  * coefficients (index = power of q); in q and t an array of arrays ([i][j] = coefficient
  * of q^i t^j); integers beyond 2^53 are strings.
  */
-import { bigToJson } from '../core/integers.js';
-import { Poly } from '../core/poly.js';
+import { bigToJson } from './integers.js';
+import { Poly } from './poly.js';
 
 /** JSON.stringify that writes BigInt per the convention and Poly as its coefficient array(s). */
 export function toJsonText(value: unknown): string {
