@@ -45,7 +45,7 @@ const targets: [string, Target][] = [
   ['[n choose k]_q (n ≤ 7, all k)', makeTarget('q-binomials', range.flatMap((n) => range.filter((k) => k <= n).map((k) => ({ n, k, series: qSeries(qBinomial(n, k)) }))))],
   ['a typed series nothing explains (n ≤ 7)', makeTarget('none', range.map((n) => ({ n, series: qtSeries(Poly.fromQCoeffs([1, 0, n * n + 3, 2, 1])) })))],
 ];
-cat = Catalogue.open(path, { readonly: true });
+cat = Catalogue.open(path, { existing: true });
 for (const [name, t] of targets) {
   searchCatalogue(cat, t); // warm the page cache and statements
   const reps = 5;

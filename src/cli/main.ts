@@ -8,8 +8,14 @@ import { VERSION } from '../version.js';
 import type { CommandIO } from './command.js';
 import { COMMAND_NAMES, loadAllCommands, loadCommand } from './commands/index.js';
 import { commandHelp, mainHelp } from './help.js';
-import { parseArgs } from './parse-args.js';
+import { parseCommandArgs } from './parse-args.js';
+import { environmentReason } from '../core/environment-errors.js';
 import { stderrProgress } from './progress.js';
+
+/** A message on one line: its line breaks become "; " (a multi-line error keeps every part). */
+function oneLine(text: string): string {
+  return text.split(/\r?\n/).map((l) => l.trim()).filter(Boolean).join('; ');
+}
 
 export function defaultIO(): CommandIO {
   return {
@@ -53,13 +59,19 @@ export async function main(argv: readonly string[], io: CommandIO = defaultIO())
       io.out(commandHelp(spec));
       return 0;
     }
-    const args = parseArgs(spec, rest);
+    const args = parseCommandArgs(spec, rest);
     await spec.run(args, io);
     return 0;
   } catch (e) {
     io.progress.finish();
     if (isUserError(e)) {
-      io.err(`gradus: ${e.message.split('\n')[0]}`);
+      io.err(`gradus: ${oneLine(e.message)}`);
+      return 2;
+    }
+    // the machine, not gradus: a full disk, a read-only place, a file that cannot be read
+    const why = environmentReason(e);
+    if (why) {
+      io.err(`gradus: ${why}${(e as { path?: string }).path ? ` (${(e as { path?: string }).path})` : ''}: ${oneLine((e as Error).message ?? String(e))}`);
       return 2;
     }
     const msg = e instanceof Error ? e.message : String(e);

@@ -33,3 +33,22 @@ export function stderrProgress(write: (s: string) => void, isTTY: boolean, delay
     },
   };
 }
+
+/**
+ * The request model's progress callback drawn on a Progress: a new bar when the total
+ * changes or the count goes back (a new phase), else an update.
+ */
+export function progressReporter(progress: Progress): (label: string, done: number, total?: number) => void {
+  let started = false;
+  let lastTotal: number | undefined;
+  let lastDone = 0;
+  return (label, done, total) => {
+    if (!started || total !== lastTotal || done < lastDone) {
+      progress.start(label, total);
+      started = true;
+      lastTotal = total;
+    }
+    lastDone = done;
+    progress.update(done);
+  };
+}

@@ -1,4 +1,8 @@
 /** "Did you mean" suggestions for unknown names, by edit distance. */
+import { shown } from './shown.js';
+
+/** Names longer than this get no suggestion (the distance table grows with the product of lengths). */
+const SUGGEST_MAX = 100;
 
 export function editDistance(a: string, b: string): number {
   const d = Array.from({ length: a.length + 1 }, (_, i) => [i, ...new Array<number>(b.length).fill(0)]);
@@ -14,6 +18,7 @@ export function editDistance(a: string, b: string): number {
 
 /** The candidates nearest to name (prefix matches first), at most `count`. */
 export function nearest(name: string, candidates: readonly string[], count = 3): string[] {
+  if (name.length > SUGGEST_MAX) return [];
   const lower = name.toLowerCase();
   return [...candidates]
     .map((c) => ({
@@ -28,5 +33,5 @@ export function nearest(name: string, candidates: readonly string[], count = 3):
 /** A message such as `unknown family "perm" (nearest: permutations, …)`. */
 export function unknownNameMessage(kind: string, name: string, candidates: readonly string[]): string {
   const near = nearest(name, candidates);
-  return `unknown ${kind} "${name}"` + (near.length ? ` (nearest: ${near.join(', ')})` : '');
+  return `unknown ${kind} "${shown(name, 60)}"` + (near.length ? ` (nearest: ${near.join(', ')})` : '');
 }

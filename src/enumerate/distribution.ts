@@ -8,7 +8,7 @@
 import { availableParallelism } from 'node:os';
 import { LimitError } from '../core/errors.js';
 import type { Poly } from '../core/poly.js';
-import { VERSION } from '../version.js';
+import { makeProvenance, type Provenance } from '../core/provenance.js';
 import { descentSetOfKey } from './descent-key.js';
 import { runParallel } from './parallel.js';
 import type { Params } from './plugin.js';
@@ -48,7 +48,7 @@ export interface Distribution {
   readonly series: Poly;
   readonly count: bigint;
   readonly frobenius?: { readonly kind: FrobeniusKind; readonly n?: number; readonly terms: readonly FrobeniusTerm[] };
-  readonly provenance: { readonly method: string; readonly workers: number; readonly ms: number; readonly version: string };
+  readonly provenance: Provenance;
 }
 
 export async function computeDistribution(request: DistRequest, options: DistOptions = {}): Promise<Distribution> {
@@ -105,12 +105,11 @@ export async function computeDistribution(request: DistRequest, options: DistOpt
     series: series.toPoly(),
     count: expected,
     ...(frobenius ? { frobenius } : {}),
-    provenance: {
+    provenance: makeProvenance({
+      request: `${family.id} ${paramsText(request.params)}`,
       method: `exhaustive enumeration (${walkOf(resolved) ? 'prefix walk with per-step increments' : family.visit ? 'reused-buffer visit' : 'stream'}${workers > 1 ? `, ${workers} worker threads` : ''})`,
-      workers,
-      ms: Math.round(performance.now() - t0),
-      version: VERSION,
-    },
+      seconds: (performance.now() - t0) / 1000,
+    }),
   };
 }
 

@@ -67,6 +67,6 @@ export function renderLatex(m: ExportModel): string {
   L.push(`\\begin{tabular}{${hasK ? 'rr' : 'r'}p{0.62\\linewidth}r}`, `$n$ & ${hasK ? '$k$ & ' : ''}series & at $1$ \\\\ \\hline`);
   for (const e of m.table) L.push(`${e.n} & ${hasK ? `${e.k ?? ''} & ` : ''}$${seriesLatex(e.series)}$ & ${e.count} \\\\`);
   L.push('\\end{tabular}', '');
-  L.push('\\subsection*{Provenance}', `Search: ${latexText(m.provenance.search.method)}; ${latexText(m.provenance.search.time)}; gradus ${latexText(m.provenance.search.gradusVersion)}. Exported by ${latexText(m.provenance.exportedBy)}.`, '');
+  L.push('\\subsection*{Provenance}', `Search: ${latexText(m.provenance.search.method)}; ${latexText(m.provenance.search.time)}; gradus ${latexText(m.provenance.search.version)}. Exported by ${latexText(m.provenance.exportedBy)}.`, '');
   return L.join('\n');
 }

@@ -36,6 +36,6 @@ export function renderMarkdown(m: ExportModel): string {
   const hasK = m.table.some((e) => e.k !== undefined);
   L.push(hasK ? '| n | k | series | value at 1 |' : '| n | series | value at 1 |', hasK ? '|---|---|---|---|' : '|---|---|---|');
   for (const e of m.table) L.push(`| ${e.n} |${hasK ? ` ${e.k ?? ''} |` : ''} ${cell(seriesText(e.series))} | ${e.count} |`);
-  L.push('', '## Provenance', '', `- search: ${m.provenance.search.method}; ${m.provenance.search.time}; gradus ${m.provenance.search.gradusVersion}`, `- exported by ${m.provenance.exportedBy}`, '');
+  L.push('', '## Provenance', '', `- search: ${m.provenance.search.method}; ${m.provenance.search.time}; gradus ${m.provenance.search.version}`, `- exported by ${m.provenance.exportedBy}`, '');
   return L.join('\n');
 }

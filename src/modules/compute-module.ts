@@ -8,6 +8,7 @@ import { Worker } from 'node:worker_threads';
 import { LimitError } from '../core/errors.js';
 import { CONFIRM_PRIME, DEFAULT_PRIME, PRIMES } from '../core/modp.js';
 import { toBigIntExact } from '../core/rational.js';
+import { makeProvenance } from '../core/provenance.js';
 import { VERSION } from '../version.js';
 import { moduleChecks } from './checks.js';
 import { primeCoeffs, rationalCoeffs } from './coefficients.js';
@@ -192,7 +193,7 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
     cells: live,
     frobenius: frobOk,
     checks: moduleChecks(spec.n, live, axes),
-    provenance: { primes, field, method: methodText, confirmation, notes, seconds: (performance.now() - t0) / 1000, version: VERSION },
+    provenance: makeProvenance({ request: `${spec.seed} n=${spec.n}`, primes, method: `${methodText} (${field})`, confirmation, notes, seconds: (performance.now() - t0) / 1000 }),
   };
 }
 

@@ -4,7 +4,7 @@
  * disagreement), and returns the cells with checks and provenance.
  */
 import { CONFIRM_PRIME, DEFAULT_PRIME, PRIMES } from '../core/modp.js';
-import { VERSION } from '../version.js';
+import { makeProvenance } from '../core/provenance.js';
 import { moduleChecks } from './checks.js';
 import { primeCoeffs } from './coefficients.js';
 import { idealGenerators, type IdealSpec } from './ideals.js';
@@ -57,16 +57,17 @@ export function computeQuotient(spec: IdealSpec, options: QuotientOptions = {}):
     cells,
     frobenius: frobOk,
     checks: moduleChecks(spec.n, cells, axes),
-    provenance: {
+    provenance: makeProvenance({
+      request: `${spec.ideal} n=${spec.n}`,
       primes: merged.primes,
-      field: `F_p for p in {${merged.primes.join(', ')}}`,
-      method: stable
-        ? 'I_d spanned by generator × monomial; Schur multiplicities from ranks of Young-subgroup folds (invariants h, anti-invariants e) solved with Kostka numbers'
-        : 'I_d spanned by generator × monomial; dimension = #monomials − rank',
+      method: `${
+        stable
+          ? 'I_d spanned by generator × monomial; Schur multiplicities from ranks of Young-subgroup folds (invariants h, anti-invariants e) solved with Kostka numbers'
+          : 'I_d spanned by generator × monomial; dimension = #monomials − rank'
+      } (F_p for p in {${merged.primes.join(', ')}})`,
       confirmation: merged.confirmation,
       notes,
       seconds: (performance.now() - t0) / 1000,
-      version: VERSION,
-    },
+    }),
   };
 }

@@ -62,11 +62,11 @@ export function resultToText(r: ModuleResult): string {
     const tables = frobeniusTables(r.n, r.cells, r.axes);
     if (r.axes.length <= 2) {
       const w = Math.max(...[...tables.keys()].map((l) => l.length)) + 3;
-      for (const [lam, t] of tables) lines.push(`  ${`s[${lam}]`.padEnd(w)} ${tableToPoly(t, r.axes.length).toString()}`);
+      for (const [lam, t] of tables) lines.push(`  ${`s(${lam})`.padEnd(w)} ${tableToPoly(t, r.axes.length).toString()}`);
     } else {
       const shapes = partitionList(r.n);
       for (const c of r.cells) {
-        const terms = (c.multiplicities ?? []).map((m, i) => (m === 0 ? '' : `${m === 1 ? '' : `${m} `}s[${shapes[i]!.join(',')}]`)).filter(Boolean);
+        const terms = (c.multiplicities ?? []).map((m, i) => (m === 0 ? '' : `${m === 1 ? '' : `${m} `}s(${shapes[i]!.join(',')})`)).filter(Boolean);
         lines.push(`  ${r.axes.map((a) => `${AXIS_LABEL[a]}=${c.degree[['x', 'y', 'theta'].indexOf(a)]}`).join(' ')}: ${terms.join(' + ')}`);
       }
     }
@@ -77,7 +77,7 @@ export function resultToText(r: ModuleResult): string {
   lines.push('');
   const pv = r.provenance;
   lines.push('provenance');
-  lines.push(`  field: ${pv.field}; ${pv.confirmation}`);
+  lines.push(`  ${pv.confirmation}`);
   lines.push(`  method: ${pv.method}`);
   for (const note of pv.notes) lines.push(`  note: ${note}`);
   lines.push(`  time: ${pv.seconds.toFixed(2)} s; gradus ${pv.version}`);

@@ -1,4 +1,5 @@
 /** The result of a module or quotient computation: cells, checks and provenance. */
+import type { Provenance } from '../core/provenance.js';
 import type { ModuleCell } from './module-cell.js';
 
 export type Axis = 'x' | 'y' | 'theta';
@@ -8,16 +9,6 @@ export interface Finding {
   /** null when the check does not apply (e.g. no Frobenius series). */
   readonly holds: boolean | null;
   readonly detail: string;
-}
-
-export interface Provenance {
-  readonly primes: readonly number[];
-  readonly field: string;
-  readonly method: string;
-  readonly confirmation: string;
-  readonly notes: readonly string[];
-  readonly seconds: number;
-  readonly version: string;
 }
 
 export interface ModuleResult {

@@ -7,6 +7,7 @@
 import { InputError } from '../core/errors.js';
 import { bigToJson } from '../core/integers.js';
 import { Poly } from '../core/poly.js';
+import { shown } from '../core/shown.js';
 import { byPartitionKey, qtSeries, schurSeries, type Series } from './series.js';
 
 export type SeriesJson = unknown;
@@ -25,9 +26,17 @@ export function seriesToJson(s: Series): SeriesJson {
 }
 
 function toBig(v: unknown, where: string): bigint {
-  if (typeof v === 'number' && Number.isInteger(v)) return BigInt(v);
-  if (typeof v === 'string' && /^-?\d+$/.test(v)) return BigInt(v);
-  throw new InputError(`${where}: expected an integer coefficient, got ${JSON.stringify(v)}`);
+  // beyond 2^53 a JSON number has lost digits: the convention writes such integers as strings
+  if (typeof v === 'number' && Number.isSafeInteger(v)) return BigInt(v);
+  if (typeof v === 'string' && /^-?\d{1,2000}$/.test(v)) return BigInt(v);
+  throw new InputError(`${where}: expected an integer coefficient (beyond 2^53 written as a string of digits), got ${shown(String(JSON.stringify(v)), 40)}`);
+}
+
+/** A Schur key "3,1,1": a partition with parts from 1 to 64 ("" is the empty partition). */
+function checkPartitionKey(key: string, where: string): void {
+  const parts = key === '' ? [] : key.split(',');
+  const ok = parts.length <= 64 && parts.every((p, i) => /^\d{1,2}$/.test(p) && Number(p) >= 1 && Number(p) <= 64 && (i === 0 || Number(p) <= Number(parts[i - 1])));
+  if (!ok) throw new InputError(`${where}: "${shown(key, 40)}" is not a partition written as weakly decreasing parts such as "3,1,1"`);
 }
 
 /** An array (q) or array of arrays (q,t) to a Poly. */
@@ -55,11 +64,16 @@ export function seriesFromJson(v: unknown, where: string, kind?: Series['kind'])
         if (!Array.isArray(t) || !Array.isArray(t[0]) || t[0].length !== axes.length) {
           throw new InputError(`${where}: each term is [[exponents, one per axis], coefficient]`);
         }
-        m.set((t[0] as unknown[]).map(Number).join(','), toBig(t[1], where));
+        const exps = t[0] as unknown[];
+        if (!exps.every((e) => typeof e === 'number' && Number.isInteger(e) && e >= 0 && e <= 1000)) throw new InputError(`${where}: exponents must be integers from 0 to 1000`);
+        m.set(exps.join(','), toBig(t[1], where));
       }
       return { kind: 'multi', axes, terms: m };
     }
-    return schurSeries(Object.entries(o).map(([k, c]) => [k, polyFromJson(c, `${where}.${k}`)] as const));
+    return schurSeries(Object.entries(o).map(([k, c]) => {
+      checkPartitionKey(k, where);
+      return [k, polyFromJson(c, `${where}.${k}`)] as const;
+    }));
   }
   throw new InputError(`${where}: expected a series (array, table or object of Schur coefficients)`);
 }

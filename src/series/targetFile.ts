@@ -4,7 +4,8 @@
  *     "label": "…", "entries": [ { "n": 4, "k": 2, "series": <series JSON> }, … ] }
  * where <series JSON> follows src/series/seriesJson.ts.
  */
-import { readFileSync } from 'node:fs';
+import { z } from 'zod';
+import { parseWith, readJsonFile } from '../core/schema.js';
 import { InputError } from '../core/errors.js';
 import { seriesFromJson, seriesToJson } from './seriesJson.js';
 import { makeTarget, type Target } from './target.js';
@@ -13,6 +14,8 @@ import type { SeriesKind } from './series.js';
 export const TARGET_FORMAT = 'gradus-target';
 export const TARGET_VERSION = 1;
 const KINDS: readonly SeriesKind[] = ['q', 'qt', 'schur', 'multi'];
+/** Sizes n of a target entry: far beyond what any engine computes, small enough to be a number. */
+const MAX_N = 64;
 
 export function targetToJson(t: Target): object {
   return {
@@ -24,42 +27,34 @@ export function targetToJson(t: Target): object {
   };
 }
 
-export function targetFromJson(doc: unknown, where = 'target'): Target {
-  if (doc === null || typeof doc !== 'object') throw new InputError(`${where}: expected a JSON object`);
-  const o = doc as Record<string, unknown>;
-  if (o['format'] !== TARGET_FORMAT) throw new InputError(`${where}: "format" must be "${TARGET_FORMAT}" (got ${JSON.stringify(o['format'])})`);
-  if (o['version'] !== TARGET_VERSION) throw new InputError(`${where}: "version" must be ${TARGET_VERSION} (got ${JSON.stringify(o['version'])}); this gradus reads version ${TARGET_VERSION}`);
-  const kind = o['kind'];
-  if (typeof kind !== 'string' || !KINDS.includes(kind as SeriesKind)) {
-    throw new InputError(`${where}: "kind" must be one of ${KINDS.join(', ')} (got ${JSON.stringify(kind)})`);
-  }
-  if (!Array.isArray(o['entries'])) throw new InputError(`${where}: "entries" must be an array`);
-  const entries = (o['entries'] as unknown[]).map((e, i) => {
-    const r = e as Record<string, unknown>;
-    if (typeof r?.['n'] !== 'number') throw new InputError(`${where}: entries[${i}].n must be an integer`);
-    const k = r['k'];
-    if (k !== undefined && typeof k !== 'number') throw new InputError(`${where}: entries[${i}].k must be an integer`);
-    return { n: r['n'] as number, ...(k === undefined ? {} : { k: k as number }), series: seriesFromJson(r['series'], `${where}: entries[${i}].series`, kind as SeriesKind) };
-  });
-  const t = makeTarget(typeof o['label'] === 'string' ? o['label'] : where, entries);
+const ENTRY = z.object({
+  n: z.number().int().min(0).max(MAX_N),
+  k: z.number().int().min(0).max(MAX_N).optional(),
+  series: z.unknown(),
+});
+
+const TARGET = z.object({
+  format: z.literal(TARGET_FORMAT, { error: `"format" must be "${TARGET_FORMAT}"` }),
+  version: z.literal(TARGET_VERSION, { error: `"version" must be ${TARGET_VERSION} (the version this gradus reads)` }),
+  kind: z.enum(KINDS as [SeriesKind, ...SeriesKind[]]),
+  label: z.string().max(1000).optional(),
+  entries: z.array(ENTRY).min(1).max(10_000),
+});
+
+export function targetFromJson(doc: unknown, where = 'target', option?: string): Target {
+  const o = parseWith(TARGET, doc, where, option);
+  const kind = o.kind;
+  const entries = o.entries.map((r, i) => ({ n: r.n, ...(r.k === undefined ? {} : { k: r.k }), series: seriesFromJson(r.series, `${where}: entries[${i}].series`, kind) }));
+  const t = makeTarget(o.label ?? where, entries);
   if (t.kind !== kind && !(kind === 'qt' && t.kind === 'q')) {
-    throw new InputError(`${where}: "kind" says ${kind} but the entries are ${t.kind}`);
+    throw new InputError(`${where}: "kind" says ${kind} but the entries are ${t.kind}`, option);
   }
-  return { ...t, kind: kind as SeriesKind };
+  return { ...t, kind };
 }
 
+/** A target file is small (series for small n): larger files are refused before reading. */
+export const MAX_TARGET_BYTES = 16 * 1024 * 1024;
+
 export function readTargetFile(path: string): Target {
-  let text: string;
-  try {
-    text = readFileSync(path, 'utf8');
-  } catch (e) {
-    throw new InputError(`--target-file: cannot read ${path} (${(e as NodeJS.ErrnoException).code ?? 'error'})`, 'target-file');
-  }
-  let doc: unknown;
-  try {
-    doc = JSON.parse(text);
-  } catch (e) {
-    throw new InputError(`--target-file: ${path} is not valid JSON (${(e as Error).message})`, 'target-file');
-  }
-  return targetFromJson(doc, path);
+  return targetFromJson(readJsonFile(path, 'target-file', MAX_TARGET_BYTES, 'a target file'), path, 'target-file');
 }

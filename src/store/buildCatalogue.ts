@@ -5,8 +5,7 @@
 import { LimitError } from '../core/errors.js';
 import type { Progress } from '../core/progress.js';
 import type { Catalogue } from './catalogue.js';
-import { planUnits, statsSignature, type Unit } from './planUnits.js';
-import { provenance } from './provenance.js';
+import { planUnits, statsSignature, unitProvenance, type Unit } from './planUnits.js';
 import { tallyUnit } from './tallyUnit.js';
 
 export interface BuildOptions {
@@ -40,6 +39,7 @@ export function pendingWork(cat: Catalogue, o: BuildOptions): { plan: ReturnType
 
 export function buildCatalogue(cat: Catalogue, o: BuildOptions): BuildReport {
   const { plan, todo, total } = pendingWork(cat, o);
+  cat.beginBuild({ nMax: o.nMax, ...(o.families ? { families: o.families } : {}), units: plan.units.length });
   const t0 = Date.now();
   let done = 0n;
   let rows = 0;
@@ -49,13 +49,14 @@ export function buildCatalogue(cat: Catalogue, o: BuildOptions): BuildReport {
     const r = tallyUnit(u.family, u.params, u.stats);
     const seconds = (Date.now() - t1) / 1000;
     cat.writeUnit(u.family.id, u.params, r.objects, seconds, r.rows,
-      provenance({ family: u.family.id, params: u.params, statistics: u.stats.map((s) => s.id) }, 'exhaustive enumeration, exact integer tallies', [], seconds), statsSignature(u));
+      unitProvenance(u, 'exhaustive enumeration, exact integer tallies', seconds), statsSignature(u));
     rows += r.rows.length;
     done += r.objects;
     o.progress.update(Number(done));
     o.onUnit?.(`${u.family.id} ${JSON.stringify(u.params)}: ${r.objects} objects, ${r.rows.length} distributions, ${seconds.toFixed(2)}s`);
   }
   o.progress.finish();
+  cat.finishBuild();
   return {
     units: todo.length,
     skippedDone: plan.units.length - todo.length,

@@ -6,8 +6,7 @@
 import { Worker } from 'node:worker_threads';
 import { pendingWork, type BuildOptions, type BuildReport } from './buildCatalogue.js';
 import type { Catalogue } from './catalogue.js';
-import { statsSignature, type Unit } from './planUnits.js';
-import { provenance } from './provenance.js';
+import { statsSignature, unitProvenance, type Unit } from './planUnits.js';
 import { mergeRaw, type RawTally } from './rawTally.js';
 import { rowsOfTally } from './tallyUnit.js';
 import type { TallyJob, TallyReply } from './tallyWorker.js';
@@ -18,6 +17,7 @@ const SHARD_MIN = 200_000n;
 
 export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & { readonly workers: number; readonly shardMin?: bigint }): Promise<BuildReport> {
   const { plan, todo, total } = pendingWork(cat, o);
+  cat.beginBuild({ nMax: o.nMax, ...(o.families ? { families: o.families } : {}), units: plan.units.length });
   const t0 = Date.now();
   const jobs: { unit: Unit; job: TallyJob }[] = [];
   let nextId = 1;
@@ -43,7 +43,7 @@ export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & {
       const r = rowsOfTally(unit.family, unit.params, unit.stats, raw);
       const seconds = (Date.now() - started) / 1000;
       cat.writeUnit(unit.family.id, unit.params, r.objects, seconds, r.rows,
-        provenance({ family: unit.family.id, params: unit.params, statistics: unit.stats.map((s) => s.id) }, `exhaustive enumeration, exact integer tallies (${o.workers} worker threads)`, [], seconds), statsSignature(unit));
+        unitProvenance(unit, `exhaustive enumeration, exact integer tallies (${o.workers} worker threads)`, seconds), statsSignature(unit));
       rows += r.rows.length;
       done += r.objects;
       o.progress.update(Number(done));
@@ -79,5 +79,6 @@ export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & {
     await Promise.all(workers.map((w) => w.terminate()));
     o.progress.finish();
   }
+  cat.finishBuild();
   return { units: todo.length, skippedDone: plan.units.length - todo.length, rows, objects: done.toString(), seconds: (Date.now() - t0) / 1000, familiesLeftOut: plan.skipped };
 }

@@ -28,6 +28,13 @@ export const MIGRATIONS: readonly string[] = [
      result TEXT NOT NULL, provenance TEXT NOT NULL);`,
   // 2: the statistics a unit was built with, so that a build redoes units whose set changed
   `ALTER TABLE units ADD COLUMN statistics TEXT NOT NULL DEFAULT '';`,
+  // 3: results of data requests by their canonical key (replacing the argv-keyed module and
+  // symmetric-function tables, which are no longer read), and hashes of saved searches
+  `CREATE TABLE results (
+     id INTEGER PRIMARY KEY, key TEXT NOT NULL UNIQUE, kind TEXT NOT NULL, n INTEGER, k INTEGER,
+     document TEXT NOT NULL, hash TEXT NOT NULL, provenance TEXT NOT NULL);
+   CREATE INDEX results_place ON results (kind, n, k);
+   ALTER TABLE search_results ADD COLUMN hash TEXT NOT NULL DEFAULT '';`,
 ];
 
 export const SCHEMA_VERSION = MIGRATIONS.length;

@@ -6,6 +6,9 @@
 import { FAMILIES } from '../../objects/index.js';
 import { transformsFrom } from '../../objects/transforms/index.js';
 import { statisticsOfFamily } from '../../statistics/index.js';
+import { InputError } from '../core/errors.js';
+import { makeProvenance, type Provenance } from '../core/provenance.js';
+import { unknownNameMessage } from '../core/suggest.js';
 import type { Family } from '../enumerate/plugin.js';
 import { tallyStats, type TallyStat } from './tallyUnit.js';
 
@@ -22,7 +25,23 @@ export interface Plan {
   readonly skipped: readonly { family: string; why: string }[];
 }
 
+/**
+ * The plan of a build, with every named family checked first: an unknown name or a family the
+ * catalogue does not hold is an InputError naming it (never an empty build reported as done).
+ */
 export function planUnits(nMax: number, only?: readonly string[]): Plan {
+  if (only) {
+    const all = planOf(nMax);
+    for (const id of only) {
+      if (!FAMILIES.some((f) => f.id === id)) throw new InputError(`--families: ${unknownNameMessage('family', id, FAMILIES.map((f) => f.id))}`, 'families');
+      const left = all.skipped.find((x) => x.family === id);
+      if (left) throw new InputError(`--families: ${id} is not catalogued (${left.why})`, 'families');
+    }
+  }
+  return planOf(nMax, only);
+}
+
+function planOf(nMax: number, only?: readonly string[]): Plan {
   const units: Unit[] = [];
   const skipped: { family: string; why: string }[] = [];
   for (const family of FAMILIES) {
@@ -65,4 +84,13 @@ export function statsOfFamily(family: Family<unknown>): TallyStat[] {
 /** The statistics of a unit as one text (a change of the registry makes units stale). */
 export function statsSignature(u: Unit): string {
   return u.stats.map((s) => s.id).join(',');
+}
+
+/** Provenance of a unit's rows: the unit, how it was tallied, how long it took. */
+export function unitProvenance(u: Unit, method: string, seconds: number): Provenance {
+  return makeProvenance({ request: `catalogue unit ${u.family.id} ${paramsText(u.params)}`, method, seconds, notes: [`${u.stats.length} statistics`] });
+}
+
+function paramsText(p: Readonly<Record<string, number>>): string {
+  return Object.entries(p).map(([k, v]) => `${k}=${v}`).join(' ');
 }

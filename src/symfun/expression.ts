@@ -2,7 +2,7 @@
  * Entry point of the expression language: text → symmetric function, with the degree and
  * the provenance of the result. Used by `gradus sym`, the terminal app and the search.
  */
-import { VERSION } from '../version.js';
+import { makeProvenance, type Provenance } from '../core/provenance.js';
 import { evaluateNode, type EvalOptions } from './expression-eval.js';
 import { parseExpression } from './expression-parser.js';
 import type { SymFun } from './symfun.js';
@@ -14,7 +14,7 @@ export interface SymResult {
   readonly value: SymFun;
   /** The degree of a homogeneous result, or the list of degrees present. */
   readonly degree: number | readonly number[];
-  readonly provenance: { readonly tool: string; readonly method: string; readonly milliseconds: number };
+  readonly provenance: Provenance;
 }
 
 export function evaluateExpression(text: string, options: Partial<EvalOptions> = {}): SymResult {
@@ -26,12 +26,12 @@ export function evaluateExpression(text: string, options: Partial<EvalOptions> =
     expression: text,
     value,
     degree: d.length <= 1 ? (d[0] ?? 0) : d,
-    provenance: {
-      tool: `gradus ${VERSION}`,
+    provenance: makeProvenance({
+      request: text,
       method:
         'exact over Q[q,t]; H̃_μ by the Haglund–Haiman–Loehr filling formula; ∇, Δ, Δ′ by expansion in the H̃ basis ' +
         '(*-scalar product) summed over a common denominator and divided exactly',
-      milliseconds: Date.now() - t0,
-    },
+      seconds: (Date.now() - t0) / 1000,
+    }),
   };
 }

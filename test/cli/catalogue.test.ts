@@ -1,6 +1,6 @@
 /** The catalogue through the command line: build, info, interruption, damage. */
 import { spawn } from 'node:child_process';
-import { existsSync, mkdtempSync, readdirSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
@@ -46,10 +46,14 @@ describe('gradus catalogue', () => {
     expect(again.code, again.stderr).toBe(0);
     expect(JSON.parse(again.stdout).skippedDone).toBeGreaterThan(0);
   }, 120_000);
-  it('a damaged file is reported with the command that rebuilds it, and rebuild sets it aside', { timeout: 60_000 }, () => {
+  it('a damaged catalogue is reported with the command that rebuilds it, and rebuild sets it aside', { timeout: 60_000 }, () => {
     const dir = mkdtempSync(join(tmpdir(), 'gradus-bad-'));
     const path = join(dir, 'c.sqlite');
-    writeFileSync(path, 'not a database; '.repeat(500));
+    expect(runCli(['catalogue', 'build', '--n-max', '2', '--families', 'permutations', '--catalogue', path]).code).toBe(0);
+    // break the schema page (page 1 after the 100-byte header): SQLite then finds the file malformed
+    const bytes = readFileSync(path);
+    bytes.fill(0x5a, 100, 4096);
+    writeFileSync(path, bytes);
     const r = runCli(['catalogue', 'info', '--catalogue', path]);
     expect(r.code).toBe(2);
     expect(r.stderr).toContain('damaged');

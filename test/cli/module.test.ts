@@ -33,7 +33,7 @@ describe('gradus module', () => {
     const r = runCli(['module', '--seed', 'poly', '--n', '2', '--poly', 'x1*th2 - x2*th1', '--ops', 'x,theta', '--frobenius']);
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/Hilbert table/);
-    expect(r.stdout).toMatch(/s\[1,1\]/);
+    expect(r.stdout).toMatch(/s\(1,1\)/);
     expect(r.stdout).toMatch(/holds {2}Schur positivity/);
     expect(r.stdout).toMatch(/67108859/);
   });

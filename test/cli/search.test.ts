@@ -63,7 +63,7 @@ describe('gradus search (acceptance)', () => {
     expect(r.doc.recognition.recurrences[0]!.name).toBe('q-Stirling recurrence');
     // the 21 module results were kept in the catalogue with provenance
     const info = JSON.parse(runCli(['catalogue', 'info', '--catalogue', cat, '--json']).stdout);
-    expect(info.modules).toBe(21);
+    expect(info.results).toEqual([{ kind: 'module', count: 21 }]);
     exportFixtures('delta-x-hilbert');
   }, 120_000);
   it('the Vandermonde module, n ≤ 6: Σ q^maj s_shape over standard Young tableaux first (Lusztig–Stanley, MATH.md §4)', () => {

@@ -58,7 +58,7 @@ describe('distribution engine', () => {
     for (const req of cases) {
       const one = await computeDistribution(req, { workers: 1 });
       const two = await computeDistribution(req, { workers: 2 });
-      expect(two.provenance.workers).toBe(2);
+      expect(two.provenance.method).toContain('2 worker threads');
       expect(two.series.equals(one.series)).toBe(true);
       expect(two.count).toBe(one.count);
       expect(JSON.stringify(two.frobenius?.terms.map((t) => [t.set, t.series.toString()]))).toBe(JSON.stringify(one.frobenius?.terms.map((t) => [t.set, t.series.toString()])));

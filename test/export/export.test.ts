@@ -17,7 +17,7 @@ import { parseCoeffs } from '../../src/series/parseCoeffs.js';
 import { rangeText } from '../../src/series/target.js';
 import { buildCatalogue } from '../../src/store/buildCatalogue.js';
 import { Catalogue } from '../../src/store/catalogue.js';
-import { provenance } from '../../src/store/provenance.js';
+import { makeProvenance } from '../../src/core/provenance.js';
 import { runCli } from '../helpers/cli.js';
 import { latexBalanced } from './fixtures.js';
 
@@ -31,9 +31,9 @@ beforeAll(() => {
   buildCatalogue(cat, { nMax: 4, maxObjects: 10_000_000n, families: ['permutations'], progress: silentProgress });
   // [n]_q! for n = 2..4 (q-factorials, src/core/qanalogs.ts values)
   const target = parseCoeffs('n=2:1,1;n=3:1,2,2,1;n=4:1,3,5,6,5,3,1');
-  doc = searchDocument(target, rangeText(target.entries), recognise(target), searchCatalogue(cat, target), provenance({}, 'test'));
+  doc = searchDocument(target, rangeText(target.entries), recognise(target), searchCatalogue(cat, target), makeProvenance({ request: 'test', method: 'test', seconds: 0 }));
   const odd = parseCoeffs('n=3:1,0,4,1;n=4:1,0,0,22,1');
-  none = searchDocument(odd, rangeText(odd.entries), recognise(odd), searchCatalogue(cat, odd), provenance({}, 'test'));
+  none = searchDocument(odd, rangeText(odd.entries), recognise(odd), searchCatalogue(cat, odd), makeProvenance({ request: 'test', method: 'test', seconds: 0 }));
   cat.close();
 }, 60_000);
 
@@ -72,7 +72,7 @@ describe('export', () => {
     const j = JSON.parse(renderJson(exportModel(doc, 2)));
     expect(j.format).toBe('gradus-export');
     expect(j.version).toBe(1);
-    expect(j.provenance.search.gradusVersion).toMatch(/^\d+\.\d+\.\d+/);
+    expect(j.provenance.search.version).toMatch(/^\d+\.\d+\.\d+/);
     expect(j.values[2]).toEqual({ n: 4, series: [1, 3, 5, 6, 5, 3, 1], valueAtOne: 24 });
     expect(j.matches[0].statistics[0].source).toBeTruthy();
   });

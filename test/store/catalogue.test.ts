@@ -1,4 +1,4 @@
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
@@ -8,9 +8,9 @@ import { qFactorial } from '../../src/core/qanalogs.js';
 import { qSeries } from '../../src/series/series.js';
 import { Catalogue } from '../../src/store/catalogue.js';
 import { cataloguePath } from '../../src/store/cataloguePath.js';
-import { commandResultCache } from '../../src/store/commandResultCache.js';
+import { catalogueResultCache } from '../../src/match/resultCache.js';
 import { MIGRATIONS, SCHEMA_VERSION } from '../../src/store/migrations.js';
-import { provenance } from '../../src/store/provenance.js';
+import { makeProvenance } from '../../src/core/provenance.js';
 import { seriesHash } from '../../src/store/seriesHash.js';
 
 const dir = () => mkdtempSync(join(tmpdir(), 'gradus-store-'));
@@ -27,7 +27,7 @@ describe('catalogue', () => {
     const c = Catalogue.open(p);
     expect(c.info().schema).toBe(SCHEMA_VERSION);
     c.close();
-    const again = Catalogue.open(p, { readonly: true });
+    const again = Catalogue.open(p, { existing: true });
     expect(again.info().units).toBe(0);
     again.close();
   });
@@ -36,7 +36,7 @@ describe('catalogue', () => {
     const s = qSeries(qFactorial(3));
     c.writeUnit('permutations', { n: 3 }, 6n, 0.1, [
       { family: 'permutations', params: { n: 3 }, n: 3, statistics: ['inversions'], combine: 'single', transform: '', series: s },
-    ], provenance({}, 'test'));
+    ], makeProvenance({ request: 'test', method: 'test', seconds: 0 }));
     expect(c.isUnitDone('permutations', { n: 3 })).toBe(true);
     const rows = c.byHash(seriesHash(s));
     expect(rows.length).toBe(1);
@@ -45,32 +45,41 @@ describe('catalogue', () => {
     expect(c.find('permutations', { n: 4 }, 'inversions', 'single', '')).toBeUndefined();
     c.close();
   });
-  it('keeps module and symmetric-function results by their command line, with provenance', () => {
+  it('keeps module, quotient and sym results by their canonical request key, with provenance', () => {
     const c = Catalogue.open(join(dir(), 'c.sqlite'));
-    const cache = commandResultCache(c);
-    cache.put(['module', '--n', '3'], { hilbertSeries: [1, 2] }, 3, undefined);
-    cache.put(['sym', 'e(2)'], { terms: { '1,1': [[1]] } }, 2, undefined);
-    cache.put(['qseries', 'integer'], { series: [1] }, 1, undefined);
-    expect(cache.get(['module', '--n', '3'])).toEqual({ hilbertSeries: [1, 2] });
-    expect(cache.get(['sym', 'e(2)'])).toEqual({ terms: { '1,1': [[1]] } });
-    expect(cache.get(['qseries', 'integer'])).toBeUndefined();
-    expect(cache.get(['module', '--n', '4'])).toBeUndefined();
-    const p = c.db.prepare('SELECT provenance FROM module_results').get() as { provenance: string };
-    expect(JSON.parse(p.provenance).gradusVersion).toMatch(/^\d+\.\d+/);
+    const cache = catalogueResultCache(c);
+    const prov = makeProvenance({ request: 'module --seed vandermonde --n 3 --ops x', method: 'test', seconds: 0 });
+    cache.put('module --seed vandermonde --n 3 --ops x', 'module', { hilbertSeries: [1, 2], provenance: prov }, 3, undefined);
+    cache.put('sym e(2)', 'sym', { terms: { '1,1': [[1]] }, provenance: prov }, 2, undefined);
+    cache.put('qseries integer --n 1', 'qseries', { series: [1], provenance: prov }, 1, undefined);
+    expect(cache.get('module --seed vandermonde --n 3 --ops x')).toEqual({ hilbertSeries: [1, 2], provenance: prov });
+    expect(cache.get('sym e(2)')).toMatchObject({ terms: { '1,1': [[1]] } });
+    expect(cache.get('qseries integer --n 1')).toBeUndefined();
+    expect(cache.get('module --seed vandermonde --n 4 --ops x')).toBeUndefined();
+    const p = c.db.prepare('SELECT provenance FROM results WHERE kind = ?').get('module') as { provenance: string };
+    expect(JSON.parse(p.provenance).version).toMatch(/^\d+\.\d+/);
     c.close();
   });
   it('a failing write leaves nothing of the unit behind', () => {
     const c = Catalogue.open(join(dir(), 'c.sqlite'));
     const bad = { family: 'f', params: { n: 1 }, n: 1, statistics: ['s'], combine: 'single' as const, transform: '', series: qSeries(Poly.one) };
-    expect(() => c.writeUnit('f', { n: 1 }, 1n, 0, [bad, { ...bad, series: undefined as never }], provenance({}, 'test'))).toThrow();
+    expect(() => c.writeUnit('f', { n: 1 }, 1n, 0, [bad, { ...bad, series: undefined as never }], makeProvenance({ request: 'test', method: 'test', seconds: 0 }))).toThrow();
     expect(c.info().distributions).toBe(0);
     expect(c.isUnitDone('f', { n: 1 })).toBe(false);
     c.close();
   });
-  it('a damaged file is an InputError naming the rebuild command', () => {
+  it('a file gradus did not write is refused and left alone; a broken catalogue of ours is "damaged" with the rebuild command', () => {
     const p = join(dir(), 'bad.sqlite');
-    writeFileSync(p, 'this is not a database file, just some bytes '.repeat(100));
-    expect(() => Catalogue.open(p)).toThrow(/damaged.*gradus catalogue rebuild/);
+    const text = 'this is not a database file, just some bytes '.repeat(100);
+    writeFileSync(p, text);
+    expect(() => Catalogue.open(p)).toThrow(/not an SQLite database, not a gradus catalogue; gradus leaves it alone/);
+    expect(readFileSync(p, 'utf8')).toBe(text);
+    const q = join(dir(), 'broken.sqlite');
+    Catalogue.open(q).close();
+    const bytes = readFileSync(q);
+    bytes.fill(0x5a, 100, 4096);
+    writeFileSync(q, bytes);
+    expect(() => Catalogue.open(q)).toThrow(/damaged.*gradus catalogue rebuild/);
   });
   it('migrates a version-1 file: its units count as stale for a build with a statistics signature', () => {
     const p = join(dir(), 'v1.sqlite');
@@ -84,19 +93,20 @@ describe('catalogue', () => {
     expect(SCHEMA_VERSION).toBeGreaterThanOrEqual(2);
     expect(c.isUnitDone('f', { n: 1 })).toBe(true);
     expect(c.isUnitDone('f', { n: 1 }, 'a,b')).toBe(false);
-    c.writeUnit('f', { n: 1 }, 1n, 0, [], provenance({}, 'test'), 'a,b');
+    c.writeUnit('f', { n: 1 }, 1n, 0, [], makeProvenance({ request: 'test', method: 'test', seconds: 0 }), 'a,b');
     expect(c.isUnitDone('f', { n: 1 }, 'a,b')).toBe(true);
     expect(c.isUnitDone('f', { n: 1 }, 'a,b,c')).toBe(false);
     c.close();
   });
   it('a file from a newer gradus is refused with a clear message', () => {
     const p = join(dir(), 'new.sqlite');
+    Catalogue.open(p).close();
     const db = new Database(p);
     db.pragma(`user_version = ${SCHEMA_VERSION + 5}`);
     db.close();
     expect(() => Catalogue.open(p)).toThrow(/newer than this gradus/);
   });
   it('reading a catalogue that does not exist says how to fill one', () => {
-    expect(() => Catalogue.open(join(dir(), 'none.sqlite'), { readonly: true })).toThrow(/catalogue build --n-max/);
+    expect(() => Catalogue.open(join(dir(), 'none.sqlite'), { existing: true })).toThrow(/catalogue build --n-max/);
   });
 });

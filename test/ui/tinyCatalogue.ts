@@ -8,7 +8,7 @@ import { join } from 'node:path';
 import { familyById } from '../../objects/index.js';
 import { statisticById } from '../../statistics/index.js';
 import { Catalogue } from '../../src/store/catalogue.js';
-import { provenance } from '../../src/store/provenance.js';
+import { makeProvenance } from '../../src/core/provenance.js';
 import { tallyStats, tallyUnit } from '../../src/store/tallyUnit.js';
 
 export function tinyCatalogue(): { dir: string; path: string } {
@@ -20,7 +20,7 @@ export function tinyCatalogue(): { dir: string; path: string } {
     const stats = tallyStats(family, [statisticById('inversions'), statisticById('major-index')], []);
     for (let n = 1; n <= 5; n++) {
       const r = tallyUnit(family, { n }, stats);
-      cat.writeUnit(family.id, { n }, r.objects, 0, r.rows, provenance({ family: family.id, n }, 'test fixture', [], 0));
+      cat.writeUnit(family.id, { n }, r.objects, 0, r.rows, makeProvenance({ request: `${family.id} n=${n}`, method: 'test fixture', seconds: 0 }));
     }
   } finally {
     cat.close();

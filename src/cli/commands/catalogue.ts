@@ -1,12 +1,18 @@
-/** `gradus catalogue build|rebuild|info`: fill, rebuild and describe the catalogue. */
-import { existsSync, renameSync } from 'node:fs';
+/**
+ * `gradus catalogue build|rebuild|info`: fill, rebuild and describe the catalogue. Every
+ * option is checked, and the plan sized against the limit, before any file is touched; a
+ * rebuild is written beside the old file and replaces it only when it is complete.
+ */
+import { existsSync, renameSync, rmSync } from 'node:fs';
 import { InputError } from '../../core/errors.js';
-import { buildCatalogue } from '../../store/buildCatalogue.js';
+import { toJsonText } from '../../core/json-text.js';
+import { buildCatalogue, type BuildOptions, type BuildReport } from '../../store/buildCatalogue.js';
 import { buildCatalogueParallel } from '../../store/buildParallel.js';
 import { Catalogue } from '../../store/catalogue.js';
+import { ForeignFileError, GRADUS_APPLICATION_ID, inspectCatalogueFile } from '../../store/catalogue-file.js';
 import { cataloguePath } from '../../store/cataloguePath.js';
-import { flagOpt, intOpt, listOpt, strOpt, type CommandSpec, type ParsedArgs } from '../command.js';
-import { toJsonText } from '../../core/json-text.js';
+import { planUnits } from '../../store/planUnits.js';
+import { flagOpt, intOpt, listOpt, strOpt, type CommandIO, type CommandSpec, type ParsedArgs } from '../command.js';
 
 const ACTIONS = ['build', 'rebuild', 'info'] as const;
 const DEFAULT_REBUILD_N = 6;
@@ -19,63 +25,116 @@ export const CATALOGUE_OPTION = {
   placeholder: 'PATH',
 } as const;
 
+/** The build options from the command line, checked and sized before any file is opened. */
+function buildOptions(args: ParsedArgs, io: CommandIO, rebuild: boolean): BuildOptions & { workers: number } {
+  const nMax = intOpt(args, 'n-max') ?? (rebuild ? DEFAULT_REBUILD_N : undefined);
+  if (nMax === undefined) throw new InputError('catalogue build needs --n-max N (1..12)', 'n-max');
+  const families = listOpt(args, 'families');
+  const maxObjects = BigInt(intOpt(args, 'max-objects') ?? DEFAULT_MAX_OBJECTS);
+  const plan = planUnits(nMax, families); // unknown or uncatalogued family names: InputError here
+  const total = plan.units.reduce((s, u) => s + u.objects, 0n);
+  // a rebuild starts from nothing: the whole plan must fit the limit before the old file is touched
+  if (rebuild && total > maxObjects) {
+    throw new InputError(`rebuilding up to n = ${nMax} visits ${total} objects, above the limit ${maxObjects}; raise it with --max-objects`, 'max-objects');
+  }
+  return { nMax, maxObjects, ...(families ? { families } : {}), progress: io.progress, workers: intOpt(args, 'workers') ?? 2 };
+}
+
+async function runBuild(cat: Catalogue, o: BuildOptions & { workers: number }): Promise<BuildReport> {
+  return o.workers > 1 ? buildCatalogueParallel(cat, o) : buildCatalogue(cat, o);
+}
+
+function printReport(io: CommandIO, path: string, nMax: number, report: BuildReport, json: boolean, extra: Record<string, unknown> = {}): void {
+  if (json) return io.out(toJsonText({ catalogue: path, nMax, ...report, ...extra }));
+  io.out(`catalogue ${path}: ${report.units} units built (${report.skippedDone} already there), ${report.rows} distributions from ${report.objects} objects in ${report.seconds.toFixed(1)}s`);
+  for (const s of report.familiesLeftOut) io.out(`  left out ${s.family}: ${s.why}`);
+}
+
+/** Rebuild: into PATH.rebuilding (resumed when a killed rebuild left it), then swap; the old file is kept aside. */
+async function rebuild(path: string, args: ParsedArgs, io: CommandIO): Promise<void> {
+  const o = buildOptions(args, io, true);
+  const json = flagOpt(args, 'json');
+  const present = inspectCatalogueFile(path); // a folder is refused here
+  if (present.kind === 'sqlite' && present.applicationId !== GRADUS_APPLICATION_ID && present.applicationId !== 0 && !flagOpt(args, 'force')) {
+    throw new InputError(`${path} is not a gradus catalogue; rebuild sets it aside only when asked by name: add --force`, 'force');
+  }
+  if (present.kind === 'sqlite' && present.applicationId === 0 && !flagOpt(args, 'force')) {
+    // an old catalogue of ours (perhaps damaged), or another program's database: opening tells them apart
+    try {
+      Catalogue.open(path, { existing: true }).close();
+    } catch (e) {
+      if (e instanceof ForeignFileError) throw new InputError(`${e.message.replace(/ \(give another --catalogue path\)$/, '')}; rebuild sets it aside only when asked by name: add --force`, 'force');
+    }
+  }
+  const fresh = `${path}.rebuilding`;
+  const cat = Catalogue.open(fresh);
+  let report: BuildReport;
+  try {
+    report = await runBuild(cat, o);
+  } finally {
+    cat.close();
+  }
+  let aside: string | undefined;
+  if (present.kind !== 'missing') {
+    aside = `${path}.aside-${new Date().toISOString().replace(/[:.]/g, '-')}`;
+    for (const suffix of ['', '-wal', '-shm', '-journal']) if (existsSync(path + suffix)) renameSync(path + suffix, aside + suffix);
+    io.err(`gradus: the previous catalogue is kept as ${aside}`);
+  }
+  renameSync(fresh, path);
+  rmSync(`${fresh}-journal`, { force: true });
+  printReport(io, path, o.nMax, report, json, aside ? { previous: aside } : {});
+}
+
 export const catalogueCommand: CommandSpec = {
   name: 'catalogue',
   summary: 'fill, rebuild or describe the catalogue of distributions the search looks in',
-  usage: 'catalogue build|rebuild|info [--n-max N] [--families A,B] [--workers W] [--catalogue PATH] [--json]',
+  usage: 'catalogue build|rebuild|info [--n-max N] [--families A,B] [--workers W] [--max-objects M] [--force] [--check] [--catalogue PATH] [--json]',
   positionals: [{ name: 'action', description: ACTIONS.join(', ') }],
   options: [
     { name: 'n-max', type: 'int', description: 'largest size n to enumerate (build; rebuild defaults to 6)', placeholder: 'N', min: 1, max: 12 },
     { name: 'families', type: 'list', description: 'only these family ids', placeholder: 'A,B' },
     { name: 'workers', type: 'int', description: 'worker threads (default 2; 1 works in this thread)', placeholder: 'W', min: 1, max: 16 },
     { name: 'max-objects', type: 'int', description: 'refuse a build visiting more objects than this (default 50000000)', placeholder: 'M', min: 1 },
+    { name: 'force', type: 'flag', description: 'rebuild: also set aside a file that is not a gradus catalogue' },
+    { name: 'check', type: 'flag', description: "info: also run SQLite's check of every page (slow on a large file)" },
     CATALOGUE_OPTION,
   ],
   producesData: true,
   details: [
     'build    enumerate every family × statistic (pairs, sums, Frobenius-level sums) up to n;',
     '         finished units are kept, so an interrupted build resumes where it stopped',
-    'rebuild  set the present file aside (as PATH.aside-<time>) and build a fresh one',
-    'info     what the catalogue holds',
+    'rebuild  build a fresh catalogue beside the present one and swap them when it is complete',
+    '         (the present file is kept as PATH.aside-<time>)',
+    'info     what the catalogue holds, and whether its last build finished',
   ].join('\n'),
   async run(args: ParsedArgs, io) {
     const action = args.positionals[0]!;
-    if (!(ACTIONS as readonly string[]).includes(action)) throw new InputError(`catalogue: the action must be one of ${ACTIONS.join(', ')} (got "${action}")`, 'action');
+    if (!(ACTIONS as readonly string[]).includes(action)) throw new InputError(`catalogue: the action must be one of ${ACTIONS.join(', ')} (got "${action.slice(0, 40)}")`, 'action');
     const path = cataloguePath(strOpt(args, 'catalogue'), io.env, io.cwd);
     const json = flagOpt(args, 'json');
+    if (action !== 'rebuild' && flagOpt(args, 'force')) throw new InputError('--force goes with catalogue rebuild', 'force');
+    if (action !== 'info' && flagOpt(args, 'check')) throw new InputError('--check goes with catalogue info', 'check');
     if (action === 'info') {
-      const cat = Catalogue.open(path, { readonly: true });
+      const cat = Catalogue.open(path, { existing: true });
       try {
         const info = cat.info();
-        if (json) return io.out(toJsonText(info));
-        io.out(`catalogue ${info.path} (schema ${info.schema})`);
-        io.out(`${info.units} units, ${info.distributions} distributions, ${info.modules} module results, ${info.syms} symmetric-function results, ${info.searches} saved searches`);
+        const check = flagOpt(args, 'check') ? cat.integrityCheck() : undefined;
+        if (json) return io.out(toJsonText({ ...info, ...(check !== undefined ? { check } : {}) }));
+        io.out(`catalogue ${info.path} (schema ${info.schema}${info.writable ? '' : ', read-only'})`);
+        if (info.unfinished) io.out(`warning: ${info.unfinished}`);
+        io.out(`${info.units} units, ${info.distributions} distributions, ${info.results.map((r) => `${r.count} ${r.kind} results`).join(', ') || 'no kept results'}, ${info.searches} saved searches`);
         for (const f of info.families) io.out(`  ${f.family.padEnd(28)} n ≤ ${f.nMax}  ${f.rows} distributions`);
+        if (check !== undefined) io.out(`SQLite check: ${check}`);
       } finally {
         cat.close();
       }
       return;
     }
-    let nMax = intOpt(args, 'n-max');
-    if (action === 'rebuild') {
-      nMax ??= DEFAULT_REBUILD_N;
-      if (existsSync(path)) {
-        const aside = `${path}.aside-${new Date().toISOString().replace(/[:.]/g, '-')}`;
-        for (const suffix of ['', '-wal', '-shm']) if (existsSync(path + suffix)) renameSync(path + suffix, aside + suffix);
-        io.err(`gradus: the previous catalogue is kept as ${aside}`);
-      }
-    }
-    if (nMax === undefined) throw new InputError('catalogue build needs --n-max N (1..12)', 'n-max');
-    const maxObjects = BigInt(intOpt(args, 'max-objects') ?? DEFAULT_MAX_OBJECTS);
+    if (action === 'rebuild') return rebuild(path, args, io);
+    const o = buildOptions(args, io, false);
     const cat = Catalogue.open(path);
     try {
-      const families = listOpt(args, 'families');
-      const workers = intOpt(args, 'workers') ?? 2;
-      const options = { nMax, maxObjects, ...(families ? { families } : {}), progress: io.progress };
-      const report = workers > 1 ? await buildCatalogueParallel(cat, { ...options, workers }) : buildCatalogue(cat, options);
-      if (json) return io.out(toJsonText({ catalogue: path, nMax, ...report }));
-      io.out(`catalogue ${path}: ${report.units} units built (${report.skippedDone} already there), ${report.rows} distributions from ${report.objects} objects in ${report.seconds.toFixed(1)}s`);
-      for (const s of report.familiesLeftOut) io.out(`  left out ${s.family}: ${s.why}`);
+      printReport(io, path, o.nMax, await runBuild(cat, o), json);
     } finally {
       cat.close();
     }

@@ -1,8 +1,8 @@
 /** `gradus export <result> --format latex|markdown|json --out FILE [--force]`. */
-import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { InputError } from '../../core/errors.js';
-import { atomicWrite } from '../../export/atomicWrite.js';
+import { readJsonFile } from '../../core/schema.js';
+import { atomicWrite, checkWritable } from '../../export/atomicWrite.js';
 import { exportModel } from '../../export/exportModel.js';
 import { renderJson } from '../../export/renderJson.js';
 import { renderLatex } from '../../export/renderLatex.js';
@@ -13,12 +13,15 @@ import { cataloguePath } from '../../store/cataloguePath.js';
 import { flagOpt, intOpt, strOpt, type CommandIO, type CommandSpec, type ParsedArgs } from '../command.js';
 import { CATALOGUE_OPTION } from './catalogue.js';
 
+/** A saved search is a few megabytes at most; larger files are refused before reading. */
+const MAX_SAVED_SEARCH_BYTES = 64 * 1024 * 1024;
+
 const FORMATS = { latex: renderLatex, markdown: renderMarkdown, json: renderJson } as const;
 
 function readResult(ref: string, args: ParsedArgs, io: CommandIO): SearchDocument {
   const m = /^search:(\d+)$/.exec(ref);
   if (m) {
-    const cat = Catalogue.open(cataloguePath(strOpt(args, 'catalogue'), io.env, io.cwd), { readonly: true });
+    const cat = Catalogue.open(cataloguePath(strOpt(args, 'catalogue'), io.env, io.cwd), { existing: true });
     try {
       const doc = cat.getSearch(Number(m[1]));
       if (doc === undefined) throw new InputError(`<result>: no saved search ${ref} in ${cat.path} (each gradus search prints its id)`, 'result');
@@ -28,18 +31,7 @@ function readResult(ref: string, args: ParsedArgs, io: CommandIO): SearchDocumen
     }
   }
   const path = resolve(io.cwd, ref);
-  let text: string;
-  try {
-    text = readFileSync(path, 'utf8');
-  } catch (e) {
-    throw new InputError(`<result>: cannot read ${path} (${(e as NodeJS.ErrnoException).code ?? 'error'}); give a file written by gradus search --save, or search:ID`, 'result');
-  }
-  try {
-    return checkSearchDocument(JSON.parse(text), path);
-  } catch (e) {
-    if (e instanceof InputError) throw e;
-    throw new InputError(`<result>: ${path} is not valid JSON`, 'result');
-  }
+  return checkSearchDocument(readJsonFile(path, 'result', MAX_SAVED_SEARCH_BYTES, 'a saved search (gradus search --save FILE) or search:ID'), path);
 }
 
 export const exportCommand: CommandSpec = {
@@ -60,9 +52,10 @@ export const exportCommand: CommandSpec = {
     if (!format || !(format in FORMATS)) throw new InputError(`--format must be one of ${Object.keys(FORMATS).join(', ')} (got ${format === undefined ? 'nothing' : `"${format}"`})`, 'format');
     const out = strOpt(args, 'out');
     if (!out) throw new InputError('export needs --out FILE', 'out');
+    const path = resolve(io.cwd, out);
+    checkWritable(path, flagOpt(args, 'force'));
     const doc = readResult(args.positionals[0]!, args, io);
     const text = FORMATS[format as keyof typeof FORMATS](exportModel(doc, intOpt(args, 'limit') ?? 5));
-    const path = resolve(io.cwd, out);
     atomicWrite(path, text, flagOpt(args, 'force'));
     io.out(`wrote ${path} (${format}, ${Math.min(doc.matches.length, intOpt(args, 'limit') ?? 5)} of ${doc.matches.length} matches)`);
   },

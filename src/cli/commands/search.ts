@@ -1,30 +1,31 @@
 /** `gradus search`: find statistics whose distributions equal a target family of series. */
 import { resolve } from 'node:path';
 import { InputError } from '../../core/errors.js';
-import { atomicWrite } from '../../export/atomicWrite.js';
+import { toJsonText } from '../../core/json-text.js';
+import { makeProvenance } from '../../core/provenance.js';
+import { atomicWrite, checkWritable } from '../../export/atomicWrite.js';
 import { flagsText } from '../../export/flagsText.js';
 import { recognise } from '../../match/recognise.js';
-import { targetFromCommand } from '../../match/runFrom.js';
+import { catalogueResultCache } from '../../match/resultCache.js';
 import { searchCatalogue } from '../../match/search.js';
 import { searchDocument, type SearchDocument } from '../../match/searchDocument.js';
+import { targetFromTemplate, templatePlaces } from '../../match/targetFromTemplate.js';
 import { parseTake, TAKE_CHOICES } from '../../series/fromDocument.js';
 import { parseCoeffs } from '../../series/parseCoeffs.js';
 import { rangeText, type Target } from '../../series/target.js';
 import { readTargetFile } from '../../series/targetFile.js';
 import { Catalogue } from '../../store/catalogue.js';
 import { cataloguePath } from '../../store/cataloguePath.js';
-import { commandResultCache } from '../../store/commandResultCache.js';
-import { provenance } from '../../store/provenance.js';
 import { flagOpt, intOpt, strOpt, type CommandIO, type CommandSpec, type ParsedArgs } from '../command.js';
-import { toJsonText } from '../../core/json-text.js';
+import { progressReporter } from '../progress.js';
 import { CATALOGUE_OPTION } from './catalogue.js';
 
 const N_MAX = 12;
 
 export function parseRange(text: string | undefined): [number, number] | undefined {
   if (text === undefined) return undefined;
-  const m = /^\s*(\d+)\s*\.\.\s*(\d+)\s*$/.exec(text);
-  if (!m) throw new InputError(`--n-range must be a..b with integers 1 ≤ a ≤ b ≤ ${N_MAX} (got "${text}")`, 'n-range');
+  const m = /^\s*(\d{1,3})\s*\.\.\s*(\d{1,3})\s*$/.exec(text);
+  if (!m) throw new InputError(`--n-range must be a..b with integers 1 ≤ a ≤ b ≤ ${N_MAX} (got "${text.slice(0, 40)}")`, 'n-range');
   const a = Number(m[1]);
   const b = Number(m[2]);
   if (a < 1 || b < a || b > N_MAX) throw new InputError(`--n-range must be a..b with integers 1 ≤ a ≤ b ≤ ${N_MAX} (got "${text}")`, 'n-range');
@@ -39,10 +40,13 @@ async function readTarget(args: ParsedArgs, io: CommandIO, range: [number, numbe
   if (sources[0] === 'from') {
     if (!range) throw new InputError('--from needs --n-range a..b (the sizes n to run the command for)', 'n-range');
     const template = strOpt(args, 'from')!;
-    const runs = Array.from({ length: range[1] - range[0] + 1 }, (_, i) => (template.includes('{k}') ? range[0] + i : 1)).reduce((a, b) => a + b, 0);
-    io.progress.start('running the target command', runs);
-    let done = 0;
-    t = await targetFromCommand(template, range[0], range[1], take, io.env, io.cwd, commandResultCache(cat), () => io.progress.update(done++));
+    const report = progressReporter(io.progress);
+    const total = templatePlaces(template, range[0], range[1]).length;
+    t = await targetFromTemplate(template, range[0], range[1], take, {
+      cwd: io.cwd,
+      cache: catalogueResultCache(cat),
+      onStep: (_key, i) => report('computing the target', i, total),
+    });
     io.progress.finish();
     return t;
   }
@@ -79,28 +83,38 @@ export const searchCommand: CommandSpec = {
   ].join('\n'),
   async run(args: ParsedArgs, io) {
     const range = parseRange(strOpt(args, 'n-range'));
+    // --save is checked before any work: an existing file (without --force) or a missing folder fails now
+    const saveText = strOpt(args, 'save');
+    const save = saveText === undefined ? undefined : resolve(io.cwd, saveText);
+    if (save) checkWritable(save, flagOpt(args, 'force'), 'save');
+    else if (flagOpt(args, 'force')) throw new InputError('--force goes with --save', 'force');
     const path = cataloguePath(strOpt(args, 'catalogue'), io.env, io.cwd);
-    const cat = Catalogue.open(path, { readonly: true });
+    const cat = Catalogue.open(path, { existing: true });
     try {
       const target = await readTarget(args, io, range, cat);
       const t0 = Date.now();
       const outcome = searchCatalogue(cat, target);
       const rec = recognise(target);
-      const seconds = (Date.now() - t0) / 1000;
-      const prov = provenance({ target: target.label, catalogue: path }, 'exact look-up of series hashes in the catalogue, then exact comparison on every entry', [], seconds);
+      const unfinished = cat.unfinishedNote();
+      const prov = makeProvenance({
+        request: `search ${target.label}`,
+        method: 'exact look-up of series hashes in the catalogue, then exact comparison on every entry',
+        seconds: (Date.now() - t0) / 1000,
+        notes: [`catalogue ${path}`, ...(unfinished ? [unfinished] : [])],
+      });
       const doc = searchDocument(target, rangeText(target.entries), rec, outcome, prov);
-      const id = cat.saveSearch(target.label, doc, prov);
-      const save = strOpt(args, 'save');
-      if (save) atomicWrite(resolve(io.cwd, save), toJsonText(doc) + '\n', flagOpt(args, 'force'), 'save');
-      if (flagOpt(args, 'json')) return io.out(toJsonText({ ...doc, id: `search:${id}` }));
-      printText(io, doc, id, intOpt(args, 'limit') ?? 10);
+      const id = cat.writable ? cat.saveSearch(target.label, doc, prov) : undefined;
+      if (save) atomicWrite(save, toJsonText(doc) + '\n', flagOpt(args, 'force'), 'save');
+      if (flagOpt(args, 'json')) return io.out(toJsonText({ ...doc, ...(id !== undefined ? { id: `search:${id}` } : {}) }));
+      printText(io, doc, id, intOpt(args, 'limit') ?? 10, unfinished, save);
     } finally {
       cat.close();
     }
   },
 };
 
-function printText(io: CommandIO, d: SearchDocument, id: number, limit: number): void {
+function printText(io: CommandIO, d: SearchDocument, id: number | undefined, limit: number, unfinished: string | undefined, save: string | undefined): void {
+  if (unfinished) io.out(`warning: ${unfinished}`);
   io.out(`target: ${String((d.target as { label?: string }).label)} (${d.range})`);
   const r = d.recognition;
   if (r.formula) io.out(`formula: f = ${r.formula}  (verified on ${d.range})`);
@@ -123,5 +137,7 @@ function printText(io: CommandIO, d: SearchDocument, id: number, limit: number):
     if (d.matches.length > limit) io.out(`… ${d.matches.length - limit} more (--limit, or --json for all)`);
     io.out(triedLine);
   }
-  io.out(`saved as search:${id} (gradus export search:${id} --format latex --out FILE)`);
+  if (id !== undefined) io.out(`saved as search:${id} (gradus export search:${id} --format latex --out FILE)`);
+  else io.out(`not kept in the catalogue (it is read-only)${save ? `; written to ${save}` : '; keep it with --save FILE'}`);
+  if (save && id !== undefined) io.out(`written to ${save}`);
 }

@@ -79,7 +79,7 @@ function chooseCatalogue(env: DemoEnv): { path: string; note: string; ready: boo
   const mine = cataloguePath(undefined, env.env, env.cwd);
   if (existsSync(mine)) {
     try {
-      const cat = Catalogue.open(mine, { readonly: true });
+      const cat = Catalogue.open(mine, { existing: true });
       const maxN = cat.maxN();
       cat.close();
       if (maxN >= 1) return { path: mine, note: `your catalogue ${mine} (n ≤ ${maxN})`, ready: true };

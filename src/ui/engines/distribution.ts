@@ -22,7 +22,7 @@ export interface DistView {
 
 export function startDistribution(request: DistRequest, count: bigint, onProgress: (p: JobProgress) => void): Job<DistView> {
   if (count <= IN_THREAD_OBJECTS) {
-    const result = computeDistribution(request, { workers: 1 }).then((d) => ({ series: d.series, ms: d.provenance.ms, method: d.provenance.method }));
+    const result = computeDistribution(request, { workers: 1 }).then((d) => ({ series: d.series, ms: Math.round(d.provenance.seconds * 1000), method: d.provenance.method }));
     return { result, cancel() {} };
   }
   const job = startJob<{ series: unknown; ms: number; method: string }>('dist', request, onProgress);

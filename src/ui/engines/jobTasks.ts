@@ -5,22 +5,23 @@
  */
 import type { SearchDocument } from '../../match/searchDocument.js';
 import type { DistRequest } from '../../enumerate/request.js';
-import type { ModuleRequest } from './moduleRequest.js';
+import type { ModuleRequest } from '../../requests/module-request.js';
+import type { SymRequest } from '../../requests/sym-request.js';
 
 export type ProgressFn = (label: string, done: number, total?: number) => void;
 export type JobTask = (input: unknown, progress: ProgressFn) => unknown | Promise<unknown>;
 
-async function searchMany(targets: readonly unknown[], catalogue: string, progress: ProgressFn): Promise<{ doc: SearchDocument; id: number; ms: number }[]> {
-  const [{ recognise }, { searchCatalogue }, { searchDocument }, { rangeText }, { targetFromJson }, { Catalogue }, { provenance }] = await Promise.all([
+async function searchMany(targets: readonly unknown[], catalogue: string, progress: ProgressFn): Promise<{ doc: SearchDocument; id: number | undefined; ms: number }[]> {
+  const [{ recognise }, { searchCatalogue }, { searchDocument }, { rangeText }, { targetFromJson }, { Catalogue }, { makeProvenance }] = await Promise.all([
     import('../../match/recognise.js'),
     import('../../match/search.js'),
     import('../../match/searchDocument.js'),
     import('../../series/target.js'),
     import('../../series/targetFile.js'),
     import('../../store/catalogue.js'),
-    import('../../store/provenance.js'),
+    import('../../core/provenance.js'),
   ]);
-  const cat = Catalogue.open(catalogue, { readonly: true });
+  const cat = Catalogue.open(catalogue, { existing: true });
   try {
     return targets.map((tj, i) => {
       progress('searching the catalogue', i, targets.length);
@@ -29,9 +30,15 @@ async function searchMany(targets: readonly unknown[], catalogue: string, progre
       const outcome = searchCatalogue(cat, target);
       const rec = recognise(target);
       const ms = Date.now() - t0;
-      const prov = provenance({ target: target.label, catalogue }, 'exact look-up of series hashes in the catalogue, then exact comparison on every entry', [], ms / 1000);
+      const unfinished = cat.unfinishedNote();
+      const prov = makeProvenance({
+        request: `search ${target.label}`,
+        method: 'exact look-up of series hashes in the catalogue, then exact comparison on every entry',
+        seconds: ms / 1000,
+        notes: [`catalogue ${catalogue}`, ...(unfinished ? [unfinished] : [])],
+      });
       const doc = searchDocument(target, rangeText(target.entries), rec, outcome, prov);
-      const id = cat.saveSearch(target.label, doc, prov);
+      const id = cat.writable ? cat.saveSearch(target.label, doc, prov) : undefined;
       return { doc, id, ms };
     });
   } finally {
@@ -40,19 +47,14 @@ async function searchMany(targets: readonly unknown[], catalogue: string, progre
 }
 
 export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
-  // The same engine entry `gradus module` calls; the result is plain data.
+  // The request model's module request, computed as `gradus module` computes it; the result is plain data.
   module: async (input, progress) => {
-    const [{ computeModule }, { resultToJson }] = await Promise.all([import('../../modules/compute-module.js'), import('../../modules/format-result.js')]);
-    const req = input as ModuleRequest;
-    const result = computeModule(req.spec, {
-      frobenius: true,
-      method: req.method,
-      ...(req.prime !== undefined ? { prime: req.prime } : {}),
-      ...(req.maxWork !== undefined ? { maxWork: req.maxWork } : {}),
+    const { compute } = await import('../../requests/index.js');
+    const c = await compute<import('../../modules/module-result.js').ModuleResult>(input as ModuleRequest, {
+      progress: (label, done, total) => progress(label, done, total),
       onEstimate: (units, seconds) => progress(`estimated ${units.toExponential(1)} units, ~${Math.ceil(seconds)}s of processor time`, 0),
-      onProgress: (done, total, label) => progress(label || 'closure', done, total || undefined),
     });
-    return { result, json: resultToJson(result) };
+    return { result: c.result, json: c.document };
   },
   // The same calls `gradus search` makes, and the search is kept in the catalogue.
   search: async (input, progress) => {
@@ -90,50 +92,56 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
       cat.close();
     }
   },
-  // The same engine entry as `gradus sym`; text in the Schur basis, JSON as --json prints it.
+  // The request model's sym request; text in the Schur basis, JSON as --json prints it.
   sym: async (input, progress) => {
-    const [{ qtTableJson }, { schurSeries }, { seriesToJson }, { evaluateExpression }, { formatText, integralCoefficients }] = await Promise.all([
-      import('../../core/json-text.js'),
+    const [{ compute }, { schurSeries }, { seriesToJson }, { formatText, integralCoefficients }] = await Promise.all([
+      import('../../requests/index.js'),
       import('../../series/series.js'),
       import('../../series/seriesJson.js'),
-      import('../../symfun/expression.js'),
       import('../../symfun/sym-format.js'),
     ]);
     const { expression } = input as { expression: string };
-    const r = evaluateExpression(expression, { onProgress: (label, done, total) => progress(label, done, total) });
+    const request: SymRequest = { kind: 'sym', expression, basis: 's', latex: false, maxDegree: 8 };
+    const c = await compute<import('../../symfun/expression.js').SymResult>(request, { progress: (label, done, total) => progress(label, done, total) });
+    const r = c.result;
     const { denominator, terms } = integralCoefficients(r.value, 's');
-    const json = {
-      expression,
-      degree: r.degree,
-      basis: 's',
-      ...(denominator === 1n ? {} : { denominator: denominator.toString() }),
-      terms: Object.fromEntries(terms.map(([k, c]) => [k, qtTableJson(c.num)])),
-      provenance: r.provenance,
-    };
     // A series for the search only when homogeneous with integer coefficients.
-    const seriesJson = typeof r.degree === 'number' && denominator === 1n ? seriesToJson(schurSeries(terms.map(([k, c]) => [k, c.num] as const))) : undefined;
+    const seriesJson = typeof r.degree === 'number' && denominator === 1n ? seriesToJson(schurSeries(terms.map(([k, t]) => [k, t.num] as const))) : undefined;
     return {
       expression,
       lines: formatText(r.value, 's').split('\n'),
-      json,
+      json: JSON.parse((await import('../../core/json-text.js')).toJsonText(c.document)),
       seriesJson,
       degree: typeof r.degree === 'number' ? r.degree : undefined,
-      elapsedMs: r.provenance.milliseconds,
+      elapsedMs: r.provenance.seconds * 1000,
     };
   },
   // The same engine entry as `gradus dist`.
   dist: async (input, progress) => {
     const { computeDistribution } = await import('../../enumerate/distribution.js');
     const d = await computeDistribution(input as DistRequest, { onProgress: (done, total) => progress('objects', done, total) });
-    return { series: d.series.toJson(), ms: d.provenance.ms, method: d.provenance.method };
+    return { series: d.series.toJson(), ms: Math.round(d.provenance.seconds * 1000), method: d.provenance.method };
   },
-  // A target over n from a data command with {n}, as `gradus search --from` builds it.
-  'from-command': async (input, progress) => {
-    const [{ targetFromCommand }, { targetToJson }] = await Promise.all([import('../../match/runFrom.js'), import('../../series/targetFile.js')]);
-    const { template, nFrom, nTo, cwd } = input as { template: string; nFrom: number; nTo: number; cwd: string };
-    let step = 0;
-    const target = await targetFromCommand(template, nFrom, nTo, 'auto', process.env, cwd, undefined, (text) => progress(text, step++, nTo - nFrom + 1));
-    return targetToJson(target);
+  // A target over n from a request template with {n}, as `gradus search --from` builds it (results kept in the catalogue).
+  'from-template': async (input, progress) => {
+    const [{ targetFromTemplate }, { targetToJson }, { catalogueResultCache }, { Catalogue }] = await Promise.all([
+      import('../../match/targetFromTemplate.js'),
+      import('../../series/targetFile.js'),
+      import('../../match/resultCache.js'),
+      import('../../store/catalogue.js'),
+    ]);
+    const { template, nFrom, nTo, cwd, catalogue } = input as { template: string; nFrom: number; nTo: number; cwd: string; catalogue?: string };
+    const cat = catalogue !== undefined ? Catalogue.open(catalogue, { existing: true }) : undefined;
+    try {
+      const target = await targetFromTemplate(template, nFrom, nTo, 'auto', {
+        cwd,
+        ...(cat ? { cache: catalogueResultCache(cat) } : {}),
+        onStep: (key, i, total) => progress(key, i, total),
+      });
+      return targetToJson(target);
+    } finally {
+      cat?.close();
+    }
   },
   // Exercises the worker plumbing in tests: counts to input.n, reporting progress.
   count: async (input, progress) => {

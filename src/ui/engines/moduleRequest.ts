@@ -1,22 +1,18 @@
 /**
  * A module request typed as the options of `gradus module` ("--seed monomial --n 3 …"):
- * parsed with that command's own option table, then turned into the engine's ModuleSpec.
+ * parsed with the request model's own option table for modules, so it means exactly what
+ * the command line means.
  */
-import { moduleCommand } from '../../cli/commands/module.js';
-import { moduleRequestFromArgs, type ModuleRequest } from '../../cli/module-request.js';
-import { parseArgs } from '../../cli/parse-args.js';
+import { moduleKind, type ModuleRequest } from '../../requests/module-request.js';
+import { parseArgs } from '../../requests/options.js';
+import { splitWords } from '../../requests/words.js';
 
 export type { ModuleRequest };
 
-/** Split a line into words; "double quotes" keep spaces (for --poly). */
-export function splitWords(line: string): string[] {
-  const words: string[] = [];
-  const re = /"([^"]*)"|(\S+)/g;
-  for (let m = re.exec(line); m; m = re.exec(line)) words.push(m[1] ?? m[2]!);
-  return words;
-}
+export { splitWords };
 
-/** Parse a typed request with the module command's own option table and mapping. */
-export function parseModuleRequest(line: string): ModuleRequest {
-  return moduleRequestFromArgs(parseArgs(moduleCommand, splitWords(line)));
+/** Parse a typed request with the module request's option table (frobenius always on in the app). */
+export function parseModuleRequest(line: string, cwd = process.cwd()): ModuleRequest {
+  const request = moduleKind.fromArgs(parseArgs(moduleKind, splitWords(line, 'request')), cwd);
+  return { ...request, frobenius: true };
 }

@@ -16,13 +16,13 @@ export const SEARCH_ENGINE_AVAILABLE = true;
 export const APP_CATALOGUE_N_MAX = 5;
 
 export function startSearch(target: Target, cataloguePath: string, onProgress: (p: JobProgress) => void): Job<SearchOutcome> {
-  const job = startJob<{ doc: SearchDocument; id: number; ms: number }>('search', { target: targetToJson(target), catalogue: cataloguePath }, onProgress);
+  const job = startJob<{ doc: SearchDocument; id: number | undefined; ms: number }>('search', { target: targetToJson(target), catalogue: cataloguePath }, onProgress);
   return { result: job.result.then((r) => searchOutcome(r.doc, r.id, r.ms)), cancel: job.cancel };
 }
 
 /** Several targets searched in one worker, in order. */
 export function startSearches(targets: readonly Target[], cataloguePath: string, onProgress: (p: JobProgress) => void): Job<SearchOutcome[]> {
-  const job = startJob<{ doc: SearchDocument; id: number; ms: number }[]>('search-many', { targets: targets.map(targetToJson), catalogue: cataloguePath }, onProgress);
+  const job = startJob<{ doc: SearchDocument; id: number | undefined; ms: number }[]>('search-many', { targets: targets.map(targetToJson), catalogue: cataloguePath }, onProgress);
   return { result: job.result.then((rs) => rs.map((r) => searchOutcome(r.doc, r.id, r.ms))), cancel: job.cancel };
 }
 

@@ -12,7 +12,7 @@ export function triedText(d: SearchDocument): string {
   );
 }
 
-export function searchOutcome(d: SearchDocument, id: number, elapsedMs: number): SearchOutcome {
+export function searchOutcome(d: SearchDocument, id: number | undefined, elapsedMs: number): SearchOutcome {
   const r = d.recognition;
   const recognition: string[] = [];
   if (r.formula) recognition.push(`formula: ${r.formula} (on ${d.range})`);
@@ -32,6 +32,6 @@ export function searchOutcome(d: SearchDocument, id: number, elapsedMs: number):
     tried: triedText(d),
     recognition,
     elapsedMs,
-    json: { ...d, id: `search:${id}` },
+    json: { ...d, ...(id !== undefined ? { id: `search:${id}` } : {}) },
   };
 }

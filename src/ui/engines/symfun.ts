@@ -3,6 +3,7 @@
  * column), evaluated by the same engine entry as the command line in a worker.
  */
 import { InputError } from '../../core/errors.js';
+import { instantiate } from '../../requests/template.js';
 import { parseExpression } from '../../symfun/expression-parser.js';
 import type { Target } from '../../series/target.js';
 import { targetFromJson } from '../../series/targetFile.js';
@@ -41,14 +42,15 @@ export function hasSize(expression: string): boolean {
   return expression.includes('{n}');
 }
 
+/** The expression at size n: {n} and the arithmetic next to it worked out (`e({n}-1)` at 4 is `e(3)`). */
 export function atSize(expression: string, n: number): string {
-  return expression.replaceAll('{n}', String(n));
+  return instantiate(expression, { n }, 'expression');
 }
 
 /** The family's target for n = 1..nTo, built by the search engine's own command runner. */
-export function startSymTarget(expression: string, nTo: number, cwd: string, onProgress: (p: JobProgress) => void): Job<Target> {
+export function startSymTarget(expression: string, nTo: number, cwd: string, catalogue: string | undefined, onProgress: (p: JobProgress) => void): Job<Target> {
   if (expression.includes('"')) throw new InputError('the expression cannot contain a double quote');
   parseExpression(atSize(expression, 1));
-  const job = startJob<unknown>('from-command', { template: `sym "${expression}"`, nFrom: 1, nTo, cwd }, onProgress);
+  const job = startJob<unknown>('from-template', { template: `sym "${expression}"`, nFrom: 1, nTo, cwd, ...(catalogue ? { catalogue } : {}) }, onProgress);
   return { result: job.result.then((j) => targetFromJson(j, 'sym target')), cancel: job.cancel };
 }

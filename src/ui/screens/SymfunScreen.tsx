@@ -15,6 +15,7 @@ import type { ScreenProps } from '../ScreenProps.js';
 import { useTheme } from '../ThemeContext.js';
 import { useEditField } from '../useEditField.js';
 import { useJob } from '../useJob.js';
+import { existingCatalogue } from '../engines/existingCatalogue.js';
 
 export const DEFAULT_EXPRESSION = 'nabla(e({n}))';
 
@@ -41,7 +42,7 @@ export function SymfunScreen(props: ScreenProps) {
     if (hasSize(expr)) {
       props.notify(`evaluating ${expr} for n = 1..${size}…`);
       return family.run(
-        (onProgress) => startSymTarget(expr, size, props.cwd, onProgress),
+        (onProgress) => startSymTarget(expr, size, props.cwd, existingCatalogue(props.env, props.cwd), onProgress),
         (t) => {
           props.addItem({ title: `sym ${expr}, n = 1..${size}`, origin: 'symfun', target: t });
           props.go('search');
