@@ -11,40 +11,10 @@ import { rangeText, type Target, type TargetEntry } from '../series/target.js';
 import { candidateFormula } from './candidateFormula.js';
 import { applyMapping, mappingCost, mappingsFor, type Mapping } from './parameterMapping.js';
 import { sliceMatches } from './sliceSearch.js';
+import type { SearchMatch, SearchOutcome, SearchTried } from './searchTypes.js';
 import { variantsOf } from './variants.js';
 
-export interface SearchMatch {
-  readonly family: string;
-  readonly statistics: readonly string[];
-  readonly combine: MatchCombine;
-  readonly transform: string;
-  readonly variant: string;
-  readonly mapping: string;
-  readonly formula: string;
-  readonly verified: string;
-  readonly verifiedEntries: readonly { n: number; k?: number }[];
-  /** Target entries the catalogue could not check (outside its range or the family's). */
-  readonly unchecked: readonly { n: number; k?: number }[];
-  readonly complete: boolean;
-  readonly cost: number;
-}
-
-export interface SearchTried {
-  readonly anchor: { n: number; k?: number } | null;
-  readonly catalogueMaxN: number;
-  readonly candidates: number;
-  readonly sameCount: number;
-  readonly exactAtAnchor: number;
-  readonly families: readonly string[];
-  readonly statistics: readonly string[];
-  readonly variants: readonly string[];
-  readonly combines: readonly string[];
-}
-
-export interface SearchOutcome {
-  readonly matches: readonly SearchMatch[];
-  readonly tried: SearchTried;
-}
+export type { SearchMatch, SearchOutcome, SearchTried } from './searchTypes.js';
 
 const COMBINE_COST: Record<MatchCombine, number> = { single: 0, shape: 0, joint: 1, fundamental: 1, ifundamental: 1.5, sum: 2, slice: 1.5 };
 

@@ -7,7 +7,7 @@ import { Poly } from '../core/poly.js';
 import type { Catalogue, StoredRow } from '../store/catalogue.js';
 import { qtSeries, seriesEquals } from '../series/series.js';
 import { rangeText, type TargetEntry } from '../series/target.js';
-import type { SearchMatch } from './search.js';
+import type { SearchMatch } from './searchTypes.js';
 
 /** The coefficient of t^j (weight on q) or of q^j (weight on t, read back in q). */
 function slice(p: Poly, j: number, weightOnQ: boolean): Poly {
