@@ -4,11 +4,11 @@
  * or the small exact route over Q), runs it with two primes and compares, and returns the
  * cells with checks and provenance. The command line and the terminal app both call this.
  */
-import { Worker } from 'node:worker_threads';
 import { LimitError } from '../core/errors.js';
 import { CONFIRM_PRIME, DEFAULT_PRIME, PRIMES } from '../core/modp.js';
 import { toBigIntExact } from '../core/rational.js';
 import { makeProvenance } from '../core/provenance.js';
+import { runTask } from '../pool/pool.js';
 import { VERSION } from '../version.js';
 import { moduleChecks } from './checks.js';
 import { primeCoeffs, rationalCoeffs } from './coefficients.js';
@@ -253,18 +253,5 @@ export async function computeModuleAsync(spec: ModuleSpec, options: ModuleOption
 }
 
 function moduleInWorker(spec: ModuleSpec, options: Pick<ModuleOptions, 'frobenius' | 'method' | 'maxWork' | 'prime'>, signal?: AbortSignal): Promise<readonly ModuleCell[]> {
-  return new Promise((resolve, reject) => {
-    const w = new Worker(new URL('./module-worker-entry.mjs', import.meta.url), { workerData: { spec, options: { ...options, onePrime: true } } });
-    const stop = (): void => {
-      void w.terminate();
-      reject(signal?.reason ?? new Error('aborted'));
-    };
-    signal?.addEventListener('abort', stop, { once: true });
-    w.once('message', (cells: readonly ModuleCell[]) => {
-      signal?.removeEventListener('abort', stop);
-      void w.terminate();
-      resolve(cells);
-    });
-    w.once('error', reject);
-  });
+  return runTask<readonly ModuleCell[]>(new URL('./module-task.ts', import.meta.url), 'modulePrime', { spec, options }, { threads: 2, ...(signal ? { signal } : {}) });
 }

@@ -1,15 +1,17 @@
 /**
- * Subgroup ranks on both cores: worker threads take tasks from a queue, smallest groups (the
- * costliest) first, each computing every prime from one enumeration, except a task heavy
- * enough to finish alone, which is split by prime. Only for exact-integer seeds.
+ * Subgroup ranks on every core: the Young-subgroup tasks go to the worker pool, smallest
+ * groups (the costliest) first, each computing every prime from one enumeration, except a
+ * task heavy enough to finish alone, which is split by prime. Only for exact-integer seeds.
  */
 import { availableParallelism } from 'node:os';
-import { Worker } from 'node:worker_threads';
+import { runTask } from '../pool/pool.js';
 import { closurePlan, computedTasks, mirrorHolds, type ClosureHooks, type DerivativeOps } from './derivative-closure.js';
 import type { SeedChi } from './derivative-matrices.js';
-import type { RankWorkerData } from './rank-worker.js';
+import { shared, type RankTaskInput } from './rank-task.js';
 import type { SeedSupport } from './seed-support.js';
 import { groupOrder } from './young-plan.js';
+
+const TASK = new URL('./rank-task.ts', import.meta.url);
 
 export async function parallelRanks(
   seed: SeedSupport,
@@ -28,48 +30,37 @@ export async function parallelRanks(
   const cost = (t: number): number => groupOrder(plan[t]!.blocks) ** -3;
   const sum = order.reduce((s, t) => s + cost(t), 0);
   const all = primes.map((_, pi) => pi);
-  const queue: { task: number; primes: number[] }[] = order.flatMap((task) =>
+  const items: { task: number; primes: number[] }[] = order.flatMap((task) =>
     primes.length > 1 && cost(task) > sum / (2 * threads) ? all.map((pi) => ({ task, primes: [pi] })) : [{ task, primes: all }],
   );
-  const partial = new Map<number, number>(); // task -> primes still missing
   const out = primes.map(() => plan.map(() => [] as number[]));
+  const missing = new Map<number, number>(); // task -> primes still missing
   const { space, ...rest } = seed;
-  const data: RankWorkerData = { space: { n: space.n, hasY: space.hasY, hasTheta: space.hasTheta, radix: space.radix }, seed: rest, ops, chi, primes };
+  const base: Omit<RankTaskInput, 'task' | 'primes'> = {
+    space: { n: space.n, hasY: space.hasY, hasTheta: space.hasTheta, radix: space.radix },
+    seed: { ...rest, keys: shared(rest.keys), coeffs: shared(rest.coeffs), xs: shared(rest.xs), ys: shared(rest.ys), masks: shared(rest.masks) },
+    ops,
+    chi,
+  };
   let done = 0;
-  const workers: Worker[] = [];
-  try {
-    await Promise.all(
-      Array.from({ length: threads }, () => {
-        const w = new Worker(new URL('./rank-worker-entry.mjs', import.meta.url), { workerData: data });
-        workers.push(w);
-        return new Promise<void>((resolve, reject) => {
-          const next = (): void => {
-            if (hooks.signal?.aborted) {
-              reject(hooks.signal.reason ?? new Error('aborted'));
-              return;
-            }
-            const item = queue.shift();
-            w.postMessage(item ?? null);
-            if (item === undefined) resolve();
-          };
-          w.on('message', (msg: { task: number; primes: number[]; ranks: number[][] }) => {
-            msg.primes.forEach((pi, j) => (out[pi]![msg.task] = msg.ranks[j]!));
-            const missing = (partial.get(msg.task) ?? primes.length) - msg.primes.length;
-            partial.set(msg.task, missing);
-            if (missing === 0) {
-              hooks.onTask?.(msg.task, out.map((perPrime) => perPrime[msg.task]!));
-              done++;
-              hooks.onProgress?.(done, total, `task ${plan[msg.task]!.label}`);
-            }
-            next();
-          });
-          w.on('error', reject);
-          next();
-        });
-      }),
-    );
-  } finally {
-    await Promise.all(workers.map((w) => w.terminate()));
-  }
+  const stop = new AbortController(); // the first failure (or the caller's signal) stops the other tasks
+  hooks.signal?.addEventListener('abort', () => stop.abort(), { once: true });
+  // the pool runs `threads` of them at once, in the order given
+  await Promise.all(
+    items.map(async (item) => {
+      const ranks = await runTask<number[][]>(TASK, 'youngTaskRanks', { ...base, task: item.task, primes: item.primes.map((pi) => primes[pi]!) }, { threads, signal: stop.signal }).catch((e: unknown) => {
+        stop.abort();
+        throw e;
+      });
+      item.primes.forEach((pi, j) => (out[pi]![item.task] = ranks[j]!));
+      const left = (missing.get(item.task) ?? primes.length) - item.primes.length;
+      missing.set(item.task, left);
+      if (left === 0) {
+        hooks.onTask?.(item.task, out.map((perPrime) => perPrime[item.task]!));
+        done++;
+        hooks.onProgress?.(done, total, `task ${plan[item.task]!.label}`);
+      }
+    }),
+  );
   return out;
 }

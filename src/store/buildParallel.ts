@@ -3,15 +3,16 @@
  * workers; the main thread merges shards, forms the distributions and writes each unit in
  * its own transaction, as the single-thread build does.
  */
-import { Worker } from 'node:worker_threads';
+import { InputError, LimitError } from '../core/errors.js';
+import { runTask } from '../pool/pool.js';
 import { pendingWork, type BuildOptions, type BuildReport } from './buildCatalogue.js';
 import type { Catalogue } from './catalogue.js';
 import { statsSignature, unitProvenance, type Unit } from './planUnits.js';
 import { mergeRaw, type RawTally } from './rawTally.js';
 import { rowsOfTally } from './tallyUnit.js';
-import type { TallyJob, TallyReply } from './tallyWorker.js';
+import type { TallyJob } from './tally-task.js';
 
-const ENTRY = new URL('./tally-worker-entry.mjs', import.meta.url);
+const TASK = new URL('./tally-task.ts', import.meta.url);
 /** Units with at least this many objects are split into one shard per worker. */
 const SHARD_MIN = 200_000n;
 
@@ -20,11 +21,10 @@ export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & {
   cat.beginBuild({ nMax: o.nMax, ...(o.families ? { families: o.families } : {}), units: plan.units.length });
   const t0 = Date.now();
   const jobs: { unit: Unit; job: TallyJob }[] = [];
-  let nextId = 1;
   for (const unit of todo) {
     const shards = unit.objects >= (o.shardMin ?? SHARD_MIN) && unit.family.visit ? o.workers : 1;
     for (let index = 0; index < shards; index++) {
-      jobs.push({ unit, job: { id: nextId++, family: unit.family.id, params: unit.params, ...(shards > 1 ? { shard: { index, count: shards } } : {}) } });
+      jobs.push({ unit, job: { family: unit.family.id, params: unit.params, ...(shards > 1 ? { shard: { index, count: shards } } : {}) } });
     }
   }
   const pending = new Map<Unit, { left: number; raw?: RawTally; started: number }>();
@@ -36,47 +36,38 @@ export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & {
   let done = 0n;
   let rows = 0;
   o.progress.start(`catalogue build (n ≤ ${o.nMax}, ${o.workers} workers)`, Number(total));
-  const workers = Array.from({ length: Math.min(o.workers, Math.max(jobs.length, 1)) }, () => new Worker(ENTRY));
+  const finishUnit = (unit: Unit, raw: RawTally, started: number): void => {
+    const r = rowsOfTally(unit.family, unit.params, unit.stats, raw);
+    const seconds = (Date.now() - started) / 1000;
+    cat.writeUnit(unit.family.id, unit.params, r.objects, seconds, r.rows,
+      unitProvenance(unit, `exhaustive enumeration, exact integer tallies (${o.workers} worker threads)`, seconds), statsSignature(unit));
+    rows += r.rows.length;
+    done += r.objects;
+    o.progress.update(Number(done));
+    o.onUnit?.(`${unit.family.id} ${JSON.stringify(unit.params)}: ${r.objects} objects, ${r.rows.length} distributions`);
+  };
+  const stop = new AbortController(); // the first failure stops the other jobs
   try {
-    let cursor = 0;
-    const finishUnit = (unit: Unit, raw: RawTally, started: number): void => {
-      const r = rowsOfTally(unit.family, unit.params, unit.stats, raw);
-      const seconds = (Date.now() - started) / 1000;
-      cat.writeUnit(unit.family.id, unit.params, r.objects, seconds, r.rows,
-        unitProvenance(unit, `exhaustive enumeration, exact integer tallies (${o.workers} worker threads)`, seconds), statsSignature(unit));
-      rows += r.rows.length;
-      done += r.objects;
-      o.progress.update(Number(done));
-      o.onUnit?.(`${unit.family.id} ${JSON.stringify(unit.params)}: ${r.objects} objects, ${r.rows.length} distributions`);
-    };
-    await Promise.all(workers.map((w) => new Promise<void>((resolve, reject) => {
-      const next = (): void => {
-        const item = jobs[cursor++];
-        if (!item) return resolve();
-        const state = pending.get(item.unit)!;
+    // the pool runs `workers` jobs at once, in this order; each unit is written when its last shard is in
+    await Promise.all(
+      jobs.map(async ({ unit, job }) => {
+        const state = pending.get(unit)!;
         if (!state.started) state.started = Date.now();
-        const onMessage = (m: TallyReply): void => {
-          if (m.id !== item.job.id) return;
-          w.off('message', onMessage);
-          if ('error' in m) return reject(new Error(`catalogue worker, ${item.unit.family.id} ${JSON.stringify(item.unit.params)}: ${m.error}`));
-          state.raw = state.raw ? mergeRaw(state.raw, m.raw) : m.raw;
-          if (--state.left === 0) {
-            try {
-              finishUnit(item.unit, state.raw, state.started);
-            } catch (e) {
-              return reject(e);
-            }
-          }
-          next();
-        };
-        w.on('message', onMessage);
-        w.postMessage(item.job);
-      };
-      w.once('error', reject);
-      next();
-    })));
+        let raw: RawTally;
+        try {
+          raw = await runTask<RawTally>(TASK, 'tallyJob', job, { threads: o.workers, signal: stop.signal });
+        } catch (e) {
+          stop.abort();
+          throw e instanceof InputError || e instanceof LimitError ? e : new Error(`catalogue worker, ${unit.family.id} ${JSON.stringify(unit.params)}: ${(e as Error).message}`);
+        }
+        state.raw = state.raw ? mergeRaw(state.raw, raw) : raw;
+        if (--state.left === 0) {
+          finishUnit(unit, state.raw, state.started);
+          state.raw = undefined;
+        }
+      }),
+    );
   } finally {
-    await Promise.all(workers.map((w) => w.terminate()));
     o.progress.finish();
   }
   cat.finishBuild();

@@ -153,3 +153,10 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
     return { counted: n };
   },
 };
+
+/** The pool task the app runs: one named task of JOB_TASKS with its input. */
+export async function runJobTask(job: { readonly task: string; readonly input: unknown }, progress: ProgressFn): Promise<unknown> {
+  const run = JOB_TASKS[job.task];
+  if (!run) throw new Error(`no such task ${job.task}`);
+  return run(job.input, progress);
+}
