@@ -1,69 +1,125 @@
 /**
- * Resumable module runs: a JSON-lines file whose first line is the request and whose other
- * lines are finished units of work — a Young-subgroup task (its ranks in every cell, for both
- * primes) or a whole one-prime run (its cells). A line torn by a kill is dropped on reading.
+ * Resumable module runs: a JSON-lines file whose first line names our format and the request,
+ * and whose other lines are finished units of work — a Young-subgroup task (its ranks in every
+ * cell, for both primes) or a whole one-prime run (its cells) — each with a check that ties it
+ * to the request. A file is only written after it has been read as ours: anything else at the
+ * path is refused untouched. A line torn by a kill is dropped; an edited line is refused.
  */
-import { appendFileSync, existsSync, readFileSync, truncateSync, writeFileSync } from 'node:fs';
+import { createHash } from 'node:crypto';
+import { appendFileSync, linkSync, readFileSync, rmSync, statSync, truncateSync, writeFileSync } from 'node:fs';
+import { z } from 'zod';
+import { environmentReason } from '../core/environment-errors.js';
 import { InputError } from '../core/errors.js';
+import { parseWith } from '../core/schema.js';
+import { stableJson } from '../core/stable-json.js';
 import type { ModuleCell } from './module-cell.js';
 
-type Entry = { readonly task: number; readonly ranks: number[][] } | { readonly prime: number; readonly cells: ModuleCell[] };
+const FORMAT = 'gradus-checkpoint';
+const VERSION = 1;
 
-/** JSON with object keys sorted, so equal requests give equal text. */
-function stable(v: unknown): string {
-  if (Array.isArray(v)) return `[${v.map(stable).join(',')}]`;
-  if (v !== null && typeof v === 'object') {
-    const o = v as Record<string, unknown>;
-    return `{${Object.keys(o).filter((k) => o[k] !== undefined).sort().map((k) => `${JSON.stringify(k)}:${stable(o[k])}`).join(',')}}`;
-  }
-  return JSON.stringify(v);
-}
+const COUNT = z.number().int().min(0).max(2 ** 53);
+const TASK_LINE = z.object({ task: z.number().int().min(0).max(100_000), ranks: z.array(z.array(COUNT)), check: z.string() });
+const CELL = z.object({ degree: z.tuple([COUNT, COUNT, COUNT]), dim: COUNT, multiplicities: z.array(z.number().int()).optional() });
+const PRIME_LINE = z.object({ prime: z.number().int().min(2).max(2 ** 26), cells: z.array(CELL), check: z.string() });
+const LINE = z.union([TASK_LINE, PRIME_LINE]);
 
 export class ModuleCheckpoint {
   private readonly tasks = new Map<number, number[][]>();
   private readonly primes = new Map<number, ModuleCell[]>();
+  private readonly header: string;
   /** Units read from the file (not recomputed). */
   readonly reused: number;
 
-  /** Open or create FILE for a request (all fields that affect the result); InputError on mismatch. */
+  /** Open FILE for a request (all fields that affect the result), or create it; InputError on anything else. */
   constructor(readonly file: string, request: Record<string, unknown>) {
-    const header = stable(request);
-    const text = existsSync(file) ? readFileSync(file, 'utf8') : '';
-    const end = text.lastIndexOf('\n') + 1;
-    // drop a torn last line (no newline yet), so appends start on a fresh line
-    if (end < text.length) truncateSync(file, Buffer.byteLength(text.slice(0, end)));
-    const lines = text.slice(0, end).split('\n').filter((l) => l.length > 0);
-    if (lines.length === 0) {
-      try {
-        writeFileSync(file, `${header}\n`);
-      } catch (e) {
-        throw new InputError(`--resume: cannot write ${file} (${(e as Error).message})`, 'resume');
-      }
+    this.header = stableJson({ format: FORMAT, version: VERSION, request });
+    const text = this.readOrCreate();
+    if (text === undefined) {
       this.reused = 0;
       return;
     }
+    const end = text.lastIndexOf('\n') + 1;
+    const lines = text.slice(0, end).split('\n').filter((l) => l.length > 0);
+    this.checkHeader(lines[0], request);
+    for (const [i, line] of lines.slice(1).entries()) this.readLine(line, i + 2);
+    // a torn last line (a kill during an append) is dropped, so appends start on a fresh line;
+    // the file is ours (its first line and every line before were checked)
+    if (end < text.length) truncateSync(file, Buffer.byteLength(text.slice(0, end)));
+    this.reused = this.tasks.size + this.primes.size;
+  }
+
+  /** The file's text, or undefined when it was just created with our first line. */
+  private readOrCreate(): string | undefined {
+    let st;
+    try {
+      st = statSync(this.file);
+    } catch {
+      st = undefined;
+    }
+    if (!st) {
+      // written beside it, then linked in place: the file appears whole, and a file made at
+      // the same moment by another run is never overwritten (link fails on an existing name)
+      const tmp = `${this.file}.${process.pid}.${Date.now()}.tmp`;
+      try {
+        writeFileSync(tmp, `${this.header}\n`, { flag: 'wx' });
+        linkSync(tmp, this.file);
+        return undefined;
+      } catch (e) {
+        if ((e as NodeJS.ErrnoException).code !== 'EEXIST') throw new InputError(`--resume: cannot write ${this.file} (${environmentReason(e) ?? (e as NodeJS.ErrnoException).code ?? (e as Error).message})`, 'resume');
+      } finally {
+        rmSync(tmp, { force: true });
+      }
+      st = statSync(this.file);
+    }
+    if (!st.isFile()) throw new InputError(`--resume: ${this.file} is not a regular file; give a file name for the checkpoint`, 'resume');
+    try {
+      return readFileSync(this.file, 'utf8');
+    } catch (e) {
+      throw new InputError(`--resume: cannot read ${this.file} (${environmentReason(e) ?? (e as Error).message})`, 'resume');
+    }
+  }
+
+  private checkHeader(line: string | undefined, request: Record<string, unknown>): void {
     let first: unknown;
     try {
-      first = JSON.parse(lines[0]!);
+      first = line === undefined ? undefined : JSON.parse(line);
     } catch {
-      throw new InputError(`--resume: ${file} is not a module checkpoint (its first line is not JSON)`, 'resume');
+      first = undefined;
     }
-    if (stable(first) !== header) {
-      const got = (first ?? {}) as Record<string, unknown>;
-      const diff = Object.keys({ ...request, ...got }).filter((k) => stable(got[k]) !== stable(request[k]));
-      throw new InputError(`--resume: ${file} was written for another request (differs in ${diff.join(', ') || 'format'}); use a new file or repeat that request`, 'resume');
+    const o = first as { format?: unknown; version?: unknown; request?: Record<string, unknown> } | undefined;
+    if (!o || o.format !== FORMAT) throw new InputError(`--resume: ${this.file} is not a module checkpoint of gradus; it is left alone (give a new file name)`, 'resume');
+    if (o.version !== VERSION) throw new InputError(`--resume: ${this.file} is a checkpoint of version ${String(o.version)}; this gradus writes version ${VERSION} (give a new file name)`, 'resume');
+    if (stableJson(first) !== this.header) {
+      const got = o.request ?? {};
+      const diff = Object.keys({ ...request, ...got }).filter((k) => stableJson(got[k]) !== stableJson(request[k]));
+      throw new InputError(`--resume: ${this.file} was written for another request (differs in ${diff.join(', ') || 'format'}); use a new file or repeat that request`, 'resume');
     }
-    for (const [i, line] of lines.slice(1).entries()) {
-      let e: Entry;
-      try {
-        e = JSON.parse(line) as Entry;
-      } catch {
-        throw new InputError(`--resume: line ${i + 2} of ${file} is damaged (only a torn last line is dropped); use a new file`, 'resume');
-      }
-      if ('task' in e) this.tasks.set(e.task, e.ranks);
-      else this.primes.set(e.prime, e.cells);
+  }
+
+  private check(payload: unknown): string {
+    return createHash('sha1').update(this.header).update('\n').update(stableJson(payload)).digest('hex').slice(0, 20);
+  }
+
+  private readLine(line: string, lineNo: number): void {
+    let raw: unknown;
+    try {
+      raw = JSON.parse(line);
+    } catch {
+      throw new InputError(`--resume: line ${lineNo} of ${this.file} is damaged (only a torn last line is dropped); use a new file`, 'resume');
     }
-    this.reused = this.tasks.size + this.primes.size;
+    const e = parseWith(LINE, raw, `--resume: line ${lineNo} of ${this.file}`, 'resume');
+    const { check, ...payload } = e;
+    if (check !== this.check(payload)) throw new InputError(`--resume: line ${lineNo} of ${this.file} was changed after gradus wrote it (its check does not match); use a new file`, 'resume');
+    if ('task' in e) this.tasks.set(e.task, e.ranks);
+    else this.primes.set(e.prime, e.cells as ModuleCell[]);
+  }
+
+  private append(payload: Record<string, unknown>): void {
+    try {
+      appendFileSync(this.file, `${JSON.stringify({ ...payload, check: this.check(payload) })}\n`);
+    } catch (e) {
+      throw new InputError(`--resume: cannot write ${this.file} (${environmentReason(e) ?? (e as Error).message})`, 'resume');
+    }
   }
 
   /** Ranks per prime of a recorded task. */
@@ -73,7 +129,7 @@ export class ModuleCheckpoint {
 
   recordTask(task: number, ranks: number[][]): void {
     this.tasks.set(task, ranks);
-    appendFileSync(this.file, `${JSON.stringify({ task, ranks })}\n`);
+    this.append({ task, ranks });
   }
 
   cells(prime: number): ModuleCell[] | undefined {
@@ -82,7 +138,7 @@ export class ModuleCheckpoint {
 
   recordCells(prime: number, cells: readonly ModuleCell[]): void {
     this.primes.set(prime, [...cells]);
-    appendFileSync(this.file, `${JSON.stringify({ prime, cells })}\n`);
+    this.append({ prime, cells: cells.map((c) => ({ degree: c.degree, dim: c.dim, ...(c.multiplicities ? { multiplicities: c.multiplicities } : {}) })) });
   }
 
   note(): string {
