@@ -19,7 +19,7 @@ import { iteratedClosure } from './iterated-closure.js';
 import type { ModuleCell } from './module-cell.js';
 import { ModuleCheckpoint } from './module-checkpoint.js';
 import type { Axis, ModuleResult } from './module-result.js';
-import { estimateModuleWork } from './module-cost.js';
+import { estimateModuleWork, preEstimateWork } from './module-cost.js';
 import { derivativeFamilies, familyName, isDerivativeOnly, parseOperatorFamilies } from './operators.js';
 import { buildSeedPolynomial } from './seed-polynomial.js';
 import { seedSupport } from './seed-support.js';
@@ -69,6 +69,20 @@ function openCheckpoint(file: string, spec: ModuleSpec, options: ModuleOptions, 
 }
 const EXACT_MAX_WORK = 2e8; // about 8 s in module-cost units (the exact route is far slower per unit)
 
+function overLimit(est: { units: number; seconds: number }, limit: number, method: ModuleMethod): LimitError {
+  return new LimitError(
+    `estimated work ${est.units.toExponential(2)} units (about ${Math.round(est.seconds)} s) exceeds the limit ${limit.toExponential(2)}${method === 'exact' ? ' of the exact route: use a modular method' : '; raise it with --max-work'}`,
+    method === 'exact' ? 'method' : 'max-work',
+  );
+}
+
+/** Refuse before building the seed when even the bound from its typed terms is over the limit. */
+function refuseEarly(pre: { units: number; seconds: number }, limit: number, method: ModuleMethod, options: ModuleOptions): void {
+  if (pre.units <= limit) return;
+  options.onEstimate?.(pre.units, pre.seconds);
+  throw overLimit(pre, limit, method);
+}
+
 export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): ModuleResult {
   const t0 = performance.now();
   const ops = parseOperatorFamilies(spec.ops);
@@ -84,20 +98,17 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
   const frob = options.frobenius ?? false;
   const p1 = options.prime ?? DEFAULT_PRIME;
   const p2 = p1 === CONFIRM_PRIME ? DEFAULT_PRIME : CONFIRM_PRIME;
+  const route = method !== 'young' ? 'iterated' : derivOnly ? 'young' : 'polarized';
+  const limit = method === 'exact' ? EXACT_MAX_WORK : options.maxWork ?? DEFAULT_MAX_WORK;
+  refuseEarly(preEstimateWork(terms, spec.n, ops, route), limit, method, options);
 
   const probe = buildSeedPolynomial(spec.n, terms, primeCoeffs(p1), needs);
   const probeSupport = seedSupport(probe.alg.space, p1, probe.f);
   const dops = derivativeFamilies(ops);
   const mirrored = mirrorHolds([probeSupport], dops); // one seed, same degree for every prime
-  const est = estimateModuleWork(probeSupport, ops, method !== 'young' ? 'iterated' : derivOnly ? 'young' : 'polarized', probe.character === 'sign' && mirrored);
+  const est = estimateModuleWork(probeSupport, ops, route, probe.character === 'sign' && mirrored, probe.character !== 'none');
   options.onEstimate?.(est.units, est.seconds);
-  const limit = method === 'exact' ? EXACT_MAX_WORK : options.maxWork ?? DEFAULT_MAX_WORK;
-  if (est.units > limit) {
-    throw new LimitError(
-      `estimated work ${est.units.toExponential(2)} units (about ${Math.round(est.seconds)} s) exceeds the limit ${limit.toExponential(2)}${method === 'exact' ? ' of the exact route: use a modular method' : '; raise it with --max-work'}`,
-      method === 'exact' ? 'method' : 'max-work',
-    );
-  }
+  if (est.units > limit) throw overLimit(est, limit, method);
   const character = probe.character;
   const frobOk = frob && character !== 'none';
   const notes: string[] = [];
@@ -214,12 +225,13 @@ export async function computeModuleAsync(spec: ModuleSpec, options: ModuleOption
   const needs = { y: polar || ops.some((o) => o.kind === 'y'), polar };
   const p1 = options.prime ?? DEFAULT_PRIME;
   const p2 = p1 === CONFIRM_PRIME ? DEFAULT_PRIME : CONFIRM_PRIME;
+  const young = (method === 'auto' || method === 'young') && (derivOnly || polarizationReducible(ops));
+  refuseEarly(preEstimateWork(terms, spec.n, ops, !young ? 'iterated' : derivOnly ? 'young' : 'polarized'), options.maxWork ?? DEFAULT_MAX_WORK, method, options);
   const probe = buildSeedPolynomial(spec.n, terms, primeCoeffs(p1), needs);
   const support = seedSupport(probe.alg.space, p1, probe.f);
-  const young = (method === 'auto' || method === 'young') && (derivOnly || polarizationReducible(ops));
   const chi = probe.character === 'sign' ? -1 : probe.character === 'trivial' ? 1 : 0;
   const dops = derivativeFamilies(ops);
-  const est = estimateModuleWork(support, ops, !young ? 'iterated' : derivOnly ? 'young' : 'polarized', chi === -1 && mirrorHolds([support], dops));
+  const est = estimateModuleWork(support, ops, !young ? 'iterated' : derivOnly ? 'young' : 'polarized', chi === -1 && mirrorHolds([support], dops), chi !== 0);
   const limit = options.maxWork ?? DEFAULT_MAX_WORK;
   if (est.seconds < (options.parallelAboveSeconds ?? PARALLEL_THRESHOLD_SECONDS) || est.units > limit) return computeModule(spec, options);
   options.onEstimate?.(est.units, est.seconds);

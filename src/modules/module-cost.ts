@@ -9,6 +9,7 @@
  */
 import { derivativeFamilies, type OperatorFamily } from './operators.js';
 import type { SeedSupport } from './seed-support.js';
+import type { SeedTerms } from './seeds.js';
 import { groupOrder, youngPlan } from './young-plan.js';
 
 // measured on the derivative route (Vandermonde n = 8 and 9, δ_{8,k}; both primes, CPU time)
@@ -20,6 +21,8 @@ const SECONDS_PER_UNIT_POLAR = 4e-6;
 const SECONDS_PER_POLARIZED_PAIR = 3e-6;
 /** Orbits of seed terms looked at for the matrix sizes (antisymmetrized seeds have one). */
 const MAX_ORBITS = 64;
+/** Divisor steps walked for the matrix sizes before scaling up from the terms seen. */
+const MAX_STEPS = 500_000;
 
 export interface ModuleWork {
   readonly units: number;
@@ -30,32 +33,24 @@ export interface ModuleWork {
  * Routes: 'young' (derivative closures), 'polarized' (polarizations normal-ordered into the
  * derivative closures of the seeds P_J f), 'iterated' (anything else).
  */
-export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFamily[], route: 'young' | 'polarized' | 'iterated', mirrored = false): ModuleWork {
+export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFamily[], route: 'young' | 'polarized' | 'iterated', mirrored = false, symmetric = true): ModuleWork {
   const n = seed.space.n;
   if (route === 'polarized') {
     // one derivative closure per candidate seed P_J f: the multisets J of the polarization
     // orders with Σ J ≤ the x-degree (measured on δ_{6,k} and δ_{7,3}: within a factor 5 above)
-    const single = estimateModuleWork(seed, ops, 'young');
+    const single = estimateModuleWork(seed, ops, 'young', false, symmetric);
     const orders = ops.flatMap((o) => (o.kind === 'polar' ? [o.order] : []));
     const seconds = single.units * multisetsUpTo(orders, seed.degree[0]) * SECONDS_PER_POLARIZED_PAIR;
     return { units: seconds / SECONDS_PER_UNIT, seconds };
   }
-  let boxes = 1;
-  for (let i = 0; i < n; i++) {
-    boxes *= (seed.xs[i]! + 1) * (seed.ys[i]! + 1) * (((seed.masks[0] ?? 0) >> i) & 1 ? 2 : 1);
-  }
-  if (route !== 'young') {
-    const polar = ops.some((o) => o.kind === 'polar');
-    const steps = seed.count * boxes * ops.length * (polar ? 4 * n : 1);
-    const units = (steps * SECONDS_PER_UNIT_POLAR) / SECONDS_PER_UNIT;
-    return { units, seconds: units * SECONDS_PER_UNIT };
-  }
-  // mirrored tasks (young-plan) cost nothing
-  const plan = youngPlan(n, mirrored).filter((t) => t.mirrorOf === undefined);
-  let shrink = 0;
-  for (const t of plan) shrink += 1 / groupOrder(t.blocks);
-  const units = seed.count * boxes * shrink;
-  const sizes = cellSizes(seed, derivativeFamilies(ops));
+  // Σ over the terms of their divisor boxes: the pairs (term, operator monomial) enumerated
+  let boxes = 0;
+  for (let t = 0; t < seed.count; t++) boxes += termBox(seed.xs.subarray(t * n, t * n + n), seed.ys.subarray(t * n, t * n + n), seed.masks[t] ?? 0);
+  if (route !== 'young') return iteratedWork(boxes, n, ops);
+  // a seed S_n does not act on is one task over the trivial group, its matrices whole
+  const units = symmetric ? boxes * planShrink(n, mirrored) : boxes;
+  const plan = symmetric ? youngPlan(n, mirrored).filter((t) => t.mirrorOf === undefined) : [{ blocks: new Array<number>(n).fill(1) }];
+  const sizes = cellSizes(seed, derivativeFamilies(ops), symmetric);
   let elimination = 0;
   for (const t of plan) {
     const g = groupOrder(t.blocks);
@@ -70,11 +65,67 @@ export function estimateModuleWork(seed: SeedSupport, ops: readonly OperatorFami
   return { units: total, seconds: total * SECONDS_PER_UNIT };
 }
 
+/** Divisors of one term x^a y^b θ_S: Π (a_i + 1)(b_i + 1) · 2^|S|. */
+function termBox(xs: ArrayLike<number>, ys: ArrayLike<number>, mask: number): number {
+  let box = 1;
+  for (let i = 0; i < xs.length; i++) box *= (xs[i]! + 1) * ((ys[i] ?? 0) + 1) * ((mask >> i) & 1 ? 2 : 1);
+  return box;
+}
+
+/** Σ 1/|G| over the computed tasks of the plan (mirrored tasks cost nothing). */
+function planShrink(n: number, mirrored: boolean): number {
+  let shrink = 0;
+  for (const t of youngPlan(n, mirrored)) if (t.mirrorOf === undefined) shrink += 1 / groupOrder(t.blocks);
+  return shrink;
+}
+
+function iteratedWork(boxes: number, n: number, ops: readonly OperatorFamily[]): ModuleWork {
+  const polar = ops.some((o) => o.kind === 'polar');
+  const steps = boxes * ops.length * (polar ? 4 * n : 1);
+  const units = (steps * SECONDS_PER_UNIT_POLAR) / SECONDS_PER_UNIT;
+  return { units, seconds: units * SECONDS_PER_UNIT };
+}
+
+/** n! / Π (multiplicity of each variable's (x, y, θ) column)!: the monomials in a term's S_n-orbit. */
+function orbitSize(t: { readonly x: readonly number[]; readonly y: readonly number[]; readonly mask: number }, n: number): number {
+  const counts = new Map<string, number>();
+  for (let i = 0; i < n; i++) {
+    const key = `${t.x[i] ?? 0},${t.y[i] ?? 0},${(t.mask >> i) & 1}`;
+    counts.set(key, (counts.get(key) ?? 0) + 1);
+  }
+  let size = 1;
+  let k = 0;
+  for (const c of counts.values()) for (let j = 1; j <= c; j++) size = (size * ++k) / j;
+  return size;
+}
+
 /**
- * (operator monomials, target monomials) of every cell, counted as whole S_n-orbits of the
- * divisors of the seed's terms (one term per orbit).
+ * Before the seed is built (which for a symmetrized seed holds up to n! terms per typed term):
+ * a bound of the enumeration work from the typed terms alone, so that a request far past the
+ * limit is refused at once instead of after minutes of building. Elimination is left out: the
+ * full estimate follows once the seed is built.
  */
-export function cellSizes(seed: SeedSupport, fam: { x: boolean; y: boolean; theta: boolean }): [number, number][] {
+export function preEstimateWork(terms: SeedTerms, n: number, ops: readonly OperatorFamily[], route: 'young' | 'polarized' | 'iterated'): ModuleWork {
+  let boxes = 0;
+  // a symmetrized term spreads over its S_n-orbit, n!/|stabilizer| terms of the same box
+  for (const t of terms.raw.values()) boxes += termBox(t.x, t.y, t.mask) * (terms.symmetrizer === 'none' ? 1 : orbitSize(t, n));
+  if (route === 'iterated') return iteratedWork(boxes, n, ops);
+  // with the mirrored (smaller) plan this stays below the full estimate: refusing on it is safe
+  const units = boxes * planShrink(n, true);
+  if (route === 'young') return { units, seconds: units * SECONDS_PER_UNIT };
+  const orders = ops.flatMap((o) => (o.kind === 'polar' ? [o.order] : []));
+  let xDegree = 0;
+  for (const t of terms.raw.values()) xDegree = Math.max(xDegree, t.x.reduce((a, b) => a + b, 0));
+  const seconds = units * multisetsUpTo(orders, xDegree) * SECONDS_PER_POLARIZED_PAIR;
+  return { units: seconds / SECONDS_PER_UNIT, seconds };
+}
+
+/**
+ * (operator monomials, target monomials) of every cell: for a symmetric seed, whole S_n-orbits
+ * of the divisors of the seed's terms (one term per orbit); otherwise the divisors themselves.
+ * Past a budget of steps the counts are scaled by the share of terms seen.
+ */
+export function cellSizes(seed: SeedSupport, fam: { x: boolean; y: boolean; theta: boolean }, symmetric = true): [number, number][] {
   const n = seed.space.n;
   const fact = [1];
   for (let i = 1; i <= n; i++) fact.push(fact[i - 1]! * i);
@@ -108,23 +159,27 @@ export function cellSizes(seed: SeedSupport, fam: { x: boolean; y: boolean; thet
       sorted[j + 1] = l;
     }
     let key = 0;
-    for (let i = 0; i < n; i++) key = (key * 512 + sorted[i]!) % HASH_P;
+    for (let i = 0; i < n; i++) key = (key * 512 + (symmetric ? sorted[i]! : letters[i]!)) % HASH_P;
     let m = table.get(cell);
     if (!m) table.set(cell, (m = new Map()));
-    if (!m.has(key)) m.set(key, orbitSize(sorted));
+    if (!m.has(key)) m.set(key, symmetric ? orbitSize(sorted) : 1);
   };
   const R = seed.space.radix;
-  for (let t = 0; t < seed.count && seenTerms.size < MAX_ORBITS; t++) {
+  let steps = 0;
+  let t = 0;
+  for (; t < seed.count && seenTerms.size < (symmetric ? MAX_ORBITS : Infinity) && steps < MAX_STEPS; t++) {
     const x = Array.from(seed.xs.subarray(t * n, (t + 1) * n));
     const y = Array.from(seed.ys.subarray(t * n, (t + 1) * n));
     const th = Array.from({ length: n }, (_, i) => (seed.masks[t]! >> i) & 1);
-    const orbitKey = x.map((v, i) => (v * R + y[i]!) * 2 + th[i]!).sort((a, b) => a - b).join(',');
+    const columns = x.map((v, i) => (v * R + y[i]!) * 2 + th[i]!);
+    const orbitKey = (symmetric ? [...columns].sort((a, b) => a - b) : columns).join(',');
     if (seenTerms.has(orbitKey)) continue;
     seenTerms.add(orbitKey);
     const op = new Array<number>(n).fill(0);
     const tg = new Array<number>(n).fill(0);
     const walk = (i: number, dx: number, dy: number, dt: number): void => {
       if (i === n) {
+        steps++;
         const cell = (dx * 1024 + dy) * 1024 + dt;
         note(ops, cell, op);
         note(targets, cell, tg);
@@ -140,7 +195,9 @@ export function cellSizes(seed: SeedSupport, fam: { x: boolean; y: boolean; thet
     };
     walk(0, 0, 0, 0);
   }
-  const total = (m: Map<number, number> | undefined): number => [...(m?.values() ?? [])].reduce((s, v) => s + v, 0);
+  // terms not looked at (budget spent): scale as if they were like the ones seen
+  const scale = !symmetric && t < seed.count ? seed.count / t : 1;
+  const total = (m: Map<number, number> | undefined): number => scale * [...(m?.values() ?? [])].reduce((s, v) => s + v, 0);
   return [...targets.keys()].map((cell) => [total(ops.get(cell)), total(targets.get(cell))]);
 }
 

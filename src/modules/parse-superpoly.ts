@@ -7,7 +7,7 @@
  */
 import { InputError } from '../core/errors.js';
 import { frac } from '../core/rational.js';
-import { rawConstant, rawMonomial, rawProduct, rawSum, type RawPoly } from './raw-superpoly.js';
+import { rawAdd, rawConstant, rawMonomial, rawProduct, type RawPoly, type RawTerm } from './raw-superpoly.js';
 
 const MAX_POWER = 64;
 
@@ -20,14 +20,22 @@ export function parseSuperpoly(text: string, n: number, option = 'poly'): RawPol
   const skip = (): void => {
     while (pos < text.length && /\s/.test(text[pos]!)) pos++;
   };
+  // sticky patterns read at pos without copying the rest of the text (long seeds stay linear)
+  const at = (re: RegExp): RegExpExecArray | null => {
+    re.lastIndex = pos;
+    return re.exec(text);
+  };
+  const INTEGER = /\d+/y;
+  const VARIABLE = /(x|y|th|θ)(\d+)/y;
+  const WORD = /[A-Za-z_θ]\w*/y;
   const integer = (): bigint => {
-    const m = /^\d+/.exec(text.slice(pos));
+    const m = at(INTEGER);
     if (!m) return fail('expected a number');
     pos += m[0].length;
     return BigInt(m[0]);
   };
   const variable = (): RawPoly | undefined => {
-    const m = /^(x|y|th|θ)(\d+)/.exec(text.slice(pos));
+    const m = at(VARIABLE);
     if (!m) return undefined;
     const start = pos;
     const index = Number(m[2]);
@@ -67,7 +75,7 @@ export function parseSuperpoly(text: string, n: number, option = 'poly'): RawPol
     }
     const v = variable();
     if (v) return v;
-    const word = /^[A-Za-z_θ]\w*/.exec(text.slice(pos));
+    const word = at(WORD);
     return fail(word ? `unknown variable "${word[0]}" (use x1..x${n}, y1..y${n}, th1..th${n})` : `unexpected "${c}"`);
   };
   const factor = (): RawPoly => {
@@ -99,13 +107,18 @@ export function parseSuperpoly(text: string, n: number, option = 'poly'): RawPol
       sign = text[pos] === '-' ? -1 : 1;
       pos++;
     }
-    let r = rawSum(new Map(), term(), sign);
+    // one sum added into in place (a copy per term would make long seeds quadratic)
+    const r = new Map<string, RawTerm>();
+    const add = (p: RawPoly, sg: number): void => {
+      for (const t of p.values()) rawAdd(r, t.x, t.y, t.mask, sg < 0 ? t.coeff.neg() : t.coeff);
+    };
+    add(term(), sign);
     for (;;) {
       skip();
       const c = text[pos];
       if (c !== '+' && c !== '-') return r;
       pos++;
-      r = rawSum(r, term(), c === '-' ? -1 : 1);
+      add(term(), c === '-' ? -1 : 1);
     }
   }
   if (text.trim() === '') throw new InputError(`--${option}: empty superpolynomial`, option);

@@ -61,9 +61,16 @@ function lex(src: string): Token[] {
   return out;
 }
 
+/** Deepest nesting read (parentheses, calls, signs, chains of operations): far above any formula, far below the stack. */
+export const MAX_NESTING = 200;
+
 export function parseExpression(src: string): Node {
   const toks = lex(src);
   let pos = 0;
+  let depth = 0;
+  const enter = (tok: Token): void => {
+    if (++depth > MAX_NESTING) throw new InputError(`column ${tok.col}: the expression nests deeper than ${MAX_NESTING} levels`, 'expression');
+  };
   const peek = (): Token => toks[pos]!;
   const fail = (tok: Token, what: string): never => {
     const got = tok.type === 'end' ? 'the end of the expression' : `"${tok.text}"`;
@@ -94,7 +101,10 @@ export function parseExpression(src: string): Node {
   const factor = (): Node => {
     if (isOp('-')) {
       const op = toks[pos++]!;
-      return { kind: 'neg', arg: factor(), col: op.col };
+      enter(op);
+      const arg = factor();
+      depth--;
+      return { kind: 'neg', arg, col: op.col };
     }
     return power();
   };
@@ -117,14 +127,17 @@ export function parseExpression(src: string): Node {
     }
     if (tok.type === 'op' && tok.text === '(') {
       pos++;
+      enter(tok);
       const inner = expression();
       expect(')');
+      depth--;
       return inner;
     }
     if (tok.type === 'id') {
       pos++;
       if (isOp('(')) {
         pos++;
+        enter(tok);
         const args: Arg[] = [];
         if (!isOp(')')) {
           for (;;) {
@@ -138,6 +151,7 @@ export function parseExpression(src: string): Node {
           }
         }
         expect(')');
+        depth--;
         return { kind: 'call', name: tok.text, args, col: tok.col };
       }
       if (tok.text === 'q' || tok.text === 't') return { kind: 'var', name: tok.text, col: tok.col };
@@ -161,5 +175,34 @@ export function parseExpression(src: string): Node {
   if (peek().type === 'end') throw new InputError('column 1: the expression is empty', 'expression');
   const root = expression();
   if (peek().type !== 'end') fail(peek(), 'an operator (+, -, *, /, ^) or the end of the expression');
+  // a long chain a+b+c+… is a deep tree for the evaluator: bound the whole depth, not only the nesting
+  if (treeDepth(root) > 4 * MAX_NESTING) throw new InputError(`the expression is ${treeDepth(root)} operations deep; at most ${4 * MAX_NESTING} are evaluated (sum fewer terms at once)`, 'expression');
   return root;
+}
+
+function children(n: Node): Node[] {
+  switch (n.kind) {
+    case 'bin':
+      return [n.left, n.right];
+    case 'neg':
+      return [n.arg];
+    case 'pow':
+      return [n.base];
+    case 'call':
+      return n.args.map((a) => (a.kind === 'assign' ? a.value : a.expr));
+    default:
+      return [];
+  }
+}
+
+/** Depth of the tree, walked without recursion. */
+function treeDepth(root: Node): number {
+  let deepest = 0;
+  const stack: [Node, number][] = [[root, 1]];
+  while (stack.length) {
+    const [n, d] = stack.pop()!;
+    deepest = Math.max(deepest, d);
+    for (const c of children(n)) stack.push([c, d + 1]);
+  }
+  return deepest;
 }

@@ -10,3 +10,30 @@ describe('cost estimate helpers', () => {
     expect(multisetsUpTo([2, 2], 4)).toBe(3);
   });
 });
+
+describe('estimates before the seed is built', () => {
+  it('Vandermonde n = 10 is refused from its typed term alone, naming --max-work (no 10! terms are built)', async () => {
+    const { computeModule } = await import('../../src/modules/compute-module.js');
+    const { LimitError } = await import('../../src/core/errors.js');
+    const seen: number[] = [];
+    const run = (): unknown => computeModule({ seed: 'vandermonde', n: 10, ops: ['x'] }, { onEstimate: (units) => seen.push(units) });
+    expect(run).toThrow(LimitError);
+    expect(run).toThrow(/raise it with --max-work/);
+    expect(seen[0]).toBeGreaterThan(1.5e10);
+  });
+  it('the bound from typed terms stays below the full estimate (refusing on it is safe): Vandermonde n = 7, δ_{6,3}', async () => {
+    const { preEstimateWork, estimateModuleWork } = await import('../../src/modules/module-cost.js');
+    const { seedTerms } = await import('../../src/modules/seeds.js');
+    const { buildSeedPolynomial } = await import('../../src/modules/seed-polynomial.js');
+    const { seedSupport } = await import('../../src/modules/seed-support.js');
+    const { primeCoeffs } = await import('../../src/modules/coefficients.js');
+    const { parseOperatorFamilies } = await import('../../src/modules/operators.js');
+    for (const spec of [{ seed: 'vandermonde' as const, n: 7 }, { seed: 'superspace-vandermonde' as const, n: 6, k: 3 }]) {
+      const ops = parseOperatorFamilies(['x', 'theta']);
+      const terms = seedTerms(spec);
+      const sp = buildSeedPolynomial(spec.n, terms, primeCoeffs(67108859), { y: false, polar: false });
+      const full = estimateModuleWork(seedSupport(sp.alg.space, 67108859, sp.f), ops, 'young', true);
+      expect(preEstimateWork(terms, spec.n, ops, 'young').units).toBeLessThanOrEqual(full.units);
+    }
+  });
+});
