@@ -2,11 +2,19 @@
 // Starts gradus from its TypeScript sources (tsx compiles them on the fly).
 import { register } from 'tsx/esm/api';
 
-// A reader that closes the pipe early (`gradus show … | head`) ends the run quietly.
+// A reader that closes the pipe early (`gradus show | head`) ends the run quietly; output that
+// cannot be written (a full disk) is one line on stderr and exit code 2, never a stack trace.
 for (const stream of [process.stdout, process.stderr]) {
   stream.on('error', (e) => {
     if (e && e.code === 'EPIPE') process.exit(0);
-    throw e;
+    if (stream === process.stdout) {
+      try {
+        process.stderr.write(`gradus: cannot write the output (${e && e.code === 'ENOSPC' ? 'the disk is full' : (e && e.code) || String(e)})\n`);
+      } catch {
+        // stderr is gone too: the exit code says it
+      }
+    }
+    process.exit(2);
   });
 }
 

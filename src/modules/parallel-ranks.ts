@@ -3,6 +3,7 @@
  * groups (the costliest) first, each computing every prime from one enumeration, except a
  * task heavy enough to finish alone, which is split by prime. Only for exact-integer seeds.
  */
+import { setMaxListeners } from 'node:events';
 import { availableParallelism } from 'node:os';
 import { runTask } from '../pool/pool.js';
 import { closurePlan, computedTasks, mirrorHolds, type ClosureHooks, type DerivativeOps } from './derivative-closure.js';
@@ -43,7 +44,8 @@ export async function parallelRanks(
     chi,
   };
   let done = 0;
-  const stop = new AbortController(); // the first failure (or the caller's signal) stops the other tasks
+  const stop = new AbortController();
+  setMaxListeners(0, stop.signal); // one listener per task in the pool // the first failure (or the caller's signal) stops the other tasks
   hooks.signal?.addEventListener('abort', () => stop.abort(), { once: true });
   // the pool runs `threads` of them at once, in the order given
   await Promise.all(

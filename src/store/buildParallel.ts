@@ -3,6 +3,7 @@
  * workers; the main thread merges shards, forms the distributions and writes each unit in
  * its own transaction, as the single-thread build does.
  */
+import { setMaxListeners } from 'node:events';
 import { InputError, LimitError } from '../core/errors.js';
 import { runTask } from '../pool/pool.js';
 import { pendingWork, type BuildOptions, type BuildReport } from './buildCatalogue.js';
@@ -46,7 +47,8 @@ export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & {
     o.progress.update(Number(done));
     o.onUnit?.(`${unit.family.id} ${JSON.stringify(unit.params)}: ${r.objects} objects, ${r.rows.length} distributions`);
   };
-  const stop = new AbortController(); // the first failure stops the other jobs
+  const stop = new AbortController();
+  setMaxListeners(0, stop.signal); // one listener per task in the pool // the first failure stops the other jobs
   try {
     // the pool runs `workers` jobs at once, in this order; each unit is written when its last shard is in
     await Promise.all(

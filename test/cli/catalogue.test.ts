@@ -35,6 +35,15 @@ describe('gradus catalogue', () => {
     expect(await exited).toBe('SIGKILL'); // killed, not finished
     const info = runCli(['catalogue', 'info', '--catalogue', path, '--json']);
     expect(info.code, info.stderr).toBe(0);
+    // the catalogue says its build is unfinished, and so does every answer from it
+    expect(JSON.parse(info.stdout).unfinished).toMatch(/unfinished or still running .* gradus catalogue build --n-max 8/);
+    const text = runCli(['catalogue', 'info', '--catalogue', path]);
+    expect(text.stdout).toMatch(/^warning: the catalogue's last build .* is unfinished/m);
+    const answer = runCli(['search', '--coeffs', 'n=3:1,2,2,1', '--catalogue', path]);
+    expect(answer.code, answer.stderr).toBe(0);
+    expect(answer.stdout).toMatch(/^warning: the catalogue's last build/m);
+    const answerJson = runCli(['search', '--coeffs', 'n=3:1,2,2,1', '--catalogue', path, '--json']);
+    expect(JSON.parse(answerJson.stdout).provenance.notes.join(' ')).toMatch(/unfinished/);
     const db = new Database(path, { readonly: true });
     // every stored distribution belongs to a unit marked finished (no half-written unit)
     const orphans = db.prepare('SELECT COUNT(*) AS c FROM distributions d WHERE NOT EXISTS (SELECT 1 FROM units u WHERE u.family = d.family AND u.params = d.params)').get() as { c: number };
@@ -45,6 +54,7 @@ describe('gradus catalogue', () => {
     const again = runCli(['catalogue', 'build', '--n-max', '2', '--catalogue', path, '--json']);
     expect(again.code, again.stderr).toBe(0);
     expect(JSON.parse(again.stdout).skippedDone).toBeGreaterThan(0);
+    expect(JSON.parse(runCli(['catalogue', 'info', '--catalogue', path, '--json']).stdout).unfinished).toBeUndefined();
   }, 120_000);
   it('a damaged catalogue is reported with the command that rebuilds it, and rebuild sets it aside', { timeout: 60_000 }, () => {
     const dir = mkdtempSync(join(tmpdir(), 'gradus-bad-'));

@@ -54,11 +54,20 @@ function printReport(io: CommandIO, path: string, nMax: number, report: BuildRep
 async function rebuild(path: string, args: ParsedArgs, io: CommandIO): Promise<void> {
   const o = buildOptions(args, io, true);
   const json = flagOpt(args, 'json');
-  const present = inspectCatalogueFile(path); // a folder is refused here
-  if (present.kind === 'sqlite' && present.applicationId !== GRADUS_APPLICATION_ID && present.applicationId !== 0 && !flagOpt(args, 'force')) {
+  const force = flagOpt(args, 'force');
+  let present: ReturnType<typeof inspectCatalogueFile>;
+  try {
+    present = inspectCatalogueFile(path); // a folder is refused here
+  } catch (e) {
+    // a file gradus did not write is set aside only when asked by name
+    if (!(e instanceof ForeignFileError)) throw e;
+    if (!force) throw new InputError(`${e.message.replace(/ \(give another --catalogue path\)$/, '')}; rebuild sets it aside only when asked by name: add --force`, 'force');
+    present = { kind: 'empty' };
+  }
+  if (present.kind === 'sqlite' && present.applicationId !== GRADUS_APPLICATION_ID && present.applicationId !== 0 && !force) {
     throw new InputError(`${path} is not a gradus catalogue; rebuild sets it aside only when asked by name: add --force`, 'force');
   }
-  if (present.kind === 'sqlite' && present.applicationId === 0 && !flagOpt(args, 'force')) {
+  if (present.kind === 'sqlite' && present.applicationId === 0 && !force) {
     // an old catalogue of ours (perhaps damaged), or another program's database: opening tells them apart
     try {
       Catalogue.open(path, { existing: true }).close();

@@ -52,6 +52,7 @@ export const exportCommand: CommandSpec = {
     if (!format || !(format in FORMATS)) throw new InputError(`--format must be one of ${Object.keys(FORMATS).join(', ')} (got ${format === undefined ? 'nothing' : `"${format}"`})`, 'format');
     const out = strOpt(args, 'out');
     if (!out) throw new InputError('export needs --out FILE', 'out');
+    if (/[/\\]$/.test(out)) throw new InputError(`--out: ${out} names a folder; give a file name`, 'out');
     const path = resolve(io.cwd, out);
     checkWritable(path, flagOpt(args, 'force'));
     const doc = readResult(args.positionals[0]!, args, io);

@@ -85,6 +85,7 @@ export const searchCommand: CommandSpec = {
     const range = parseRange(strOpt(args, 'n-range'));
     // --save is checked before any work: an existing file (without --force) or a missing folder fails now
     const saveText = strOpt(args, 'save');
+    if (saveText !== undefined && /[/\\]$/.test(saveText)) throw new InputError(`--save: ${saveText} names a folder; give a file name`, 'save');
     const save = saveText === undefined ? undefined : resolve(io.cwd, saveText);
     if (save) checkWritable(save, flagOpt(args, 'force'), 'save');
     else if (flagOpt(args, 'force')) throw new InputError('--force goes with --save', 'force');
