@@ -5,7 +5,7 @@ import { flagsText } from './flagsText.js';
 
 export function seriesText(s: Series): string {
   if (s.kind === 'q' || s.kind === 'qt') return s.poly.toString();
-  if (s.kind === 'schur') return [...s.terms].sort(byPartitionKey).map(([l, c]) => `(${c.toString()}) s[${l}]`).join(' + ') || '0';
+  if (s.kind === 'schur') return [...s.terms].sort(byPartitionKey).map(([l, c]) => `(${c.toString()}) s(${l})`).join(' + ') || '0';
   return [...s.terms].map(([e, c]) => `${c}·x^(${e})`).join(' + ');
 }
 

@@ -30,7 +30,7 @@ export function moduleChecks(n: number, cells: readonly ModuleCell[], axes: read
     findings.push({
       check: 'Schur positivity',
       holds: !bad,
-      detail: bad ? `fails at ${label(coords(bad))}: s[${partitionKey(shapes[bad.multiplicities!.findIndex((m) => m < 0)]!)}] has a negative coefficient` : 'every coefficient of every cell is ≥ 0',
+      detail: bad ? `fails at ${label(coords(bad))}: s(${partitionKey(shapes[bad.multiplicities!.findIndex((m) => m < 0)]!)}] has a negative coefficient` : 'every coefficient of every cell is ≥ 0',
     });
   } else findings.push({ check: 'Schur positivity', holds: null, detail: 'no Frobenius series (S_n does not act, or not requested)' });
 

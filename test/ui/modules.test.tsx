@@ -18,7 +18,7 @@ describe('Modules screen', () => {
     // θ-degree 0 row 1 3 5 3, θ-degree 1 row 3 5 3 1 — total 24 = 4!.
     expect(f).toMatch(/θ0 +\[. 1\] +. 3 +. 5 +. 3/);
     expect(f).toMatch(/θ1 +. 3 +. 5 +. 3 +. 1/);
-    expect(f).toContain('Frob(θ0 x0) s[3]');
+    expect(f).toContain('Frob(θ0 x0) s(3)');
     expect(f).toContain('✓ holds Frobenius table invariant under ω with a half-turn');
     expect(fits(f, 80, 24)).toBe(true);
     // Arrows move the selected cell; its Frobenius series follows.

@@ -14,6 +14,7 @@ import { Catalogue } from '../../store/catalogue.js';
 import { cataloguePath } from '../../store/cataloguePath.js';
 import { exportItem, EXPORT_ENGINE_AVAILABLE, type ExportDone } from '../engines/exporter.js';
 import { startModule } from '../engines/modules.js';
+import { existingCatalogue } from '../engines/existingCatalogue.js';
 import { tableOf, type ModuleOutcome } from '../engines/moduleTypes.js';
 import { APP_CATALOGUE_N_MAX, startCatalogueBuild, startSearches } from '../engines/search.js';
 import type { SearchOutcome } from '../engines/searchTypes.js';
@@ -94,9 +95,9 @@ function chooseCatalogue(env: DemoEnv): { path: string; note: string; ready: boo
 export const DEMO_STEPS: readonly DemoStep[] = [
   {
     title: `The module of ${demoSeedText(DEMO_SHOWN_N)} under ∂x, ∂θ (and its family, n = ${DEMO_NS.join(', ')})`,
-    async run(state, _env, runJob, onProgress) {
+    async run(state, env, runJob, onProgress) {
       const modules: ModuleOutcome[] = [];
-      for (const n of DEMO_NS) modules.push(await runJob(startModule(demoRequest(n), onProgress)));
+      for (const n of DEMO_NS) modules.push(await runJob(startModule(demoRequest(n), onProgress, existingCatalogue(env.env, env.cwd))));
       return { ...state, modules };
     },
   },

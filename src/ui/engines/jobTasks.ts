@@ -47,14 +47,29 @@ async function searchMany(targets: readonly unknown[], catalogue: string, progre
 }
 
 export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
-  // The request model's module request, computed as `gradus module` computes it; the result is plain data.
+  // The request model's module request, computed as `gradus module` computes it (the result is
+  // plain data); with the user's catalogue, a document kept there under the same key is reused.
   module: async (input, progress) => {
-    const { compute } = await import('../../requests/index.js');
-    const c = await compute<import('../../modules/module-result.js').ModuleResult>(input as ModuleRequest, {
-      progress: (label, done, total) => progress(label, done, total),
-      onEstimate: (units, seconds) => progress(`estimated ${units.toExponential(1)} units, ~${Math.ceil(seconds)}s of processor time`, 0),
-    });
-    return { result: c.result, json: c.document };
+    const [{ compute, requestKey }, { catalogueResultCache }, { Catalogue }] = await Promise.all([
+      import('../../requests/index.js'),
+      import('../../match/resultCache.js'),
+      import('../../store/catalogue.js'),
+    ]);
+    const { request, catalogue } = input as { request: ModuleRequest; catalogue?: string };
+    const cat = catalogue !== undefined ? Catalogue.open(catalogue, { existing: true }) : undefined;
+    try {
+      const cache = cat ? catalogueResultCache(cat) : undefined;
+      const kept = cache?.get(requestKey(request)) as Record<string, unknown> | undefined;
+      if (kept) return { json: kept };
+      const c = await compute<import('../../modules/module-result.js').ModuleResult>(request, {
+        progress: (label, done, total) => progress(label, done, total),
+        onEstimate: (units, seconds) => progress(`estimated ${units.toExponential(1)} units, ~${Math.ceil(seconds)}s of processor time`, 0),
+      });
+      cache?.put(c.key, 'module', c.document, request.spec.n, request.spec.k);
+      return { json: c.document };
+    } finally {
+      cat?.close();
+    }
   },
   // The same calls `gradus search` makes, and the search is kept in the catalogue.
   search: async (input, progress) => {

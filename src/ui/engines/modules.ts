@@ -3,7 +3,6 @@
  * this side (one clear line at once), then computeModule runs in a worker with progress
  * and can be cancelled.
  */
-import type { ModuleResult } from '../../modules/module-result.js';
 import { demoRequest, DEMO_SHOWN_N } from '../demo/demoSeed.js';
 import { parseModuleRequest } from './moduleRequest.js';
 import type { ModuleOutcome } from './moduleTypes.js';
@@ -39,8 +38,9 @@ export function checkModuleRequest(line: string): void {
   parseModuleRequest(line);
 }
 
-export function startModule(line: string, onProgress: (p: JobProgress) => void): Job<ModuleOutcome> {
+/** Compute a typed request; with the user's catalogue (when there is one) its kept result is reused and a new one kept. */
+export function startModule(line: string, onProgress: (p: JobProgress) => void, catalogue?: string): Job<ModuleOutcome> {
   const req = parseModuleRequest(line);
-  const job = startJob<{ result: ModuleResult; json: unknown }>('module', req, onProgress);
-  return { result: job.result.then((r) => moduleOutcome(r.result, r.json, req.spec)), cancel: job.cancel };
+  const job = startJob<{ json: Record<string, unknown> }>('module', { request: req, ...(catalogue ? { catalogue } : {}) }, onProgress);
+  return { result: job.result.then((r) => moduleOutcome(r.json, req.spec)), cancel: job.cancel };
 }

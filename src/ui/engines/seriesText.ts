@@ -8,7 +8,7 @@ export function seriesText(s: Series): string {
     case 'qt':
       return s.poly.toString();
     case 'schur':
-      return [...s.terms].map(([k, c]) => `(${c.toString()})·s[${k}]`).join(' + ') || '0';
+      return [...s.terms].map(([k, c]) => `(${c.toString()})·s(${k})`).join(' + ') || '0';
     case 'multi':
       return `table over ${s.axes.join(', ')} (${s.terms.size} cells)`;
   }

@@ -14,6 +14,7 @@ import { ProgressBar } from '../components/ProgressBar.js';
 import { ShadedGrid } from '../components/ShadedGrid.js';
 import { bumpRequestN, withoutN, DEFAULT_MODULE_REQUEST, MODULE_ENGINE_AVAILABLE, MODULE_PRESETS, startModule } from '../engines/modules.js';
 import { cellsAt, tableOf, type ModuleOutcome } from '../engines/moduleTypes.js';
+import { existingCatalogue } from '../engines/existingCatalogue.js';
 import { useTicker, useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
 import { useTheme } from '../ThemeContext.js';
@@ -51,7 +52,7 @@ export function ModulesScreen(props: ScreenProps) {
   const computed = useRef(new Map<string, Map<number, ModuleOutcome>>());
   const compute = (line: string) => {
     job.run(
-      (onProgress) => startModule(line, onProgress),
+      (onProgress) => startModule(line, onProgress, existingCatalogue(props.env, props.cwd)),
       (r) => {
         const key = familyKey(line);
         if (!computed.current.has(key)) computed.current.set(key, new Map());

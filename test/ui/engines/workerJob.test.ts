@@ -17,7 +17,7 @@ describe('worker jobs', () => {
   }, 20_000);
 
   it('bring engine errors back as one line, user errors marked as such', async () => {
-    const job = startJob('module', { kind: 'module', spec: { seed: 'vandermonde', n: 3, ops: ['nope'] }, frobenius: true, method: 'auto' }, () => {});
+    const job = startJob('module', { request: { kind: 'module', spec: { seed: 'vandermonde', n: 3, ops: ['nope'] }, frobenius: true, method: 'auto' } }, () => {});
     const e = (await job.result.catch((x: unknown) => x)) as JobError;
     expect(e).toBeInstanceOf(JobError);
     expect(e.user).toBe(true);
