@@ -36,7 +36,7 @@ describe('gradus catalogue', () => {
     const info = runCli(['catalogue', 'info', '--catalogue', path, '--json']);
     expect(info.code, info.stderr).toBe(0);
     // the catalogue says its build is unfinished, and so does every answer from it
-    expect(JSON.parse(info.stdout).unfinished).toMatch(/unfinished or still running .* gradus catalogue build --n-max 8/);
+    expect(JSON.parse(info.stdout).unfinished).toMatch(/unfinished or still running .*gradus catalogue build --n-max 8/);
     const text = runCli(['catalogue', 'info', '--catalogue', path]);
     expect(text.stdout).toMatch(/^warning: the catalogue's last build .* is unfinished/m);
     const answer = runCli(['search', '--coeffs', 'n=3:1,2,2,1', '--catalogue', path]);
