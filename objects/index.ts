@@ -5,6 +5,7 @@
 import { InputError } from '../src/core/errors.js';
 import { unknownNameMessage } from '../src/core/suggest.js';
 import type { Family } from '../src/enumerate/plugin.js';
+import { binaryTrees } from './binary-trees.js';
 import { compositions } from './compositions.js';
 import { decoratedDyckPaths } from './decorated-dyck-paths.js';
 import { dyckPaths } from './dyck-paths.js';
@@ -13,6 +14,7 @@ import { orderedSetPartitions } from './ordered-set-partitions.js';
 import { parkingFunctions } from './parking-functions.js';
 import { partitions } from './partitions.js';
 import { permutations } from './permutations.js';
+import { planeTrees } from './plane-trees.js';
 import { semistandardTableaux } from './semistandard-tableaux.js';
 import { setPartitions } from './set-partitions.js';
 import { standardTableaux } from './standard-tableaux.js';
@@ -20,6 +22,7 @@ import { subsets } from './subsets.js';
 import { words } from './words.js';
 
 export const FAMILIES: readonly Family<unknown>[] = [
+  binaryTrees,
   compositions,
   decoratedDyckPaths,
   dyckPaths,
@@ -28,6 +31,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   parkingFunctions,
   partitions,
   permutations,
+  planeTrees,
   semistandardTableaux,
   setPartitions,
   standardTableaux,

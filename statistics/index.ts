@@ -5,6 +5,7 @@
 import { InputError } from '../src/core/errors.js';
 import { unknownNameMessage } from '../src/core/suggest.js';
 import type { Statistic } from '../src/enumerate/plugin.js';
+import { binaryTreeFullNodes, binaryTreeHeight, binaryTreeLeaves, binaryTreeLeftBranch, binaryTreeLeftEdges, binaryTreeLeftSubtree, binaryTreePathLength, binaryTreeRightBranch } from './binary-tree-statistics.js';
 import { binaryInversions, ones, subsetSum } from './binary-words.js';
 import { blockIndexSum } from './block-index-sum.js';
 import { tableauCharge, tableauCocharge, wordCharge, wordCocharge } from './charge.js';
@@ -25,6 +26,7 @@ import { ospMaj, ospMinimaj } from './osp-maj.js';
 import { decoratedArea, decoratedDinv, parkingArea, parkingDinv } from './parking-statistics.js';
 import { distinctParts, durfeeSquare, largestPart, nLambda, partitionParts } from './partition-statistics.js';
 import { peaks, valleys } from './peaks.js';
+import { planeTreeBinaryNodes, planeTreeHeight, planeTreeLeaves, planeTreeLeftBranch, planeTreePathLength, planeTreeRightBranch, planeTreeRootDegree, planeTreeUnaryNodes } from './plane-tree-statistics.js';
 import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMinima } from './records.js';
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
 import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
@@ -32,6 +34,14 @@ import { wordInversions } from './word-inversions.js';
 import { wordDescents, wordMajorIndex } from './word-major-index.js';
 
 export const STATISTICS: readonly Statistic<unknown>[] = [
+  binaryTreeFullNodes,
+  binaryTreeHeight,
+  binaryTreeLeaves,
+  binaryTreeLeftBranch,
+  binaryTreeLeftEdges,
+  binaryTreeLeftSubtree,
+  binaryTreePathLength,
+  binaryTreeRightBranch,
   binaryInversions,
   ones,
   subsetSum,
@@ -77,6 +87,14 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   partitionParts,
   peaks,
   valleys,
+  planeTreeBinaryNodes,
+  planeTreeHeight,
+  planeTreeLeaves,
+  planeTreeLeftBranch,
+  planeTreePathLength,
+  planeTreeRightBranch,
+  planeTreeRootDegree,
+  planeTreeUnaryNodes,
   leftToRightMaxima,
   leftToRightMinima,
   rightToLeftMaxima,

@@ -5,12 +5,20 @@
 import { InputError } from '../../src/core/errors.js';
 import { unknownNameMessage } from '../../src/core/suggest.js';
 import type { Transform } from '../../src/enumerate/plugin.js';
+import { binaryToPlaneTree } from './binary-to-plane-tree.js';
+import { binaryTreeMirror } from './binary-tree-mirror.js';
+import { binaryTreeToDyck } from './binary-tree-to-dyck.js';
 import { complement, wordComplement } from './complement.js';
 import { conjugate } from './conjugate.js';
 import { dyckReverse } from './dyck-reverse.js';
+import { dyckToBinaryTree } from './dyck-to-binary-tree.js';
+import { dyckToPlaneTree } from './dyck-to-plane-tree.js';
 import { evacuation } from './evacuation.js';
 import { foata, wordFoata } from './foata.js';
 import { inverse } from './inverse.js';
+import { planeToBinaryTree } from './plane-to-binary-tree.js';
+import { planeTreeMirror } from './plane-tree-mirror.js';
+import { planeTreeToDyck } from './plane-tree-to-dyck.js';
 import { reverse, wordReverse } from './reverse.js';
 import { rskInsertion, rskRecording } from './rsk.js';
 import { standardize } from './standardize.js';
@@ -19,14 +27,22 @@ import { transpose } from './transpose.js';
 import { zeta } from './zeta.js';
 
 export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
+  binaryToPlaneTree,
+  binaryTreeMirror,
+  binaryTreeToDyck,
   complement,
   wordComplement,
   conjugate,
   dyckReverse,
+  dyckToBinaryTree,
+  dyckToPlaneTree,
   evacuation,
   foata,
   wordFoata,
   inverse,
+  planeToBinaryTree,
+  planeTreeMirror,
+  planeTreeToDyck,
   reverse,
   wordReverse,
   rskInsertion,
