@@ -17,6 +17,7 @@ import { permutations } from './permutations.js';
 import { planeTrees } from './plane-trees.js';
 import { semistandardTableaux } from './semistandard-tableaux.js';
 import { setPartitions } from './set-partitions.js';
+import { signedPermutations } from './signed-permutations.js';
 import { standardTableaux } from './standard-tableaux.js';
 import { subsets } from './subsets.js';
 import { words } from './words.js';
@@ -34,6 +35,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   planeTrees,
   semistandardTableaux,
   setPartitions,
+  signedPermutations,
   standardTableaux,
   subsets,
   words,

@@ -29,6 +29,8 @@ import { peaks, valleys } from './peaks.js';
 import { planeTreeBinaryNodes, planeTreeHeight, planeTreeLeaves, planeTreeLeftBranch, planeTreePathLength, planeTreeRightBranch, planeTreeRootDegree, planeTreeUnaryNodes } from './plane-tree-statistics.js';
 import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMinima } from './records.js';
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
+import { flagDescents, flagMajorIndex, negativeDescents, negativeMajorIndex, signedDescents, typeBDescents } from './signed-descents.js';
+import { flagInversions, negatedFixedPoints, negativeSum, negativeSumPairs, negatives, signedFixedPoints, signedInversions, signedLength } from './signed-length.js';
 import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
 import { wordInversions } from './word-inversions.js';
 import { wordDescents, wordMajorIndex } from './word-major-index.js';
@@ -103,6 +105,20 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   crossings,
   nestings,
   singletons,
+  flagDescents,
+  flagMajorIndex,
+  negativeDescents,
+  negativeMajorIndex,
+  signedDescents,
+  typeBDescents,
+  flagInversions,
+  negatedFixedPoints,
+  negativeSum,
+  negativeSumPairs,
+  negatives,
+  signedFixedPoints,
+  signedInversions,
+  signedLength,
   tableauDescents,
   tableauMajorIndex,
   wordInversions,

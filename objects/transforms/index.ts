@@ -21,6 +21,11 @@ import { planeTreeMirror } from './plane-tree-mirror.js';
 import { planeTreeToDyck } from './plane-tree-to-dyck.js';
 import { reverse, wordReverse } from './reverse.js';
 import { rskInsertion, rskRecording } from './rsk.js';
+import { signedAbsolute } from './signed-absolute.js';
+import { signedInverse } from './signed-inverse.js';
+import { signedNegation } from './signed-negation.js';
+import { signedReverse } from './signed-reverse.js';
+import { signedReverseComplement } from './signed-reverse-complement.js';
 import { standardize } from './standardize.js';
 import { subsetComplement } from './subset-complement.js';
 import { transpose } from './transpose.js';
@@ -47,6 +52,11 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   wordReverse,
   rskInsertion,
   rskRecording,
+  signedAbsolute,
+  signedInverse,
+  signedNegation,
+  signedReverse,
+  signedReverseComplement,
   standardize,
   subsetComplement,
   transpose,
