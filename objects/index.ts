@@ -10,11 +10,15 @@ import { compositions } from './compositions.js';
 import { decoratedDyckPaths } from './decorated-dyck-paths.js';
 import { dyckPaths } from './dyck-paths.js';
 import { fillings } from './fillings.js';
+import { increasingTrees } from './increasing-trees.js';
+import { inversionSequences } from './inversion-sequences.js';
+import { labelledTrees } from './labelled-trees.js';
 import { orderedSetPartitions } from './ordered-set-partitions.js';
 import { parkingFunctions } from './parking-functions.js';
 import { partitions } from './partitions.js';
 import { permutations } from './permutations.js';
 import { planeTrees } from './plane-trees.js';
+import { pruferCodes } from './prufer-codes.js';
 import { semistandardTableaux } from './semistandard-tableaux.js';
 import { setPartitions } from './set-partitions.js';
 import { signedPermutations } from './signed-permutations.js';
@@ -28,11 +32,15 @@ export const FAMILIES: readonly Family<unknown>[] = [
   decoratedDyckPaths,
   dyckPaths,
   fillings,
+  increasingTrees,
+  inversionSequences,
+  labelledTrees,
   orderedSetPartitions,
   parkingFunctions,
   partitions,
   permutations,
   planeTrees,
+  pruferCodes,
   semistandardTableaux,
   setPartitions,
   signedPermutations,

@@ -17,7 +17,10 @@ import { dyckArea, dyckBounce, dyckDinv, dyckPeaks, dyckReturns } from './dyck-s
 import { excedances, weakExcedances } from './excedances.js';
 import { fillingInv, fillingMaj } from './filling-statistics.js';
 import { fixedPoints } from './fixed-points.js';
+import { increasingTreeChildrenOfOne, increasingTreeDepthOfLast, increasingTreeHeight, increasingTreeLeaves, increasingTreePathLength, increasingTreeRootDegree } from './increasing-tree-statistics.js';
+import { inversionSequenceAscents, inversionSequenceDescents, inversionSequenceDistinct, inversionSequenceLast, inversionSequenceMax, inversionSequencePlateaux, inversionSequenceRightMinima, inversionSequenceSum, inversionSequenceZeros } from './inversion-sequence-statistics.js';
 import { inversions } from './inversions.js';
+import { treeChildlessVertices, treeDecreasingEdges, treeHeight, treeInversions, treeLeaves, treePathLength, treeRootDegree } from './labelled-tree-statistics.js';
 import { longestIncreasingSubsequence } from './longest-increasing-subsequence.js';
 import { inverseMajorIndex, majorIndex } from './major-index.js';
 import { ospDinv } from './osp-dinv.js';
@@ -27,6 +30,7 @@ import { decoratedArea, decoratedDinv, parkingArea, parkingDinv } from './parkin
 import { distinctParts, durfeeSquare, largestPart, nLambda, partitionParts } from './partition-statistics.js';
 import { peaks, valleys } from './peaks.js';
 import { planeTreeBinaryNodes, planeTreeHeight, planeTreeLeaves, planeTreeLeftBranch, planeTreePathLength, planeTreeRightBranch, planeTreeRootDegree, planeTreeUnaryNodes } from './plane-tree-statistics.js';
+import { pruferDistinctLetters, pruferMaxMultiplicity, pruferZeros } from './prufer-statistics.js';
 import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMinima } from './records.js';
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
 import { flagDescents, flagMajorIndex, negativeDescents, negativeMajorIndex, signedDescents, typeBDescents } from './signed-descents.js';
@@ -70,7 +74,29 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   fillingInv,
   fillingMaj,
   fixedPoints,
+  increasingTreeChildrenOfOne,
+  increasingTreeDepthOfLast,
+  increasingTreeHeight,
+  increasingTreeLeaves,
+  increasingTreePathLength,
+  increasingTreeRootDegree,
+  inversionSequenceAscents,
+  inversionSequenceDescents,
+  inversionSequenceDistinct,
+  inversionSequenceLast,
+  inversionSequenceMax,
+  inversionSequencePlateaux,
+  inversionSequenceRightMinima,
+  inversionSequenceSum,
+  inversionSequenceZeros,
   inversions,
+  treeChildlessVertices,
+  treeDecreasingEdges,
+  treeHeight,
+  treeInversions,
+  treeLeaves,
+  treePathLength,
+  treeRootDegree,
   longestIncreasingSubsequence,
   inverseMajorIndex,
   majorIndex,
@@ -97,6 +123,9 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   planeTreeRightBranch,
   planeTreeRootDegree,
   planeTreeUnaryNodes,
+  pruferDistinctLetters,
+  pruferMaxMultiplicity,
+  pruferZeros,
   leftToRightMaxima,
   leftToRightMinima,
   rightToLeftMaxima,

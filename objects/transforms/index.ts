@@ -15,10 +15,17 @@ import { dyckToBinaryTree } from './dyck-to-binary-tree.js';
 import { dyckToPlaneTree } from './dyck-to-plane-tree.js';
 import { evacuation } from './evacuation.js';
 import { foata, wordFoata } from './foata.js';
+import { increasingTreeOfPermutation } from './increasing-tree-of-permutation.js';
 import { inverse } from './inverse.js';
+import { lehmerCode } from './lehmer-code.js';
+import { lehmerDecode } from './lehmer-decode.js';
+import { parkingToTree } from './parking-to-tree.js';
+import { permutationOfIncreasingTree } from './permutation-of-increasing-tree.js';
 import { planeToBinaryTree } from './plane-to-binary-tree.js';
 import { planeTreeMirror } from './plane-tree-mirror.js';
 import { planeTreeToDyck } from './plane-tree-to-dyck.js';
+import { pruferCode } from './prufer-code.js';
+import { pruferDecode } from './prufer-decode.js';
 import { reverse, wordReverse } from './reverse.js';
 import { rskInsertion, rskRecording } from './rsk.js';
 import { signedAbsolute } from './signed-absolute.js';
@@ -29,6 +36,7 @@ import { signedReverseComplement } from './signed-reverse-complement.js';
 import { standardize } from './standardize.js';
 import { subsetComplement } from './subset-complement.js';
 import { transpose } from './transpose.js';
+import { treeToParking } from './tree-to-parking.js';
 import { zeta } from './zeta.js';
 
 export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
@@ -44,10 +52,17 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   evacuation,
   foata,
   wordFoata,
+  increasingTreeOfPermutation,
   inverse,
+  lehmerCode,
+  lehmerDecode,
+  parkingToTree,
+  permutationOfIncreasingTree,
   planeToBinaryTree,
   planeTreeMirror,
   planeTreeToDyck,
+  pruferCode,
+  pruferDecode,
   reverse,
   wordReverse,
   rskInsertion,
@@ -60,6 +75,7 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   standardize,
   subsetComplement,
   transpose,
+  treeToParking,
   zeta,
 ];
 
