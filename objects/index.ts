@@ -10,6 +10,7 @@ import { compositions } from './compositions.js';
 import { decoratedDyckPaths } from './decorated-dyck-paths.js';
 import { dyckPaths } from './dyck-paths.js';
 import { fillings } from './fillings.js';
+import { increasingPlaneTrees } from './increasing-plane-trees.js';
 import { increasingTrees } from './increasing-trees.js';
 import { inversionSequences } from './inversion-sequences.js';
 import { labelledTrees } from './labelled-trees.js';
@@ -23,6 +24,7 @@ import { semistandardTableaux } from './semistandard-tableaux.js';
 import { setPartitions } from './set-partitions.js';
 import { signedPermutations } from './signed-permutations.js';
 import { standardTableaux } from './standard-tableaux.js';
+import { stirlingPermutations } from './stirling-permutations.js';
 import { subsets } from './subsets.js';
 import { words } from './words.js';
 
@@ -32,6 +34,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   decoratedDyckPaths,
   dyckPaths,
   fillings,
+  increasingPlaneTrees,
   increasingTrees,
   inversionSequences,
   labelledTrees,
@@ -45,6 +48,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   setPartitions,
   signedPermutations,
   standardTableaux,
+  stirlingPermutations,
   subsets,
   words,
 ];

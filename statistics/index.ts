@@ -17,6 +17,7 @@ import { dyckArea, dyckBounce, dyckDinv, dyckPeaks, dyckReturns } from './dyck-s
 import { excedances, weakExcedances } from './excedances.js';
 import { fillingInv, fillingMaj } from './filling-statistics.js';
 import { fixedPoints } from './fixed-points.js';
+import { increasingPlaneTreeDepthOfLast, increasingPlaneTreeHeight, increasingPlaneTreeLeaves, increasingPlaneTreePathLength, increasingPlaneTreeRootDegree } from './increasing-plane-tree-statistics.js';
 import { increasingTreeChildrenOfOne, increasingTreeDepthOfLast, increasingTreeHeight, increasingTreeLeaves, increasingTreePathLength, increasingTreeRootDegree } from './increasing-tree-statistics.js';
 import { inversionSequenceAscents, inversionSequenceDescents, inversionSequenceDistinct, inversionSequenceLast, inversionSequenceMax, inversionSequencePlateaux, inversionSequenceRightMinima, inversionSequenceSum, inversionSequenceZeros } from './inversion-sequence-statistics.js';
 import { inversions } from './inversions.js';
@@ -35,6 +36,7 @@ import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMin
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
 import { flagDescents, flagMajorIndex, negativeDescents, negativeMajorIndex, signedDescents, typeBDescents } from './signed-descents.js';
 import { flagInversions, negatedFixedPoints, negativeSum, negativeSumPairs, negatives, signedFixedPoints, signedInversions, signedLength } from './signed-length.js';
+import { stirlingAscents, stirlingDescents, stirlingInversions, stirlingPlateaux } from './stirling-permutation-statistics.js';
 import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
 import { wordInversions } from './word-inversions.js';
 import { wordDescents, wordMajorIndex } from './word-major-index.js';
@@ -74,6 +76,11 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   fillingInv,
   fillingMaj,
   fixedPoints,
+  increasingPlaneTreeDepthOfLast,
+  increasingPlaneTreeHeight,
+  increasingPlaneTreeLeaves,
+  increasingPlaneTreePathLength,
+  increasingPlaneTreeRootDegree,
   increasingTreeChildrenOfOne,
   increasingTreeDepthOfLast,
   increasingTreeHeight,
@@ -148,6 +155,10 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   signedFixedPoints,
   signedInversions,
   signedLength,
+  stirlingAscents,
+  stirlingDescents,
+  stirlingInversions,
+  stirlingPlateaux,
   tableauDescents,
   tableauMajorIndex,
   wordInversions,

@@ -24,6 +24,7 @@ import { permutationOfIncreasingTree } from './permutation-of-increasing-tree.js
 import { planeToBinaryTree } from './plane-to-binary-tree.js';
 import { planeTreeMirror } from './plane-tree-mirror.js';
 import { planeTreeToDyck } from './plane-tree-to-dyck.js';
+import { planeTreeToStirling } from './plane-tree-to-stirling.js';
 import { pruferCode } from './prufer-code.js';
 import { pruferDecode } from './prufer-decode.js';
 import { reverse, wordReverse } from './reverse.js';
@@ -34,6 +35,8 @@ import { signedNegation } from './signed-negation.js';
 import { signedReverse } from './signed-reverse.js';
 import { signedReverseComplement } from './signed-reverse-complement.js';
 import { standardize } from './standardize.js';
+import { stirlingReverse } from './stirling-reverse.js';
+import { stirlingToPlaneTree } from './stirling-to-plane-tree.js';
 import { subsetComplement } from './subset-complement.js';
 import { transpose } from './transpose.js';
 import { treeToParking } from './tree-to-parking.js';
@@ -61,6 +64,7 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   planeToBinaryTree,
   planeTreeMirror,
   planeTreeToDyck,
+  planeTreeToStirling,
   pruferCode,
   pruferDecode,
   reverse,
@@ -73,6 +77,8 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   signedReverse,
   signedReverseComplement,
   standardize,
+  stirlingReverse,
+  stirlingToPlaneTree,
   subsetComplement,
   transpose,
   treeToParking,
