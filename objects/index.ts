@@ -17,6 +17,7 @@ import { labelledTrees } from './labelled-trees.js';
 import { orderedSetPartitions } from './ordered-set-partitions.js';
 import { parkingFunctions } from './parking-functions.js';
 import { partitions } from './partitions.js';
+import { perfectMatchings } from './perfect-matchings.js';
 import { permutations } from './permutations.js';
 import { planeTrees } from './plane-trees.js';
 import { pruferCodes } from './prufer-codes.js';
@@ -41,6 +42,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   orderedSetPartitions,
   parkingFunctions,
   partitions,
+  perfectMatchings,
   permutations,
   planeTrees,
   pruferCodes,

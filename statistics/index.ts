@@ -24,6 +24,7 @@ import { inversions } from './inversions.js';
 import { treeChildlessVertices, treeDecreasingEdges, treeHeight, treeInversions, treeLeaves, treePathLength, treeRootDegree } from './labelled-tree-statistics.js';
 import { longestIncreasingSubsequence } from './longest-increasing-subsequence.js';
 import { inverseMajorIndex, majorIndex } from './major-index.js';
+import { matchingAlignments, matchingComponents, matchingCrossings, matchingFirstArcLength, matchingNestings, matchingShortArcs } from './matching-statistics.js';
 import { ospDinv } from './osp-dinv.js';
 import { ospInv } from './osp-inv.js';
 import { ospMaj, ospMinimaj } from './osp-maj.js';
@@ -107,6 +108,12 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   longestIncreasingSubsequence,
   inverseMajorIndex,
   majorIndex,
+  matchingAlignments,
+  matchingComponents,
+  matchingCrossings,
+  matchingFirstArcLength,
+  matchingNestings,
+  matchingShortArcs,
   ospDinv,
   ospInv,
   ospMaj,

@@ -19,6 +19,8 @@ import { increasingTreeOfPermutation } from './increasing-tree-of-permutation.js
 import { inverse } from './inverse.js';
 import { lehmerCode } from './lehmer-code.js';
 import { lehmerDecode } from './lehmer-decode.js';
+import { matchingReverse } from './matching-reverse.js';
+import { matchingToInvolution } from './matching-to-involution.js';
 import { parkingToTree } from './parking-to-tree.js';
 import { permutationOfIncreasingTree } from './permutation-of-increasing-tree.js';
 import { planeToBinaryTree } from './plane-to-binary-tree.js';
@@ -59,6 +61,8 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   inverse,
   lehmerCode,
   lehmerDecode,
+  matchingReverse,
+  matchingToInvolution,
   parkingToTree,
   permutationOfIncreasingTree,
   planeToBinaryTree,
