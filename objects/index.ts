@@ -5,6 +5,7 @@
 import { InputError } from '../src/core/errors.js';
 import { unknownNameMessage } from '../src/core/suggest.js';
 import type { Family } from '../src/enumerate/plugin.js';
+import { alternatingSignMatrices } from './alternating-sign-matrices.js';
 import { binaryTrees } from './binary-trees.js';
 import { compositions } from './compositions.js';
 import { decoratedDyckPaths } from './decorated-dyck-paths.js';
@@ -14,6 +15,7 @@ import { increasingPlaneTrees } from './increasing-plane-trees.js';
 import { increasingTrees } from './increasing-trees.js';
 import { inversionSequences } from './inversion-sequences.js';
 import { labelledTrees } from './labelled-trees.js';
+import { monotoneTriangles } from './monotone-triangles.js';
 import { orderedSetPartitions } from './ordered-set-partitions.js';
 import { parkingFunctions } from './parking-functions.js';
 import { partitions } from './partitions.js';
@@ -30,6 +32,7 @@ import { subsets } from './subsets.js';
 import { words } from './words.js';
 
 export const FAMILIES: readonly Family<unknown>[] = [
+  alternatingSignMatrices,
   binaryTrees,
   compositions,
   decoratedDyckPaths,
@@ -39,6 +42,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   increasingTrees,
   inversionSequences,
   labelledTrees,
+  monotoneTriangles,
   orderedSetPartitions,
   parkingFunctions,
   partitions,

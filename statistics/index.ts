@@ -5,6 +5,7 @@
 import { InputError } from '../src/core/errors.js';
 import { unknownNameMessage } from '../src/core/suggest.js';
 import type { Statistic } from '../src/enumerate/plugin.js';
+import { asmDiagonalOnes, asmFirstColumnOne, asmFirstRowOne, asmInversions, asmLastRowOne, asmNegatives } from './asm-statistics.js';
 import { binaryTreeFullNodes, binaryTreeHeight, binaryTreeLeaves, binaryTreeLeftBranch, binaryTreeLeftEdges, binaryTreeLeftSubtree, binaryTreePathLength, binaryTreeRightBranch } from './binary-tree-statistics.js';
 import { binaryInversions, ones, subsetSum } from './binary-words.js';
 import { blockIndexSum } from './block-index-sum.js';
@@ -43,6 +44,12 @@ import { wordInversions } from './word-inversions.js';
 import { wordDescents, wordMajorIndex } from './word-major-index.js';
 
 export const STATISTICS: readonly Statistic<unknown>[] = [
+  asmDiagonalOnes,
+  asmFirstColumnOne,
+  asmFirstRowOne,
+  asmInversions,
+  asmLastRowOne,
+  asmNegatives,
   binaryTreeFullNodes,
   binaryTreeHeight,
   binaryTreeLeaves,

@@ -5,6 +5,10 @@
 import { InputError } from '../../src/core/errors.js';
 import { unknownNameMessage } from '../../src/core/suggest.js';
 import type { Transform } from '../../src/enumerate/plugin.js';
+import { asmRotate } from './asm-rotate.js';
+import { asmToMonotoneTriangle } from './asm-to-monotone-triangle.js';
+import { asmTranspose } from './asm-transpose.js';
+import { asmVerticalFlip } from './asm-vertical-flip.js';
 import { binaryToPlaneTree } from './binary-to-plane-tree.js';
 import { binaryTreeMirror } from './binary-tree-mirror.js';
 import { binaryTreeToDyck } from './binary-tree-to-dyck.js';
@@ -21,7 +25,9 @@ import { lehmerCode } from './lehmer-code.js';
 import { lehmerDecode } from './lehmer-decode.js';
 import { matchingReverse } from './matching-reverse.js';
 import { matchingToInvolution } from './matching-to-involution.js';
+import { monotoneTriangleToAsm } from './monotone-triangle-to-asm.js';
 import { parkingToTree } from './parking-to-tree.js';
+import { permutationMatrix } from './permutation-matrix.js';
 import { permutationOfIncreasingTree } from './permutation-of-increasing-tree.js';
 import { planeToBinaryTree } from './plane-to-binary-tree.js';
 import { planeTreeMirror } from './plane-tree-mirror.js';
@@ -45,6 +51,10 @@ import { treeToParking } from './tree-to-parking.js';
 import { zeta } from './zeta.js';
 
 export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
+  asmRotate,
+  asmToMonotoneTriangle,
+  asmTranspose,
+  asmVerticalFlip,
   binaryToPlaneTree,
   binaryTreeMirror,
   binaryTreeToDyck,
@@ -63,7 +73,9 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   lehmerDecode,
   matchingReverse,
   matchingToInvolution,
+  monotoneTriangleToAsm,
   parkingToTree,
+  permutationMatrix,
   permutationOfIncreasingTree,
   planeToBinaryTree,
   planeTreeMirror,
