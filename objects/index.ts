@@ -6,6 +6,7 @@ import { InputError } from '../src/core/errors.js';
 import { unknownNameMessage } from '../src/core/suggest.js';
 import type { Family } from '../src/enumerate/plugin.js';
 import { alternatingSignMatrices } from './alternating-sign-matrices.js';
+import { avoiding321Permutations } from './avoiding-321-permutations.js';
 import { binaryTrees } from './binary-trees.js';
 import { compositions } from './compositions.js';
 import { decoratedDyckPaths } from './decorated-dyck-paths.js';
@@ -33,6 +34,7 @@ import { words } from './words.js';
 
 export const FAMILIES: readonly Family<unknown>[] = [
   alternatingSignMatrices,
+  avoiding321Permutations,
   binaryTrees,
   compositions,
   decoratedDyckPaths,

@@ -9,12 +9,15 @@ import { asmRotate } from './asm-rotate.js';
 import { asmToMonotoneTriangle } from './asm-to-monotone-triangle.js';
 import { asmTranspose } from './asm-transpose.js';
 import { asmVerticalFlip } from './asm-vertical-flip.js';
+import { avoiding321Inclusion } from './avoiding-321-inclusion.js';
+import { avoiding321ToDyck } from './avoiding-321-to-dyck.js';
 import { binaryToPlaneTree } from './binary-to-plane-tree.js';
 import { binaryTreeMirror } from './binary-tree-mirror.js';
 import { binaryTreeToDyck } from './binary-tree-to-dyck.js';
 import { complement, wordComplement } from './complement.js';
 import { conjugate } from './conjugate.js';
 import { dyckReverse } from './dyck-reverse.js';
+import { dyckTo321Avoiding } from './dyck-to-321-avoiding.js';
 import { dyckToBinaryTree } from './dyck-to-binary-tree.js';
 import { dyckToPlaneTree } from './dyck-to-plane-tree.js';
 import { evacuation } from './evacuation.js';
@@ -48,6 +51,8 @@ import { stirlingToPlaneTree } from './stirling-to-plane-tree.js';
 import { subsetComplement } from './subset-complement.js';
 import { transpose } from './transpose.js';
 import { treeToParking } from './tree-to-parking.js';
+import { wordRskInsertion } from './word-rsk-insertion.js';
+import { wordRskRecording } from './word-rsk-recording.js';
 import { zeta } from './zeta.js';
 
 export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
@@ -55,6 +60,8 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   asmToMonotoneTriangle,
   asmTranspose,
   asmVerticalFlip,
+  avoiding321Inclusion,
+  avoiding321ToDyck,
   binaryToPlaneTree,
   binaryTreeMirror,
   binaryTreeToDyck,
@@ -62,6 +69,7 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   wordComplement,
   conjugate,
   dyckReverse,
+  dyckTo321Avoiding,
   dyckToBinaryTree,
   dyckToPlaneTree,
   evacuation,
@@ -98,6 +106,8 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   subsetComplement,
   transpose,
   treeToParking,
+  wordRskInsertion,
+  wordRskRecording,
   zeta,
 ];
 
