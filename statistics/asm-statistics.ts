@@ -88,3 +88,12 @@ export const asmDiagonalOnes: Statistic<AlternatingSignMatrix> = {
   examples: [[[], 0], [ID3, 3], [P231, 0], [P321, 1], [M3, 0], [M4, 0]],
   compute: (a) => a.reduce((s, r, i) => (r[i] === 1 ? s + 1 : s), 0),
 };
+
+export const asmLastColumnOne: Statistic<AlternatingSignMatrix> = {
+  id: 'asm-last-column-one',
+  family: 'alternating-sign-matrices',
+  description: 'the row (1..n) of the single 1 in the last column (0 for n = 0)',
+  source: 'Behrend, "Multiply-refined enumeration of alternating sign matrices", Adv. Math. 245 (2013) (the four boundary positions, from memory)',
+  examples: [[[], 0], [ID3, 3], [P231, 2], [M3, 2], [M4, 3]],
+  compute: (a) => (a.length === 0 ? 0 : a.findIndex((r) => r[r.length - 1] === 1) + 1),
+};

@@ -62,3 +62,12 @@ export const increasingPlaneTreePathLength: Statistic<IncreasingPlaneTree> = {
   examples: [[[[]], 0], [[[1], []], 1], [[[1, 2], [], []], 2], [[[1], [2], []], 3], [[[1, 3], [2], [], []], 4]],
   compute: (t) => depths(t).reduce((a, b) => a + b, 0),
 };
+
+export const increasingPlaneTreeMaxDegree: Statistic<IncreasingPlaneTree> = {
+  id: 'increasing-plane-tree-max-degree',
+  family: 'increasing-plane-trees',
+  description: 'largest number of children of a vertex',
+  source: MSS,
+  examples: [[[[]], 0], [[[1], []], 1], [[[1, 2], [], []], 2], [[[1], [2], []], 1], [[[1, 3], [2], [], []], 2]],
+  compute: (t) => Math.max(...t.map((c) => c.length)),
+};

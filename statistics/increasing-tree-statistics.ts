@@ -74,3 +74,12 @@ export const increasingTreeChildrenOfOne: Statistic<IncreasingTree> = {
   examples: [[[], 0], [[0], 0], [[0, 1], 1], [[0, 1, 1], 2], [[0, 0, 2], 0]],
   compute: (p) => p.reduce((s, q) => (q === 1 ? s + 1 : s), 0),
 };
+
+export const increasingTreeMaxDegree: Statistic<IncreasingTree> = {
+  id: 'increasing-tree-max-degree',
+  family: 'increasing-trees',
+  description: 'largest number of children of a vertex',
+  source: 'common practice (maximum degree of recursive trees; Goh–Schmutz, Random Struct. Algorithms 20 (2002), from memory)',
+  examples: [[[], 0], [[0], 1], [[0, 0], 2], [[0, 1], 1], [[0, 1, 1], 2], [[0, 0, 0], 3]],
+  compute: (p) => Math.max(0, ...childrenOf(p).map((c) => c.length)),
+};

@@ -5,7 +5,7 @@
 import { InputError } from '../src/core/errors.js';
 import { unknownNameMessage } from '../src/core/suggest.js';
 import type { Statistic } from '../src/enumerate/plugin.js';
-import { asmDiagonalOnes, asmFirstColumnOne, asmFirstRowOne, asmInversions, asmLastRowOne, asmNegatives } from './asm-statistics.js';
+import { asmDiagonalOnes, asmFirstColumnOne, asmFirstRowOne, asmInversions, asmLastColumnOne, asmLastRowOne, asmNegatives } from './asm-statistics.js';
 import { binaryTreeFullNodes, binaryTreeHeight, binaryTreeLeaves, binaryTreeLeftBranch, binaryTreeLeftEdges, binaryTreeLeftSubtree, binaryTreePathLength, binaryTreeRightBranch } from './binary-tree-statistics.js';
 import { binaryInversions, ones, subsetSum } from './binary-words.js';
 import { blockIndexSum } from './block-index-sum.js';
@@ -18,25 +18,26 @@ import { dyckArea, dyckBounce, dyckDinv, dyckPeaks, dyckReturns } from './dyck-s
 import { excedances, weakExcedances } from './excedances.js';
 import { fillingInv, fillingMaj } from './filling-statistics.js';
 import { fixedPoints } from './fixed-points.js';
-import { increasingPlaneTreeDepthOfLast, increasingPlaneTreeHeight, increasingPlaneTreeLeaves, increasingPlaneTreePathLength, increasingPlaneTreeRootDegree } from './increasing-plane-tree-statistics.js';
-import { increasingTreeChildrenOfOne, increasingTreeDepthOfLast, increasingTreeHeight, increasingTreeLeaves, increasingTreePathLength, increasingTreeRootDegree } from './increasing-tree-statistics.js';
-import { inversionSequenceAscents, inversionSequenceDescents, inversionSequenceDistinct, inversionSequenceLast, inversionSequenceMax, inversionSequencePlateaux, inversionSequenceRightMinima, inversionSequenceSum, inversionSequenceZeros } from './inversion-sequence-statistics.js';
+import { increasingPlaneTreeDepthOfLast, increasingPlaneTreeHeight, increasingPlaneTreeLeaves, increasingPlaneTreeMaxDegree, increasingPlaneTreePathLength, increasingPlaneTreeRootDegree } from './increasing-plane-tree-statistics.js';
+import { increasingTreeChildrenOfOne, increasingTreeDepthOfLast, increasingTreeHeight, increasingTreeLeaves, increasingTreeMaxDegree, increasingTreePathLength, increasingTreeRootDegree } from './increasing-tree-statistics.js';
+import { inversionSequenceAscents, inversionSequenceDescents, inversionSequenceDistinct, inversionSequenceFullEntries, inversionSequenceLast, inversionSequenceMax, inversionSequencePlateaux, inversionSequenceRightMinima, inversionSequenceSum, inversionSequenceZeros } from './inversion-sequence-statistics.js';
 import { inversions } from './inversions.js';
-import { treeChildlessVertices, treeDecreasingEdges, treeHeight, treeInversions, treeLeaves, treePathLength, treeRootDegree } from './labelled-tree-statistics.js';
+import { treeChildlessVertices, treeDecreasingEdges, treeHeight, treeInversions, treeLeaves, treeMaxDegree, treePathLength, treeRootDegree } from './labelled-tree-statistics.js';
 import { longestIncreasingSubsequence } from './longest-increasing-subsequence.js';
 import { inverseMajorIndex, majorIndex } from './major-index.js';
-import { matchingAlignments, matchingComponents, matchingCrossings, matchingFirstArcLength, matchingNestings, matchingShortArcs } from './matching-statistics.js';
+import { matchingAlignments, matchingComponents, matchingCrossings, matchingFirstArcLength, matchingNestings, matchingOuterArcs, matchingShortArcs } from './matching-statistics.js';
 import { ospDinv } from './osp-dinv.js';
 import { ospInv } from './osp-inv.js';
 import { ospMaj, ospMinimaj } from './osp-maj.js';
 import { decoratedArea, decoratedDinv, parkingArea, parkingDinv } from './parking-statistics.js';
 import { distinctParts, durfeeSquare, largestPart, nLambda, partitionParts } from './partition-statistics.js';
 import { peaks, valleys } from './peaks.js';
-import { planeTreeBinaryNodes, planeTreeHeight, planeTreeLeaves, planeTreeLeftBranch, planeTreePathLength, planeTreeRightBranch, planeTreeRootDegree, planeTreeUnaryNodes } from './plane-tree-statistics.js';
+import { planeTreeBinaryNodes, planeTreeHeight, planeTreeLeaves, planeTreeLeftBranch, planeTreeMaxDegree, planeTreePathLength, planeTreeRightBranch, planeTreeRootDegree, planeTreeUnaryNodes } from './plane-tree-statistics.js';
 import { pruferDistinctLetters, pruferMaxMultiplicity, pruferZeros } from './prufer-statistics.js';
 import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMinima } from './records.js';
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
 import { flagDescents, flagMajorIndex, negativeDescents, negativeMajorIndex, signedDescents, typeBDescents } from './signed-descents.js';
+import { flagExcedances, signedMajorIndex, typeBExcedances } from './signed-excedances.js';
 import { flagInversions, negatedFixedPoints, negativeSum, negativeSumPairs, negatives, signedFixedPoints, signedInversions, signedLength } from './signed-length.js';
 import { stirlingAscents, stirlingDescents, stirlingInversions, stirlingPlateaux } from './stirling-permutation-statistics.js';
 import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
@@ -48,6 +49,7 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   asmFirstColumnOne,
   asmFirstRowOne,
   asmInversions,
+  asmLastColumnOne,
   asmLastRowOne,
   asmNegatives,
   binaryTreeFullNodes,
@@ -87,17 +89,20 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   increasingPlaneTreeDepthOfLast,
   increasingPlaneTreeHeight,
   increasingPlaneTreeLeaves,
+  increasingPlaneTreeMaxDegree,
   increasingPlaneTreePathLength,
   increasingPlaneTreeRootDegree,
   increasingTreeChildrenOfOne,
   increasingTreeDepthOfLast,
   increasingTreeHeight,
   increasingTreeLeaves,
+  increasingTreeMaxDegree,
   increasingTreePathLength,
   increasingTreeRootDegree,
   inversionSequenceAscents,
   inversionSequenceDescents,
   inversionSequenceDistinct,
+  inversionSequenceFullEntries,
   inversionSequenceLast,
   inversionSequenceMax,
   inversionSequencePlateaux,
@@ -110,6 +115,7 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   treeHeight,
   treeInversions,
   treeLeaves,
+  treeMaxDegree,
   treePathLength,
   treeRootDegree,
   longestIncreasingSubsequence,
@@ -120,6 +126,7 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   matchingCrossings,
   matchingFirstArcLength,
   matchingNestings,
+  matchingOuterArcs,
   matchingShortArcs,
   ospDinv,
   ospInv,
@@ -140,6 +147,7 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   planeTreeHeight,
   planeTreeLeaves,
   planeTreeLeftBranch,
+  planeTreeMaxDegree,
   planeTreePathLength,
   planeTreeRightBranch,
   planeTreeRootDegree,
@@ -161,6 +169,9 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   negativeMajorIndex,
   signedDescents,
   typeBDescents,
+  flagExcedances,
+  signedMajorIndex,
+  typeBExcedances,
   flagInversions,
   negatedFixedPoints,
   negativeSum,

@@ -106,3 +106,12 @@ export const inversionSequenceRightMinima: Statistic<InversionSequence> = {
     return s;
   },
 };
+
+export const inversionSequenceFullEntries: Statistic<InversionSequence> = {
+  id: 'inversion-sequence-full-entries',
+  family: 'inversion-sequences',
+  description: 'number of i with e_i = i − 1, the largest value allowed (left-to-right minima under the Lehmer code)',
+  source: 'common practice (Stanley, EC1 §1.3: q(q+1)…(q+n−1) law, through the Lehmer code)',
+  examples: [[[], 0], [[0, 1, 2], 3], [[0, 0, 0], 1], [[0, 1, 0, 2], 2], [[0, 0, 2, 1], 2]],
+  compute: (e) => e.reduce((s, x, i) => (x === i ? s + 1 : s), 0),
+};

@@ -84,3 +84,19 @@ export const treeChildlessVertices: Statistic<LabelledTree> = {
   examples: [[[], 1], [[0], 1], [[0, 0], 2], [[3, 3, 0], 2], [[0, 3, 1], 1]],
   compute: (p) => childrenOf(p).filter((c) => c.length === 0).length,
 };
+
+export const treeMaxDegree: Statistic<LabelledTree> = {
+  id: 'tree-max-degree',
+  family: 'labelled-trees',
+  description: 'largest number of neighbours of a vertex (0 when n = 0)',
+  source: 'common practice (maximum degree of random labelled trees; Moon, Counting Labelled Trees (1970))',
+  examples: [[[], 0], [[0], 1], [[0, 0], 2], [[3, 3, 0], 3], [[0, 3, 1], 2]],
+  compute(p) {
+    const deg = new Array<number>(p.length + 1).fill(0);
+    p.forEach((q, i) => {
+      deg[q]!++;
+      deg[i + 1]!++;
+    });
+    return Math.max(...deg);
+  },
+};

@@ -90,3 +90,22 @@ export const matchingFirstArcLength: Statistic<PerfectMatching> = {
   examples: [[[], 0], [[2, 1], 1], [[3, 4, 1, 2], 2], [[4, 3, 2, 1], 3], [[3, 5, 1, 6, 2, 4], 2]],
   compute: (m) => (m.length === 0 ? 0 : m[0]! - 1),
 };
+
+export const matchingOuterArcs: Statistic<PerfectMatching> = {
+  id: 'matching-outer-arcs',
+  family: 'perfect-matchings',
+  description: 'arcs (a, b) not nested under another arc (no arc (c, d) with c < a < b < d)',
+  source: 'common practice (outer arcs of an arc diagram)',
+  examples: [[[], 0], [[2, 1], 1], [[3, 4, 1, 2], 2], [[4, 3, 2, 1], 1], [[4, 3, 2, 1, 6, 5], 2], [[3, 5, 1, 6, 2, 4], 3]],
+  compute(m) {
+    let s = 0;
+    for (let a = 1; a <= m.length; a++) {
+      const b = m[a - 1]!;
+      if (b < a) continue;
+      let covered = false;
+      for (let c = 1; c < a && !covered; c++) covered = m[c - 1]! > b;
+      if (!covered) s++;
+    }
+    return s;
+  },
+};

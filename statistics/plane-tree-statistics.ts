@@ -104,3 +104,16 @@ export const planeTreeRightBranch: Statistic<PlaneTree> = {
     return s;
   },
 };
+
+export const planeTreeMaxDegree: Statistic<PlaneTree> = {
+  id: 'plane-tree-max-degree',
+  family: 'plane-trees',
+  description: 'largest number of children of a node',
+  source: 'common practice (maximum outdegree; Flajolet–Sedgewick, Analytic Combinatorics §III)',
+  examples: [[[], 0], [[[]], 1], [CHERRY, 2], [PATH2, 1], [T4, 2]],
+  compute: (t) => {
+    let m = t.length;
+    for (const c of t) m = Math.max(m, planeTreeMaxDegree.compute(c));
+    return m;
+  },
+};

@@ -29,6 +29,7 @@ describe('inversion sequences', () => {
       expect((await dist('inversion-sequences', { n }, ['inversion-sequence-ascents'])).series.equals(eulerian(n)), `asc n=${n}`).toBe(true);
       expect((await dist('inversion-sequences', { n }, ['inversion-sequence-sum'])).series.equals(qFactorial(n)), `sum n=${n}`).toBe(true);
       expect((await dist('inversion-sequences', { n }, ['inversion-sequence-zeros'])).series.equals(risingQ(n)), `zeros n=${n}`).toBe(true);
+      expect((await dist('inversion-sequences', { n }, ['inversion-sequence-full-entries'])).series.equals(risingQ(n)), `full n=${n}`).toBe(true);
     }
   });
 

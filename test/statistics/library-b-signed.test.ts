@@ -60,6 +60,15 @@ describe('signed permutation statistics', () => {
     expect((await dist('signed-permutations', { n: 3 }, ['type-b-descents'])).series.toQArray()).toEqual([1n, 23n, 23n, 1n]);
   });
 
+  it("flag excedances have the law of fdes (Foata–Han 2008, from memory) and Brenti's type B excedances that of the type B descents (Brenti 1994, from memory), n ≤ 5", async () => {
+    for (let n = 1; n <= 5; n++) {
+      const fdes = (await dist('signed-permutations', { n }, ['flag-descents'])).series;
+      expect((await dist('signed-permutations', { n }, ['flag-excedances'])).series.equals(fdes), `n=${n}`).toBe(true);
+      const desB = (await dist('signed-permutations', { n }, ['type-b-descents'])).series;
+      expect((await dist('signed-permutations', { n }, ['type-b-excedances'])).series.equals(desB), `n=${n}`).toBe(true);
+    }
+  });
+
   it('maps: negation sends ℓ to n² − ℓ (w₀ = −id has length n², Björner–Brenti §8.1); inverse keeps ℓ; forgetting signs is 2^n to one (n ≤ 4)', () => {
     const neg = transformById('signed-negation');
     const inv = transformById('signed-inverse');
