@@ -28,7 +28,6 @@ import { lehmerCode } from './lehmer-code.js';
 import { lehmerDecode } from './lehmer-decode.js';
 import { matchingReverse } from './matching-reverse.js';
 import { matchingToInvolution } from './matching-to-involution.js';
-import { monotoneTriangleToAsm } from './monotone-triangle-to-asm.js';
 import { parkingToTree } from './parking-to-tree.js';
 import { permutationMatrix } from './permutation-matrix.js';
 import { permutationOfIncreasingTree } from './permutation-of-increasing-tree.js';
@@ -81,7 +80,6 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   lehmerDecode,
   matchingReverse,
   matchingToInvolution,
-  monotoneTriangleToAsm,
   parkingToTree,
   permutationMatrix,
   permutationOfIncreasingTree,
