@@ -5,32 +5,58 @@
 import { InputError } from '../src/core/errors.js';
 import { unknownNameMessage } from '../src/core/suggest.js';
 import type { Family } from '../src/enumerate/plugin.js';
+import { alternatingSignMatrices } from './alternating-sign-matrices.js';
+import { avoiding321Permutations } from './avoiding-321-permutations.js';
+import { binaryTrees } from './binary-trees.js';
 import { compositions } from './compositions.js';
 import { decoratedDyckPaths } from './decorated-dyck-paths.js';
 import { dyckPaths } from './dyck-paths.js';
 import { fillings } from './fillings.js';
+import { increasingPlaneTrees } from './increasing-plane-trees.js';
+import { increasingTrees } from './increasing-trees.js';
+import { inversionSequences } from './inversion-sequences.js';
+import { labelledTrees } from './labelled-trees.js';
+import { monotoneTriangles } from './monotone-triangles.js';
 import { orderedSetPartitions } from './ordered-set-partitions.js';
 import { parkingFunctions } from './parking-functions.js';
 import { partitions } from './partitions.js';
+import { perfectMatchings } from './perfect-matchings.js';
 import { permutations } from './permutations.js';
+import { planeTrees } from './plane-trees.js';
+import { pruferCodes } from './prufer-codes.js';
 import { semistandardTableaux } from './semistandard-tableaux.js';
 import { setPartitions } from './set-partitions.js';
+import { signedPermutations } from './signed-permutations.js';
 import { standardTableaux } from './standard-tableaux.js';
+import { stirlingPermutations } from './stirling-permutations.js';
 import { subsets } from './subsets.js';
 import { words } from './words.js';
 
 export const FAMILIES: readonly Family<unknown>[] = [
+  alternatingSignMatrices,
+  avoiding321Permutations,
+  binaryTrees,
   compositions,
   decoratedDyckPaths,
   dyckPaths,
   fillings,
+  increasingPlaneTrees,
+  increasingTrees,
+  inversionSequences,
+  labelledTrees,
+  monotoneTriangles,
   orderedSetPartitions,
   parkingFunctions,
   partitions,
+  perfectMatchings,
   permutations,
+  planeTrees,
+  pruferCodes,
   semistandardTableaux,
   setPartitions,
+  signedPermutations,
   standardTableaux,
+  stirlingPermutations,
   subsets,
   words,
 ];

@@ -46,3 +46,30 @@ export interface Filling {
   readonly shape: Partition;
   readonly rows: readonly (readonly number[])[];
 }
+
+// Part B of the statistics library: signed permutations, matrices, trees, sequences, matchings.
+
+/** A signed permutation of [n] (B_n) in window notation: w[i−1] = w(i) ∈ ±[n], |w(1)|, …, |w(n)| a permutation. */
+export type SignedPermutation = readonly number[];
+/** An alternating sign matrix: n rows of n entries −1, 0, 1 (rows and columns sum to 1, signs alternate). */
+export type AlternatingSignMatrix = readonly (readonly number[])[];
+/** A monotone triangle: row k (k = 1..n) strictly increasing of length k, the last row 1..n, rows interlacing. */
+export type MonotoneTriangle = readonly (readonly number[])[];
+/** A binary tree: null (empty) or [left subtree, right subtree]. */
+export type BinaryTree = null | readonly [BinaryTree, BinaryTree];
+/** A plane (ordered) tree: the list of the root's subtrees, left to right. */
+export type PlaneTree = readonly PlaneTree[];
+/** A tree on the vertices 0..n rooted at 0: parent[i−1] is the parent of vertex i. */
+export type LabelledTree = readonly number[];
+/** A Prüfer code of a tree on 0..n: n−1 letters from 0..n (empty for n ≤ 1). */
+export type PruferCode = readonly number[];
+/** An increasing (recursive) tree on 0..n rooted at 0: parent[i−1] < i is the parent of vertex i. */
+export type IncreasingTree = readonly number[];
+/** An increasing plane tree on 0..n rooted at 0: children[v] lists v's children left to right (each > v). */
+export type IncreasingPlaneTree = readonly (readonly number[])[];
+/** An inversion sequence e_1 … e_n with 0 ≤ e_i ≤ i − 1. */
+export type InversionSequence = readonly number[];
+/** A Stirling permutation of order n: 1,1,2,2,…,n,n arranged so that letters between the two i's exceed i. */
+export type StirlingPermutation = readonly number[];
+/** A perfect matching of [2n]: partner[i−1] is the point matched with i. */
+export type PerfectMatching = readonly number[];

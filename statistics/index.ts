@@ -5,6 +5,8 @@
 import { InputError } from '../src/core/errors.js';
 import { unknownNameMessage } from '../src/core/suggest.js';
 import type { Statistic } from '../src/enumerate/plugin.js';
+import { asmDiagonalOnes, asmFirstColumnOne, asmFirstRowOne, asmInversions, asmLastColumnOne, asmLastRowOne, asmNegatives } from './asm-statistics.js';
+import { binaryTreeFullNodes, binaryTreeHeight, binaryTreeLeaves, binaryTreeLeftBranch, binaryTreeLeftEdges, binaryTreeLeftSubtree, binaryTreePathLength, binaryTreeRightBranch } from './binary-tree-statistics.js';
 import { binaryInversions, ones, subsetSum } from './binary-words.js';
 import { blockIndexSum } from './block-index-sum.js';
 import { tableauCharge, tableauCocharge, wordCharge, wordCocharge } from './charge.js';
@@ -16,22 +18,48 @@ import { dyckArea, dyckBounce, dyckDinv, dyckPeaks, dyckReturns } from './dyck-s
 import { excedances, weakExcedances } from './excedances.js';
 import { fillingInv, fillingMaj } from './filling-statistics.js';
 import { fixedPoints } from './fixed-points.js';
+import { increasingPlaneTreeDepthOfLast, increasingPlaneTreeHeight, increasingPlaneTreeLeaves, increasingPlaneTreeMaxDegree, increasingPlaneTreePathLength, increasingPlaneTreeRootDegree } from './increasing-plane-tree-statistics.js';
+import { increasingTreeChildrenOfOne, increasingTreeDepthOfLast, increasingTreeHeight, increasingTreeLeaves, increasingTreeMaxDegree, increasingTreePathLength, increasingTreeRootDegree } from './increasing-tree-statistics.js';
+import { inversionSequenceAscents, inversionSequenceDescents, inversionSequenceDistinct, inversionSequenceFullEntries, inversionSequenceLast, inversionSequenceMax, inversionSequencePlateaux, inversionSequenceRightMinima, inversionSequenceSum, inversionSequenceZeros } from './inversion-sequence-statistics.js';
 import { inversions } from './inversions.js';
+import { treeChildlessVertices, treeDecreasingEdges, treeHeight, treeInversions, treeLeaves, treeMaxDegree, treePathLength, treeRootDegree } from './labelled-tree-statistics.js';
 import { longestIncreasingSubsequence } from './longest-increasing-subsequence.js';
 import { inverseMajorIndex, majorIndex } from './major-index.js';
+import { matchingAlignments, matchingComponents, matchingCrossings, matchingFirstArcLength, matchingNestings, matchingOuterArcs, matchingShortArcs } from './matching-statistics.js';
 import { ospDinv } from './osp-dinv.js';
 import { ospInv } from './osp-inv.js';
 import { ospMaj, ospMinimaj } from './osp-maj.js';
 import { decoratedArea, decoratedDinv, parkingArea, parkingDinv } from './parking-statistics.js';
 import { distinctParts, durfeeSquare, largestPart, nLambda, partitionParts } from './partition-statistics.js';
 import { peaks, valleys } from './peaks.js';
+import { planeTreeBinaryNodes, planeTreeHeight, planeTreeLeaves, planeTreeLeftBranch, planeTreeMaxDegree, planeTreePathLength, planeTreeRightBranch, planeTreeRootDegree, planeTreeUnaryNodes } from './plane-tree-statistics.js';
+import { pruferDistinctLetters, pruferMaxMultiplicity, pruferZeros } from './prufer-statistics.js';
 import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMinima } from './records.js';
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
+import { flagDescents, flagMajorIndex, negativeDescents, negativeMajorIndex, signedDescents, typeBDescents } from './signed-descents.js';
+import { flagExcedances, signedMajorIndex, typeBExcedances } from './signed-excedances.js';
+import { flagInversions, negatedFixedPoints, negativeSum, negativeSumPairs, negatives, signedFixedPoints, signedInversions, signedLength } from './signed-length.js';
+import { stirlingAscents, stirlingDescents, stirlingInversions, stirlingPlateaux } from './stirling-permutation-statistics.js';
 import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
 import { wordInversions } from './word-inversions.js';
 import { wordDescents, wordMajorIndex } from './word-major-index.js';
 
 export const STATISTICS: readonly Statistic<unknown>[] = [
+  asmDiagonalOnes,
+  asmFirstColumnOne,
+  asmFirstRowOne,
+  asmInversions,
+  asmLastColumnOne,
+  asmLastRowOne,
+  asmNegatives,
+  binaryTreeFullNodes,
+  binaryTreeHeight,
+  binaryTreeLeaves,
+  binaryTreeLeftBranch,
+  binaryTreeLeftEdges,
+  binaryTreeLeftSubtree,
+  binaryTreePathLength,
+  binaryTreeRightBranch,
   binaryInversions,
   ones,
   subsetSum,
@@ -58,10 +86,48 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   fillingInv,
   fillingMaj,
   fixedPoints,
+  increasingPlaneTreeDepthOfLast,
+  increasingPlaneTreeHeight,
+  increasingPlaneTreeLeaves,
+  increasingPlaneTreeMaxDegree,
+  increasingPlaneTreePathLength,
+  increasingPlaneTreeRootDegree,
+  increasingTreeChildrenOfOne,
+  increasingTreeDepthOfLast,
+  increasingTreeHeight,
+  increasingTreeLeaves,
+  increasingTreeMaxDegree,
+  increasingTreePathLength,
+  increasingTreeRootDegree,
+  inversionSequenceAscents,
+  inversionSequenceDescents,
+  inversionSequenceDistinct,
+  inversionSequenceFullEntries,
+  inversionSequenceLast,
+  inversionSequenceMax,
+  inversionSequencePlateaux,
+  inversionSequenceRightMinima,
+  inversionSequenceSum,
+  inversionSequenceZeros,
   inversions,
+  treeChildlessVertices,
+  treeDecreasingEdges,
+  treeHeight,
+  treeInversions,
+  treeLeaves,
+  treeMaxDegree,
+  treePathLength,
+  treeRootDegree,
   longestIncreasingSubsequence,
   inverseMajorIndex,
   majorIndex,
+  matchingAlignments,
+  matchingComponents,
+  matchingCrossings,
+  matchingFirstArcLength,
+  matchingNestings,
+  matchingOuterArcs,
+  matchingShortArcs,
   ospDinv,
   ospInv,
   ospMaj,
@@ -77,6 +143,18 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   partitionParts,
   peaks,
   valleys,
+  planeTreeBinaryNodes,
+  planeTreeHeight,
+  planeTreeLeaves,
+  planeTreeLeftBranch,
+  planeTreeMaxDegree,
+  planeTreePathLength,
+  planeTreeRightBranch,
+  planeTreeRootDegree,
+  planeTreeUnaryNodes,
+  pruferDistinctLetters,
+  pruferMaxMultiplicity,
+  pruferZeros,
   leftToRightMaxima,
   leftToRightMinima,
   rightToLeftMaxima,
@@ -85,6 +163,27 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   crossings,
   nestings,
   singletons,
+  flagDescents,
+  flagMajorIndex,
+  negativeDescents,
+  negativeMajorIndex,
+  signedDescents,
+  typeBDescents,
+  flagExcedances,
+  signedMajorIndex,
+  typeBExcedances,
+  flagInversions,
+  negatedFixedPoints,
+  negativeSum,
+  negativeSumPairs,
+  negatives,
+  signedFixedPoints,
+  signedInversions,
+  signedLength,
+  stirlingAscents,
+  stirlingDescents,
+  stirlingInversions,
+  stirlingPlateaux,
   tableauDescents,
   tableauMajorIndex,
   wordInversions,

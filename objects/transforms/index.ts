@@ -5,35 +5,107 @@
 import { InputError } from '../../src/core/errors.js';
 import { unknownNameMessage } from '../../src/core/suggest.js';
 import type { Transform } from '../../src/enumerate/plugin.js';
+import { asmRotate } from './asm-rotate.js';
+import { asmToMonotoneTriangle } from './asm-to-monotone-triangle.js';
+import { asmTranspose } from './asm-transpose.js';
+import { asmVerticalFlip } from './asm-vertical-flip.js';
+import { avoiding321Inclusion } from './avoiding-321-inclusion.js';
+import { avoiding321ToDyck } from './avoiding-321-to-dyck.js';
+import { binaryToPlaneTree } from './binary-to-plane-tree.js';
+import { binaryTreeMirror } from './binary-tree-mirror.js';
+import { binaryTreeToDyck } from './binary-tree-to-dyck.js';
 import { complement, wordComplement } from './complement.js';
 import { conjugate } from './conjugate.js';
 import { dyckReverse } from './dyck-reverse.js';
+import { dyckTo321Avoiding } from './dyck-to-321-avoiding.js';
+import { dyckToBinaryTree } from './dyck-to-binary-tree.js';
+import { dyckToPlaneTree } from './dyck-to-plane-tree.js';
 import { evacuation } from './evacuation.js';
 import { foata, wordFoata } from './foata.js';
+import { increasingTreeOfPermutation } from './increasing-tree-of-permutation.js';
 import { inverse } from './inverse.js';
+import { lehmerCode } from './lehmer-code.js';
+import { lehmerDecode } from './lehmer-decode.js';
+import { matchingReverse } from './matching-reverse.js';
+import { matchingToInvolution } from './matching-to-involution.js';
+import { parkingToTree } from './parking-to-tree.js';
+import { permutationMatrix } from './permutation-matrix.js';
+import { permutationOfIncreasingTree } from './permutation-of-increasing-tree.js';
+import { planeToBinaryTree } from './plane-to-binary-tree.js';
+import { planeTreeMirror } from './plane-tree-mirror.js';
+import { planeTreeToDyck } from './plane-tree-to-dyck.js';
+import { planeTreeToStirling } from './plane-tree-to-stirling.js';
+import { pruferCode } from './prufer-code.js';
+import { pruferDecode } from './prufer-decode.js';
 import { reverse, wordReverse } from './reverse.js';
 import { rskInsertion, rskRecording } from './rsk.js';
+import { signedAbsolute } from './signed-absolute.js';
+import { signedInverse } from './signed-inverse.js';
+import { signedNegation } from './signed-negation.js';
+import { signedReverse } from './signed-reverse.js';
+import { signedReverseComplement } from './signed-reverse-complement.js';
 import { standardize } from './standardize.js';
+import { stirlingReverse } from './stirling-reverse.js';
+import { stirlingToPlaneTree } from './stirling-to-plane-tree.js';
 import { subsetComplement } from './subset-complement.js';
 import { transpose } from './transpose.js';
+import { treeToParking } from './tree-to-parking.js';
+import { wordRskInsertion } from './word-rsk-insertion.js';
+import { wordRskRecording } from './word-rsk-recording.js';
 import { zeta } from './zeta.js';
 
 export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
+  asmRotate,
+  asmToMonotoneTriangle,
+  asmTranspose,
+  asmVerticalFlip,
+  avoiding321Inclusion,
+  avoiding321ToDyck,
+  binaryToPlaneTree,
+  binaryTreeMirror,
+  binaryTreeToDyck,
   complement,
   wordComplement,
   conjugate,
   dyckReverse,
+  dyckTo321Avoiding,
+  dyckToBinaryTree,
+  dyckToPlaneTree,
   evacuation,
   foata,
   wordFoata,
+  increasingTreeOfPermutation,
   inverse,
+  lehmerCode,
+  lehmerDecode,
+  matchingReverse,
+  matchingToInvolution,
+  parkingToTree,
+  permutationMatrix,
+  permutationOfIncreasingTree,
+  planeToBinaryTree,
+  planeTreeMirror,
+  planeTreeToDyck,
+  planeTreeToStirling,
+  pruferCode,
+  pruferDecode,
   reverse,
   wordReverse,
   rskInsertion,
   rskRecording,
+  signedAbsolute,
+  signedInverse,
+  signedNegation,
+  signedReverse,
+  signedReverseComplement,
   standardize,
+  stirlingReverse,
+  stirlingToPlaneTree,
   subsetComplement,
   transpose,
+  treeToParking,
+  wordRskInsertion,
+  wordRskRecording,
   zeta,
 ];
 

@@ -29,7 +29,8 @@ export interface BuildReport {
 /** The units still to build (those not done with the same statistics) and their object count, within the limit. */
 export function pendingWork(cat: Catalogue, o: BuildOptions): { plan: ReturnType<typeof planUnits>; todo: Unit[]; total: bigint } {
   const plan = planUnits(o.nMax, o.families);
-  const todo = plan.units.filter((u) => !cat.isUnitDone(u.family.id, u.params, statsSignature(u)));
+  // Small units first (stable within a size): an interrupted build keeps as many finished units as it can.
+  const todo = plan.units.filter((u) => !cat.isUnitDone(u.family.id, u.params, statsSignature(u))).sort((a, b) => (a.objects < b.objects ? -1 : a.objects > b.objects ? 1 : 0));
   const total = todo.reduce((s, u) => s + u.objects, 0n);
   if (total > o.maxObjects) {
     throw new LimitError(`building up to n = ${o.nMax} visits ${total} objects, above the limit ${o.maxObjects}; raise it with --max-objects`, 'max-objects');
