@@ -9,6 +9,7 @@ import { compositions } from './compositions.js';
 import { decoratedDyckPaths } from './decorated-dyck-paths.js';
 import { dyckPaths } from './dyck-paths.js';
 import { fillings } from './fillings.js';
+import { orderedMultisetPartitions } from './ordered-multiset-partitions.js';
 import { orderedSetPartitions } from './ordered-set-partitions.js';
 import { parkingFunctions } from './parking-functions.js';
 import { partitions } from './partitions.js';
@@ -24,6 +25,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   decoratedDyckPaths,
   dyckPaths,
   fillings,
+  orderedMultisetPartitions,
   orderedSetPartitions,
   parkingFunctions,
   partitions,

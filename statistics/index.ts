@@ -19,6 +19,8 @@ import { fixedPoints } from './fixed-points.js';
 import { inversions } from './inversions.js';
 import { longestIncreasingSubsequence } from './longest-increasing-subsequence.js';
 import { inverseMajorIndex, majorIndex } from './major-index.js';
+import { ompFirstBlockSize, ompLargestBlock, ompLastBlockSize, ompMinimaDescents, ompSingletonBlocks } from './omp-block-statistics.js';
+import { ompDinv, ompInv, ompMaj, ompMinimaj } from './omp-delta-statistics.js';
 import { ospDinv } from './osp-dinv.js';
 import { ospInv } from './osp-inv.js';
 import { ospMaj, ospMinimaj } from './osp-maj.js';
@@ -62,6 +64,15 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   longestIncreasingSubsequence,
   inverseMajorIndex,
   majorIndex,
+  ompFirstBlockSize,
+  ompLargestBlock,
+  ompLastBlockSize,
+  ompMinimaDescents,
+  ompSingletonBlocks,
+  ompDinv,
+  ompInv,
+  ompMaj,
+  ompMinimaj,
   ospDinv,
   ospInv,
   ospMaj,
