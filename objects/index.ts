@@ -8,6 +8,8 @@ import type { Family } from '../src/enumerate/plugin.js';
 import { compositions } from './compositions.js';
 import { decoratedDyckPaths } from './decorated-dyck-paths.js';
 import { dyckPaths } from './dyck-paths.js';
+import { dyckPathsDecoratedRises } from './dyck-paths-decorated-rises.js';
+import { dyckPathsDecoratedValleys } from './dyck-paths-decorated-valleys.js';
 import { fillings } from './fillings.js';
 import { orderedMultisetPartitions } from './ordered-multiset-partitions.js';
 import { orderedSetPartitions } from './ordered-set-partitions.js';
@@ -18,12 +20,15 @@ import { semistandardTableaux } from './semistandard-tableaux.js';
 import { setPartitions } from './set-partitions.js';
 import { standardTableaux } from './standard-tableaux.js';
 import { subsets } from './subsets.js';
+import { valleyDecoratedDyckPaths } from './valley-decorated-dyck-paths.js';
 import { words } from './words.js';
 
 export const FAMILIES: readonly Family<unknown>[] = [
   compositions,
   decoratedDyckPaths,
   dyckPaths,
+  dyckPathsDecoratedRises,
+  dyckPathsDecoratedValleys,
   fillings,
   orderedMultisetPartitions,
   orderedSetPartitions,
@@ -34,6 +39,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   setPartitions,
   standardTableaux,
   subsets,
+  valleyDecoratedDyckPaths,
   words,
 ];
 

@@ -10,6 +10,8 @@ import { blockIndexSum } from './block-index-sum.js';
 import { tableauCharge, tableauCocharge, wordCharge, wordCocharge } from './charge.js';
 import { compositionLargestPart, compositionMajorIndex, compositionParts } from './composition-parts.js';
 import { cycles } from './cycles.js';
+import { decoratedRisesArea, decoratedRisesDinv, decoratedRisesFirstRise, decoratedRisesMarkedArea, decoratedRisesPeaks } from './decorated-rises-statistics.js';
+import { decoratedValleysArea, decoratedValleysDinv, decoratedValleysMarkedArea, decoratedValleysOnDiagonal, decoratedValleysReturns } from './decorated-valleys-statistics.js';
 import { denert } from './denert.js';
 import { ascents, descents, inverseDescents } from './descents.js';
 import { dyckArea, dyckBounce, dyckDinv, dyckPeaks, dyckReturns } from './dyck-statistics.js';
@@ -30,6 +32,7 @@ import { peaks, valleys } from './peaks.js';
 import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMinima } from './records.js';
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
 import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
+import { valleyDecoratedArea, valleyDecoratedContractible, valleyDecoratedDinv, valleyDecoratedValleys } from './valley-decorated-statistics.js';
 import { wordInversions } from './word-inversions.js';
 import { wordDescents, wordMajorIndex } from './word-major-index.js';
 
@@ -46,6 +49,16 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   compositionMajorIndex,
   compositionParts,
   cycles,
+  decoratedRisesArea,
+  decoratedRisesDinv,
+  decoratedRisesFirstRise,
+  decoratedRisesMarkedArea,
+  decoratedRisesPeaks,
+  decoratedValleysArea,
+  decoratedValleysDinv,
+  decoratedValleysMarkedArea,
+  decoratedValleysOnDiagonal,
+  decoratedValleysReturns,
   denert,
   ascents,
   descents,
@@ -98,6 +111,10 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   singletons,
   tableauDescents,
   tableauMajorIndex,
+  valleyDecoratedArea,
+  valleyDecoratedContractible,
+  valleyDecoratedDinv,
+  valleyDecoratedValleys,
   wordInversions,
   wordDescents,
   wordMajorIndex,
