@@ -16,6 +16,7 @@ import { orderedSetPartitions } from './ordered-set-partitions.js';
 import { parkingFunctions } from './parking-functions.js';
 import { partitions } from './partitions.js';
 import { permutations } from './permutations.js';
+import { schroderPaths } from './schroder-paths.js';
 import { semistandardTableaux } from './semistandard-tableaux.js';
 import { setPartitions } from './set-partitions.js';
 import { standardTableaux } from './standard-tableaux.js';
@@ -35,6 +36,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   parkingFunctions,
   partitions,
   permutations,
+  schroderPaths,
   semistandardTableaux,
   setPartitions,
   standardTableaux,

@@ -30,6 +30,8 @@ import { decoratedArea, decoratedDinv, parkingArea, parkingDinv } from './parkin
 import { distinctParts, durfeeSquare, largestPart, nLambda, partitionParts } from './partition-statistics.js';
 import { peaks, valleys } from './peaks.js';
 import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMinima } from './records.js';
+import { schroderDiagonals, schroderDiagonalsOnLine, schroderHeight, schroderInitialRise, schroderPeaks, schroderReturns, schroderValleys } from './schroder-shape-statistics.js';
+import { schroderArea, schroderBounce, schroderDinv } from './schroder-statistics.js';
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
 import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
 import { valleyDecoratedArea, valleyDecoratedContractible, valleyDecoratedDinv, valleyDecoratedValleys } from './valley-decorated-statistics.js';
@@ -105,6 +107,16 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   leftToRightMinima,
   rightToLeftMaxima,
   rightToLeftMinima,
+  schroderDiagonals,
+  schroderDiagonalsOnLine,
+  schroderHeight,
+  schroderInitialRise,
+  schroderPeaks,
+  schroderReturns,
+  schroderValleys,
+  schroderArea,
+  schroderBounce,
+  schroderDinv,
   blocks,
   crossings,
   nestings,

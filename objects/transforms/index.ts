@@ -13,6 +13,8 @@ import { foata, wordFoata } from './foata.js';
 import { inverse } from './inverse.js';
 import { reverse, wordReverse } from './reverse.js';
 import { rskInsertion, rskRecording } from './rsk.js';
+import { schroderReverse } from './schroder-reverse.js';
+import { schroderZeta } from './schroder-zeta.js';
 import { standardize } from './standardize.js';
 import { subsetComplement } from './subset-complement.js';
 import { transpose } from './transpose.js';
@@ -31,6 +33,8 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   wordReverse,
   rskInsertion,
   rskRecording,
+  schroderReverse,
+  schroderZeta,
   standardize,
   subsetComplement,
   transpose,

@@ -57,7 +57,7 @@ describe('decorated Dyck paths', () => {
     }
     for (const k of [2, 3]) expect(streamed('valley-decorated-dyck-paths', { n: 6, k })).toBe(Number(familyById('valley-decorated-dyck-paths').count({ n: 6, k })));
   });
-  it('unlabelled, decorated rises or valleys: Σ_p N(n,p)·C(n−p, d) and Σ_p N(n,p)·C(p−1, d) with Narayana numbers N(n,p) = C(n,p)C(n,p−1)/n (Narayana; Stanley, EC2 ex. 6.36, from memory; mathjs combinations); Catalan at d = 0 (mathjs catalan)', () => {
+  it('unlabelled, decorated rises or valleys: Σ_p N(n,p)·C(n−p, d) and Σ_p N(n,p)·C(p−1, d) with Narayana numbers N(n,p) = C(n,p)C(n,p−1)/n (Narayana numbers, from memory; mathjs combinations); Catalan at d = 0 (mathjs catalan)', () => {
     for (let n = 1; n <= 8; n++) {
       for (let d = 0; d < n; d++) {
         let rises = 0;
@@ -71,6 +71,25 @@ describe('decorated Dyck paths', () => {
         expect(both('dyck-paths-decorated-valleys', { n, d }), `valleys n=${n} d=${d}`).toEqual([valleys, valleys]);
       }
       expect(Number(familyById('dyck-paths-decorated-rises').count({ n, d: 0 }))).toBe(catalan(n));
+    }
+  });
+});
+
+describe('Schröder paths', () => {
+  it('large Schröder numbers 1, 2, 6, 22, 90, 394, 1806, 8558 (from memory), and the same by (n+1)S_n = 3(2n−1)S_{n−1} − (n−2)S_{n−2} (from memory; two recollections that must agree)', () => {
+    const known = [1, 2, 6, 22, 90, 394, 1806, 8558];
+    const rec = [1, 2];
+    for (let n = 2; n <= 10; n++) rec.push((3 * (2 * n - 1) * rec[n - 1]! - (n - 2) * rec[n - 2]!) / (n + 1));
+    known.forEach((v, n) => expect(rec[n]).toBe(v));
+    for (let n = 0; n <= 7; n++) expect(both('schroder-paths', { n })).toEqual([rec[n], rec[n]]);
+    expect(Number(familyById('schroder-paths').count({ n: 10 }))).toBe(rec[10]);
+  });
+  it('with d diagonal steps: C(2n−d, d)·Catalan(n−d) (mathjs combinations, catalan)', () => {
+    for (let n = 1; n <= 6; n++) {
+      for (let d = 0; d <= n; d++) {
+        const ref = combinations(2 * n - d, d) * catalan(n - d);
+        expect(both('schroder-paths', { n, d })).toEqual([ref, ref]);
+      }
     }
   });
 });
