@@ -11,6 +11,8 @@ import { dyckPaths } from './dyck-paths.js';
 import { dyckPathsDecoratedRises } from './dyck-paths-decorated-rises.js';
 import { dyckPathsDecoratedValleys } from './dyck-paths-decorated-valleys.js';
 import { fillings } from './fillings.js';
+import { motzkinPaths } from './motzkin-paths.js';
+import { noncrossingPartitions } from './noncrossing-partitions.js';
 import { orderedMultisetPartitions } from './ordered-multiset-partitions.js';
 import { orderedSetPartitions } from './ordered-set-partitions.js';
 import { parkingFunctions } from './parking-functions.js';
@@ -31,6 +33,8 @@ export const FAMILIES: readonly Family<unknown>[] = [
   dyckPathsDecoratedRises,
   dyckPathsDecoratedValleys,
   fillings,
+  motzkinPaths,
+  noncrossingPartitions,
   orderedMultisetPartitions,
   orderedSetPartitions,
   parkingFunctions,

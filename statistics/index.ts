@@ -21,6 +21,8 @@ import { fixedPoints } from './fixed-points.js';
 import { inversions } from './inversions.js';
 import { longestIncreasingSubsequence } from './longest-increasing-subsequence.js';
 import { inverseMajorIndex, majorIndex } from './major-index.js';
+import { motzkinArea, motzkinDoubleRises, motzkinGroundLevels, motzkinHeight, motzkinLeadingLevels, motzkinLevelSteps, motzkinPeaks, motzkinReturns, motzkinUpSteps, motzkinValleys } from './motzkin-statistics.js';
+import { ncBlockOfLast, ncBlockOfOne, ncBlocks, ncBonds, ncLargestBlock, ncNestings, ncOuterBlocks, ncSingletons } from './noncrossing-statistics.js';
 import { ompFirstBlockSize, ompLargestBlock, ompLastBlockSize, ompMinimaDescents, ompSingletonBlocks } from './omp-block-statistics.js';
 import { ompDinv, ompInv, ompMaj, ompMinimaj } from './omp-delta-statistics.js';
 import { ospDinv } from './osp-dinv.js';
@@ -79,6 +81,24 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   longestIncreasingSubsequence,
   inverseMajorIndex,
   majorIndex,
+  motzkinArea,
+  motzkinDoubleRises,
+  motzkinGroundLevels,
+  motzkinHeight,
+  motzkinLeadingLevels,
+  motzkinLevelSteps,
+  motzkinPeaks,
+  motzkinReturns,
+  motzkinUpSteps,
+  motzkinValleys,
+  ncBlockOfLast,
+  ncBlockOfOne,
+  ncBlocks,
+  ncBonds,
+  ncLargestBlock,
+  ncNestings,
+  ncOuterBlocks,
+  ncSingletons,
   ompFirstBlockSize,
   ompLargestBlock,
   ompLastBlockSize,

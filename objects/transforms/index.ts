@@ -8,9 +8,14 @@ import type { Transform } from '../../src/enumerate/plugin.js';
 import { complement, wordComplement } from './complement.js';
 import { conjugate } from './conjugate.js';
 import { dyckReverse } from './dyck-reverse.js';
+import { dyckToNc } from './dyck-to-nc.js';
 import { evacuation } from './evacuation.js';
 import { foata, wordFoata } from './foata.js';
 import { inverse } from './inverse.js';
+import { krewerasComplementMap } from './kreweras-complement.js';
+import { motzkinReverse } from './motzkin-reverse.js';
+import { ncRotation } from './nc-rotation.js';
+import { ncToDyck } from './nc-to-dyck.js';
 import { reverse, wordReverse } from './reverse.js';
 import { rskInsertion, rskRecording } from './rsk.js';
 import { schroderReverse } from './schroder-reverse.js';
@@ -25,10 +30,15 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   wordComplement,
   conjugate,
   dyckReverse,
+  dyckToNc,
   evacuation,
   foata,
   wordFoata,
   inverse,
+  krewerasComplementMap,
+  motzkinReverse,
+  ncRotation,
+  ncToDyck,
   reverse,
   wordReverse,
   rskInsertion,

@@ -93,3 +93,26 @@ describe('Schröder paths', () => {
     }
   });
 });
+
+describe('Motzkin paths and noncrossing partitions', () => {
+  it('Motzkin numbers 1, 1, 2, 4, 9, 21, 51, 127, 323, 835 (from memory) and (n+2)M_n = (2n+1)M_{n−1} + 3(n−1)M_{n−2} (from memory; the two must agree)', () => {
+    const known = [1, 1, 2, 4, 9, 21, 51, 127, 323, 835];
+    const rec = [1, 1];
+    for (let n = 2; n <= 14; n++) rec.push(((2 * n + 1) * rec[n - 1]! + 3 * (n - 1) * rec[n - 2]!) / (n + 2));
+    known.forEach((v, n) => expect(rec[n]).toBe(v));
+    for (let n = 0; n <= 9; n++) expect(both('motzkin-paths', { n })).toEqual([rec[n], rec[n]]);
+    expect(Number(familyById('motzkin-paths').count({ n: 14 }))).toBe(rec[14]);
+  });
+  it('Motzkin paths with k up steps: C(n, 2k)·Catalan(k) (mathjs combinations, catalan)', () => {
+    for (let n = 0; n <= 9; n++) for (let k = 0; 2 * k <= n; k++) expect(both('motzkin-paths', { n, k })).toEqual([combinations(n, 2 * k) * catalan(k), combinations(n, 2 * k) * catalan(k)]);
+  });
+  it('noncrossing partitions: Catalan numbers, and Narayana numbers C(n,k)C(n,k−1)/n by blocks (mathjs catalan, combinations; Kreweras 1972)', () => {
+    for (let n = 0; n <= 9; n++) {
+      expect(both('noncrossing-partitions', { n })).toEqual([catalan(n), catalan(n)]);
+      for (let k = 1; k <= n; k++) {
+        const nar = (combinations(n, k) * combinations(n, k - 1)) / n;
+        expect(both('noncrossing-partitions', { n, k })).toEqual([nar, nar]);
+      }
+    }
+  });
+});

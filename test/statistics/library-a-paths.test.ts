@@ -1,4 +1,5 @@
-/** Schröder and Motzkin paths of part A: classical distributions against their sources. */
+/** Schröder paths, Motzkin paths and noncrossing partitions of part A: classical distributions against their sources. */
+import { catalan, combinations } from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { nabla } from '../../src/symfun/operators.js';
 import { SymFun } from '../../src/symfun/symfun.js';
@@ -19,6 +20,42 @@ describe('q,t-Schröder polynomials', () => {
         expect(da.equals(target), `dinv/area n=${n} d=${d}`).toBe(true);
         expect(target.equals(target.swapQT())).toBe(true); // the q,t-symmetry the theorem implies
       }
+    }
+  });
+});
+
+describe('Motzkin paths', () => {
+  it("Touchard's identity: Σ_k C(n,2k)·2^{n−2k}·Cat(k) = Cat(n+1), i.e. the level-step distribution at q = 2 is a Catalan number, n ≤ 10 (Touchard 1924, from memory; mathjs catalan)", async () => {
+    for (let n = 0; n <= 10; n++) {
+      const d = (await dist('motzkin-paths', { n }, ['motzkin-level-steps'])).series;
+      expect(d.evaluate(2n)).toBe(BigInt(catalan(n + 1)));
+    }
+  });
+  it('paths with no level step at height 0 are the Riordan numbers r_n, with M_n = r_n + r_{n+1} (from memory; checked against the counts)', async () => {
+    const riordan = [1, 0, 1, 1, 3, 6, 15, 36, 91, 232]; // from memory
+    for (let n = 0; n <= 9; n++) {
+      const d = (await dist('motzkin-paths', { n }, ['motzkin-ground-levels'])).series;
+      expect(d.coeff(0), `n=${n}`).toBe(BigInt(riordan[n]!));
+      if (n < 9) expect(d.sumCoefficients()).toBe(BigInt(riordan[n]! + riordan[n + 1]!));
+    }
+  });
+  it('reversal keeps area, height and up steps (their distributions are unchanged), n ≤ 8 (common practice)', async () => {
+    for (const s of ['motzkin-area', 'motzkin-height', 'motzkin-up-steps', 'motzkin-peaks']) {
+      const a = (await dist('motzkin-paths', { n: 8 }, [s])).series;
+      const b = (await dist('motzkin-paths', { n: 8 }, [s], { transform: 'motzkin-reverse' })).series;
+      expect(a.equals(b), s).toBe(true);
+    }
+  });
+});
+
+describe('noncrossing partitions', () => {
+  it('blocks: Narayana numbers C(n,k)C(n,k−1)/n; partitions without singletons: Riordan numbers r_n, n ≤ 9 (Kreweras 1972; Riordan numbers from memory)', async () => {
+    const riordan = [1, 0, 1, 1, 3, 6, 15, 36, 91, 232];
+    for (let n = 1; n <= 9; n++) {
+      const blocks = (await dist('noncrossing-partitions', { n }, ['nc-blocks'])).series;
+      for (let k = 1; k <= n; k++) expect(blocks.coeff(k)).toBe(BigInt((combinations(n, k) * combinations(n, k - 1)) / n));
+      const singles = (await dist('noncrossing-partitions', { n }, ['nc-singletons'])).series;
+      expect(singles.coeff(0), `n=${n}`).toBe(BigInt(riordan[n]!));
     }
   });
 });
