@@ -21,6 +21,7 @@ import { permutations } from './permutations.js';
 import { schroderPaths } from './schroder-paths.js';
 import { semistandardTableaux } from './semistandard-tableaux.js';
 import { setPartitions } from './set-partitions.js';
+import { skewStandardTableaux } from './skew-standard-tableaux.js';
 import { standardTableaux } from './standard-tableaux.js';
 import { subsets } from './subsets.js';
 import { valleyDecoratedDyckPaths } from './valley-decorated-dyck-paths.js';
@@ -43,6 +44,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   schroderPaths,
   semistandardTableaux,
   setPartitions,
+  skewStandardTableaux,
   standardTableaux,
   subsets,
   valleyDecoratedDyckPaths,

@@ -35,6 +35,7 @@ import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMin
 import { schroderDiagonals, schroderDiagonalsOnLine, schroderHeight, schroderInitialRise, schroderPeaks, schroderReturns, schroderValleys } from './schroder-shape-statistics.js';
 import { schroderArea, schroderBounce, schroderDinv } from './schroder-statistics.js';
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
+import { skewComajor, skewDescents, skewDoubleDescents, skewMajorIndex, skewPeaks, skewRowOfLargest } from './skew-tableau-statistics.js';
 import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
 import { valleyDecoratedArea, valleyDecoratedContractible, valleyDecoratedDinv, valleyDecoratedValleys } from './valley-decorated-statistics.js';
 import { wordInversions } from './word-inversions.js';
@@ -141,6 +142,12 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   crossings,
   nestings,
   singletons,
+  skewComajor,
+  skewDescents,
+  skewDoubleDescents,
+  skewMajorIndex,
+  skewPeaks,
+  skewRowOfLargest,
   tableauDescents,
   tableauMajorIndex,
   valleyDecoratedArea,

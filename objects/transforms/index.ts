@@ -20,6 +20,9 @@ import { reverse, wordReverse } from './reverse.js';
 import { rskInsertion, rskRecording } from './rsk.js';
 import { schroderReverse } from './schroder-reverse.js';
 import { schroderZeta } from './schroder-zeta.js';
+import { skewEvacuation } from './skew-evacuation.js';
+import { skewPromotion } from './skew-promotion.js';
+import { skewTranspose } from './skew-transpose.js';
 import { standardize } from './standardize.js';
 import { subsetComplement } from './subset-complement.js';
 import { transpose } from './transpose.js';
@@ -45,6 +48,9 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   rskRecording,
   schroderReverse,
   schroderZeta,
+  skewEvacuation,
+  skewPromotion,
+  skewTranspose,
   standardize,
   subsetComplement,
   transpose,

@@ -2,7 +2,7 @@
  * Counts of the Delta/Shuffle and superspace families (part A of the statistics library),
  * generated and by each family's own formula, against outside references named beside each.
  */
-import { catalan, combinations, factorial, stirlingS2 } from 'mathjs';
+import { catalan, combinations, det, factorial, fraction, matrix, multiply, stirlingS2 } from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { familyById } from '../../objects/index.js';
 import type { Params } from '../../src/enumerate/plugin.js';
@@ -113,6 +113,27 @@ describe('Motzkin paths and noncrossing partitions', () => {
         const nar = (combinations(n, k) * combinations(n, k - 1)) / n;
         expect(both('noncrossing-partitions', { n, k })).toEqual([nar, nar]);
       }
+    }
+  });
+});
+
+describe('skew standard tableaux', () => {
+  /** Aitken's formula f^{λ/μ} = n!·det[1/(λ_i − μ_j − i + j)!] (Stanley, EC2 Cor. 7.16.3), exact with mathjs fractions. */
+  function aitken(outer: number[], inner: number[]): number {
+    const l = outer.length;
+    const n = outer.reduce((a, b) => a + b, 0) - inner.reduce((a, b) => a + b, 0);
+    if (l === 0) return 1;
+    const rows = outer.map((li, i) => outer.map((_, j) => {
+      const m = li - (inner[j] ?? 0) - i + j;
+      return m < 0 ? fraction(0) : fraction(1, Number(factorial(m)));
+    }));
+    return Number(multiply(det(matrix(rows)), factorial(n)));
+  }
+  it("Aitken's determinant (Stanley, EC2 Cor. 7.16.3; mathjs det over fractions)", () => {
+    const cases: [number[], number[]][] = [[[2, 1], [1]], [[3, 2], [1]], [[3, 3, 1], [2, 1]], [[2, 2], [1, 1]], [[4, 3, 2], [2, 1]], [[4, 4, 2, 1], [2, 1]], [[3, 3, 3], [2, 1]], [[5, 3, 1], []], [[3, 1], [3, 1]]];
+    for (const [outer, inner] of cases) {
+      const ref = aitken(outer, inner);
+      expect(both('skew-standard-tableaux', { outer, inner }), `${outer}/${inner}`).toEqual([ref, ref]);
     }
   });
 });

@@ -4,9 +4,13 @@ import { familyById } from '../../objects/index.js';
 import { dyckToNoncrossing, isNoncrossing, noncrossingToDyck } from '../../objects/support/noncrossing.js';
 import { krewerasComplement } from '../../objects/transforms/kreweras-complement.js';
 import { rotateNoncrossing } from '../../objects/transforms/nc-rotation.js';
+import { evacuate } from '../../objects/transforms/evacuation.js';
+import { evacuateSkew } from '../../objects/transforms/skew-evacuation.js';
+import { promote } from '../../objects/transforms/skew-promotion.js';
+import { transposeSkew } from '../../objects/transforms/skew-transpose.js';
 import { schroderReverse } from '../../objects/transforms/schroder-reverse.js';
 import { schroderZetaMap } from '../../objects/transforms/schroder-zeta.js';
-import type { SchroderPath, SetPartition } from '../../objects/types.js';
+import type { SchroderPath, SetPartition, SkewTableau } from '../../objects/types.js';
 import { statisticById } from '../../statistics/index.js';
 
 const stat = (id: string) => (x: unknown): number => statisticById(id).compute(x);
@@ -65,6 +69,51 @@ describe('noncrossing partition maps', () => {
         images.add(d.join(''));
       }
       expect(BigInt(images.size)).toBe(familyById('dyck-paths').count({ n }));
+    }
+  });
+});
+
+describe('skew tableau maps', () => {
+  const skew = familyById('skew-standard-tableaux');
+  const shapes: [number[], number[]][] = [[[3, 2], [1]], [[3, 3, 1], [2, 1]], [[4, 3, 2], [2, 1]], [[2, 2, 2], []], [[3, 3], []], [[4, 2, 1], [1]]];
+  it('promotion is a bijection, evacuation an involution, and ε∂ = ∂^{-1}ε, i.e. (ε∂)² = id (Stanley, "Promotion and evacuation", EJC 16(2) (2009), Thm. 2.1)', () => {
+    for (const [outer, inner] of shapes) {
+      const images = new Set<string>();
+      for (const t of skew.generate({ outer, inner })) {
+        const x = t as SkewTableau;
+        images.add(skew.key(promote(x)));
+        expect(skew.key(evacuateSkew(evacuateSkew(x)))).toBe(skew.key(x));
+        expect(skew.key(evacuateSkew(promote(evacuateSkew(promote(x)))))).toBe(skew.key(x));
+      }
+      expect(BigInt(images.size)).toBe(skew.count({ outer, inner }));
+    }
+  });
+  it('promotion has order n on rectangles 2×3, 3×3 and 2×4 (Haiman 1992; Rhoades, JCTA 117 (2010), from memory) and not on the shape (3,1)', () => {
+    const order = (outer: number[]): boolean => {
+      const n = outer.reduce((a, b) => a + b, 0);
+      return [...skew.generate({ outer })].every((t) => {
+        let y = t as SkewTableau;
+        for (let i = 0; i < n; i++) y = promote(y);
+        return skew.key(y) === skew.key(t);
+      });
+    };
+    for (const outer of [[3, 3], [3, 3, 3], [4, 4]]) expect(order(outer), `${outer}`).toBe(true);
+    expect(order([3, 1])).toBe(false);
+  });
+  it('on straight shapes skew evacuation is the evacuation of standard Young tableaux (objects/transforms/evacuation.ts), n ≤ 6', () => {
+    for (let n = 0; n <= 6; n++) {
+      for (const t of familyById('standard-tableaux').generate({ n })) {
+        const rows = t as number[][];
+        const outer = rows.map((r) => r.length);
+        expect(evacuateSkew({ outer, inner: [], rows }).rows).toEqual(evacuate(rows));
+      }
+    }
+  });
+  it('transpose: descents + descents of the transpose = n − 1 (common practice)', () => {
+    const des = stat('skew-descents');
+    for (const [outer, inner] of shapes) {
+      const n = outer.reduce((a, b) => a + b, 0) - inner.reduce((a, b) => a + b, 0);
+      for (const t of skew.generate({ outer, inner })) expect(des(t) + des(transposeSkew(t as SkewTableau))).toBe(n - 1);
     }
   });
 });

@@ -21,6 +21,8 @@ export const FAMILY_PARAM_OPTIONS: readonly OptionSpec[] = [
   { name: 'd', type: 'int', description: 'number of decorated double rises (decorated-dyck-paths)', placeholder: 'D', min: 0, max: 1000 },
   { name: 'shape', type: 'list', description: 'a partition such as 3,1 (tableaux, fillings)', placeholder: 'A,B,…' },
   { name: 'content', type: 'list', description: 'letter multiplicities such as 2,1,1 (words, semistandard tableaux)', placeholder: 'A,B,…' },
+  { name: 'outer', type: 'list', description: 'the outer shape λ of a skew shape λ/μ such as 3,2 (skew tableaux)', placeholder: 'A,B,…' },
+  { name: 'inner', type: 'list', description: 'the inner shape μ of a skew shape λ/μ such as 1 (skew tableaux)', placeholder: 'A,B,…' },
 ];
 
 /** Family params from the parsed options; the family's validate names any bad one. */
@@ -34,7 +36,7 @@ export function familyParams(family: Family<unknown>, args: ParsedArgs): Params 
       const v = listOpt(args, o.name);
       if (v === undefined) continue;
       if (v.some((s) => !/^\d+$/.test(s))) throw new InputError(`--${o.name} must be comma-separated non-negative integers such as 2,1 (got "${v.join(',')}")`, o.name);
-      params[o.name] = v.map(Number).filter((x, i, a) => !(o.name === 'shape' && x === 0 && a.length === 1));
+      params[o.name] = v.map(Number).filter((x, i, a) => !(['shape', 'outer', 'inner'].includes(o.name) && x === 0 && a.length === 1));
     }
   }
   for (const name of Object.keys(params)) {
