@@ -18,6 +18,7 @@ import { orderedSetPartitions } from './ordered-set-partitions.js';
 import { parkingFunctions } from './parking-functions.js';
 import { partitions } from './partitions.js';
 import { permutations } from './permutations.js';
+import { rookPlacements } from './rook-placements.js';
 import { schroderPaths } from './schroder-paths.js';
 import { semistandardTableaux } from './semistandard-tableaux.js';
 import { setPartitions } from './set-partitions.js';
@@ -41,6 +42,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   parkingFunctions,
   partitions,
   permutations,
+  rookPlacements,
   schroderPaths,
   semistandardTableaux,
   setPartitions,

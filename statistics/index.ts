@@ -32,6 +32,7 @@ import { decoratedArea, decoratedDinv, parkingArea, parkingDinv } from './parkin
 import { distinctParts, durfeeSquare, largestPart, nLambda, partitionParts } from './partition-statistics.js';
 import { peaks, valleys } from './peaks.js';
 import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMinima } from './records.js';
+import { rookCancelled, rookCount, rookEmptyColumns, rookInv, rookRowSum } from './rook-statistics.js';
 import { schroderDiagonals, schroderDiagonalsOnLine, schroderHeight, schroderInitialRise, schroderPeaks, schroderReturns, schroderValleys } from './schroder-shape-statistics.js';
 import { schroderArea, schroderBounce, schroderDinv } from './schroder-statistics.js';
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
@@ -128,6 +129,11 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   leftToRightMinima,
   rightToLeftMaxima,
   rightToLeftMinima,
+  rookCancelled,
+  rookCount,
+  rookEmptyColumns,
+  rookInv,
+  rookRowSum,
   schroderDiagonals,
   schroderDiagonalsOnLine,
   schroderHeight,

@@ -17,6 +17,7 @@ import { motzkinReverse } from './motzkin-reverse.js';
 import { ncRotation } from './nc-rotation.js';
 import { ncToDyck } from './nc-to-dyck.js';
 import { reverse, wordReverse } from './reverse.js';
+import { rookConjugate } from './rook-conjugate.js';
 import { rskInsertion, rskRecording } from './rsk.js';
 import { schroderReverse } from './schroder-reverse.js';
 import { schroderZeta } from './schroder-zeta.js';
@@ -44,6 +45,7 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   ncToDyck,
   reverse,
   wordReverse,
+  rookConjugate,
   rskInsertion,
   rskRecording,
   schroderReverse,

@@ -2,7 +2,7 @@
  * Counts of the Delta/Shuffle and superspace families (part A of the statistics library),
  * generated and by each family's own formula, against outside references named beside each.
  */
-import { catalan, combinations, det, factorial, fraction, matrix, multiply, stirlingS2 } from 'mathjs';
+import { bellNumbers, catalan, combinations, det, factorial, fraction, matrix, multiply, stirlingS2 } from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { familyById } from '../../objects/index.js';
 import type { Params } from '../../src/enumerate/plugin.js';
@@ -134,6 +134,23 @@ describe('skew standard tableaux', () => {
     for (const [outer, inner] of cases) {
       const ref = aitken(outer, inner);
       expect(both('skew-standard-tableaux', { outer, inner }), `${outer}/${inner}`).toEqual([ref, ref]);
+    }
+  });
+});
+
+describe('rook placements', () => {
+  it('staircase of size n with k rooks: S(n, n−k); all placements: Bell numbers (set partitions by their arcs; mathjs stirlingS2, bellNumbers)', () => {
+    for (let n = 1; n <= 7; n++) {
+      expect(both('rook-placements', { n })).toEqual([bellNumbers(n), bellNumbers(n)]);
+      for (let k = 0; k < n; k++) expect(both('rook-placements', { n, k })).toEqual([stirlingS2(n, n - k), stirlingS2(n, n - k)]);
+    }
+  });
+  it('m × m square board with k rooks: C(m,k)²·k! (common practice; mathjs combinations, factorial)', () => {
+    for (let m = 1; m <= 4; m++) {
+      for (let k = 0; k <= m; k++) {
+        const ref = combinations(m, k) ** 2 * Number(factorial(k));
+        expect(both('rook-placements', { shape: new Array<number>(m).fill(m), k })).toEqual([ref, ref]);
+      }
     }
   });
 });

@@ -1,6 +1,11 @@
 /** Skew standard tableaux, rook placements and Tesler matrices of part A against their sources. */
 import { describe, expect, it } from 'vitest';
+import { familyById } from '../../objects/index.js';
+import { conjugateRooks } from '../../objects/transforms/rook-conjugate.js';
+import type { RookPlacement } from '../../objects/types.js';
 import { Poly } from '../../src/core/poly.js';
+import { qInteger, qStirling2 } from '../../src/core/qanalogs.js';
+import { statisticById } from '../../statistics/index.js';
 import { fundamentalToSchur } from '../../src/symfun/quasisym.js';
 import { SymFun } from '../../src/symfun/symfun.js';
 import { dist } from './dist-helper.js';
@@ -20,6 +25,55 @@ describe('skew standard tableaux', () => {
         skew = skew.add(SymFun.basisElement('s', nu).scale(c));
       }
       expect(side.equals(skew), `${outer}/${inner}`).toBe(true);
+    }
+  });
+});
+
+/** R_k(B, q) = Σ q^inv over the placements of k rooks on the board of λ. */
+async function qRook(shape: number[], k: number): Promise<Poly> {
+  return (await dist('rook-placements', { shape, k }, ['rook-inv'])).series;
+}
+
+describe('Garsia–Remmel q-rook numbers', () => {
+  it('factorization Σ_k R_k(B,q)·[x]_q[x−1]_q…[x−c+k+1]_q = Π_i [x + h_i − i + 1]_q for c columns of heights h_1 ≤ … ≤ h_c, at x = c..c+3 (Garsia–Remmel, J. Combin. Theory Ser. A 41 (1986), Thm. 1)', async () => {
+    for (const shape of [[2, 2, 1], [3, 3, 1], [4, 2, 2, 1], [3, 3, 3], [5, 3, 1], [4, 4, 4, 4]]) {
+      const h = [...shape].reverse();
+      const c = h.length;
+      const R: Poly[] = [];
+      for (let k = 0; k <= c; k++) R.push(await qRook(shape, k));
+      for (let x = c; x <= c + 3; x++) {
+        let left = Poly.zero;
+        R.forEach((r, k) => {
+          let f = r;
+          for (let i = 0; i < c - k; i++) f = f.mul(qInteger(x - i));
+          left = left.add(f);
+        });
+        const right = h.reduce((p, hi, i) => p.mul(qInteger(x + hi - i)), Poly.one);
+        expect(left.equals(right), `${shape} x=${x}`).toBe(true);
+      }
+    }
+  });
+  it('staircase of size n: R_k = q^{C(n−k,2)}·Stir_q(n, n−k) with Stir_q of MATH.md §1 (Garsia–Remmel 1986: their q-Stirling numbers, from memory of the normalisation; checked for n ≤ 7)', async () => {
+    for (let n = 1; n <= 7; n++) {
+      for (let k = 0; k < n; k++) {
+        const r = (await dist('rook-placements', { n, k }, ['rook-inv'])).series;
+        const m = n - k;
+        expect(r.equals(qStirling2(n, m).shift((m * (m - 1)) / 2)), `n=${n} k=${k}`).toBe(true);
+      }
+    }
+  });
+  it('the antidiagonal reflection carries the boards of λ to λ′ with the same q-rook numbers (checked here for a few boards)', () => {
+    const inv = (x: RookPlacement): number => statisticById('rook-inv').compute(x);
+    for (const shape of [[2, 2, 1], [3, 3, 1], [4, 2, 2, 1], [5, 3, 1]]) {
+      for (let k = 0; k <= 3; k++) {
+        let a = Poly.zero;
+        let b = Poly.zero;
+        for (const x of familyById('rook-placements').generate({ shape, k })) {
+          a = a.add(Poly.monomial(1n, inv(x as RookPlacement)));
+          b = b.add(Poly.monomial(1n, inv(conjugateRooks(x as RookPlacement))));
+        }
+        expect(a.equals(b), `${shape} k=${k}`).toBe(true);
+      }
     }
   });
 });
