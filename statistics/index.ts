@@ -38,6 +38,7 @@ import { schroderArea, schroderBounce, schroderDinv } from './schroder-statistic
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
 import { skewComajor, skewDescents, skewDoubleDescents, skewMajorIndex, skewPeaks, skewRowOfLargest } from './skew-tableau-statistics.js';
 import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
+import { teslerEntrySum, teslerLargestEntry, teslerLastDiagonal, teslerPositive, teslerPositiveOffDiagonal, teslerZeroDiagonal } from './tesler-statistics.js';
 import { valleyDecoratedArea, valleyDecoratedContractible, valleyDecoratedDinv, valleyDecoratedValleys } from './valley-decorated-statistics.js';
 import { wordInversions } from './word-inversions.js';
 import { wordDescents, wordMajorIndex } from './word-major-index.js';
@@ -156,6 +157,12 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   skewRowOfLargest,
   tableauDescents,
   tableauMajorIndex,
+  teslerEntrySum,
+  teslerLargestEntry,
+  teslerLastDiagonal,
+  teslerPositive,
+  teslerPositiveOffDiagonal,
+  teslerZeroDiagonal,
   valleyDecoratedArea,
   valleyDecoratedContractible,
   valleyDecoratedDinv,

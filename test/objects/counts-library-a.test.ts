@@ -154,3 +154,11 @@ describe('rook placements', () => {
     }
   });
 });
+
+describe('Tesler matrices', () => {
+  it('1, 2, 7, 40, 357, 4820 generated and by the recursion, and 96030, 2766572 for n = 7, 8 by the recursion (from memory; no closed formula is known)', () => {
+    const known = [1, 2, 7, 40, 357, 4820, 96030, 2766572];
+    for (let n = 1; n <= 6; n++) expect(both('tesler-matrices', { n })).toEqual([known[n - 1], known[n - 1]]);
+    for (const n of [7, 8]) expect(Number(familyById('tesler-matrices').count({ n }))).toBe(known[n - 1]);
+  });
+});

@@ -6,6 +6,7 @@ import type { RookPlacement } from '../../objects/types.js';
 import { Poly } from '../../src/core/poly.js';
 import { qInteger, qStirling2 } from '../../src/core/qanalogs.js';
 import { statisticById } from '../../statistics/index.js';
+import { nabla } from '../../src/symfun/operators.js';
 import { fundamentalToSchur } from '../../src/symfun/quasisym.js';
 import { SymFun } from '../../src/symfun/symfun.js';
 import { dist } from './dist-helper.js';
@@ -84,3 +85,37 @@ function partitionsOf(n: number, max = n): number[][] {
   for (let first = Math.min(n, max); first >= 1; first--) for (const rest of partitionsOf(n - first, first)) out.push([first, ...rest]);
   return out;
 }
+
+describe("Haglund's Tesler formula", () => {
+  /** Haglund's weight (−M)^{pos−n} Π_{a>0} [a]_{q,t}, M = (1−q)(1−t), [a]_{q,t} = (q^a − t^a)/(q − t). */
+  function weight(m: readonly (readonly number[])[]): Poly {
+    const M = Poly.one.sub(Poly.q).mul(Poly.one.sub(Poly.t));
+    let w = Poly.one;
+    let pos = 0;
+    for (const x of m.flat()) {
+      if (x <= 0) continue;
+      pos++;
+      w = w.mul(Poly.fromTerms(Array.from({ length: x }, (_, i) => [i, x - 1 - i, 1n] as const)));
+    }
+    return w.mul(M.neg().pow(pos - m.length));
+  }
+  it('Σ over Tesler matrices of the weight is the Hilbert series of ∇e_n, n ≤ 5 (Haglund, Adv. Math. 227 (2011), main theorem; the right side from the engine)', () => {
+    for (let n = 1; n <= 5; n++) {
+      let sum = Poly.zero;
+      for (const m of familyById('tesler-matrices').generate({ n })) sum = sum.add(weight(m as number[][]));
+      expect(sum.equals(nabla(SymFun.basisElement('e', [n])).hilbert().toPoly()), `n=${n}`).toBe(true);
+    }
+  });
+  it('at q = t = 1 only matrices with n positive entries count, and Σ Π a_ij over them is (n+1)^{n−1} (same theorem at q = t = 1; Haiman 2002 for the dimension)', async () => {
+    for (let n = 1; n <= 6; n++) {
+      let s = 0;
+      for (const m of familyById('tesler-matrices').generate({ n })) {
+        const pos = (m as number[][]).flat().filter((x) => x > 0);
+        if (pos.length === n) s += pos.reduce((a, b) => a * b, 1);
+      }
+      expect(s).toBe((n + 1) ** (n - 1));
+      const d = (await dist('tesler-matrices', { n }, ['tesler-positive-entries'])).series;
+      expect(d.coeff(n) > 0n && [...Array(n).keys()].every((j) => d.coeff(j) === 0n)).toBe(true); // each row holds 1 + its inflow, so pos ≥ n
+    }
+  });
+});
