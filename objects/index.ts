@@ -25,6 +25,7 @@ import { setPartitions } from './set-partitions.js';
 import { skewStandardTableaux } from './skew-standard-tableaux.js';
 import { standardTableaux } from './standard-tableaux.js';
 import { subsets } from './subsets.js';
+import { superpartitions } from './superpartitions.js';
 import { teslerMatrices } from './tesler-matrices.js';
 import { valleyDecoratedDyckPaths } from './valley-decorated-dyck-paths.js';
 import { words } from './words.js';
@@ -50,6 +51,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   skewStandardTableaux,
   standardTableaux,
   subsets,
+  superpartitions,
   teslerMatrices,
   valleyDecoratedDyckPaths,
   words,

@@ -37,6 +37,7 @@ import { schroderDiagonals, schroderDiagonalsOnLine, schroderHeight, schroderIni
 import { schroderArea, schroderBounce, schroderDinv } from './schroder-statistics.js';
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
 import { skewComajor, skewDescents, skewDoubleDescents, skewMajorIndex, skewPeaks, skewRowOfLargest } from './skew-tableau-statistics.js';
+import { superBosonicParts, superFermionicDegree, superFermionicSum, superLargestPart, superNStar, superRows, superZeroPart } from './superpartition-statistics.js';
 import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
 import { teslerEntrySum, teslerLargestEntry, teslerLastDiagonal, teslerPositive, teslerPositiveOffDiagonal, teslerZeroDiagonal } from './tesler-statistics.js';
 import { valleyDecoratedArea, valleyDecoratedContractible, valleyDecoratedDinv, valleyDecoratedValleys } from './valley-decorated-statistics.js';
@@ -155,6 +156,13 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   skewMajorIndex,
   skewPeaks,
   skewRowOfLargest,
+  superBosonicParts,
+  superFermionicDegree,
+  superFermionicSum,
+  superLargestPart,
+  superNStar,
+  superRows,
+  superZeroPart,
   tableauDescents,
   tableauMajorIndex,
   teslerEntrySum,

@@ -26,6 +26,7 @@ import { skewPromotion } from './skew-promotion.js';
 import { skewTranspose } from './skew-transpose.js';
 import { standardize } from './standardize.js';
 import { subsetComplement } from './subset-complement.js';
+import { superpartitionConjugate } from './superpartition-conjugate.js';
 import { transpose } from './transpose.js';
 import { zeta } from './zeta.js';
 
@@ -55,6 +56,7 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   skewTranspose,
   standardize,
   subsetComplement,
+  superpartitionConjugate,
   transpose,
   zeta,
 ];

@@ -162,3 +162,39 @@ describe('Tesler matrices', () => {
     for (const n of [7, 8]) expect(Number(familyById('tesler-matrices').count({ n }))).toBe(known[n - 1]);
   });
 });
+
+describe('superpartitions', () => {
+  it('the coefficient of q^n z^m in Π_{i≥0}(1 + z q^i) / Π_{i≥1}(1 − q^i), expanded here as a power series (Desrosiers–Lapointe–Mathieu, J. Algebraic Combin. 24 (2006) §2, from memory)', () => {
+    const N = 9;
+    // series[m][n], truncated at degree N.
+    let series: number[][] = [[1, ...new Array<number>(N).fill(0)]];
+    for (let i = 0; i <= N; i++) {
+      const next = Array.from({ length: series.length + 1 }, () => new Array<number>(N + 1).fill(0));
+      series.forEach((row, m) => row.forEach((c, n) => {
+        next[m]![n]! += c;
+        if (n + i <= N) next[m + 1]![n + i]! += c;
+      }));
+      series = next;
+    }
+    for (let i = 1; i <= N; i++) {
+      const prev = series;
+      series = prev.map((row, m) =>
+        row.map((_, n) => {
+          let s = 0;
+          for (let j = 0; j * i <= n; j++) s += prev[m]![n - j * i]!; // 1/(1 − q^i) = Σ_j q^{ij}
+          return s;
+        }),
+      );
+    }
+    for (let n = 0; n <= 6; n++) {
+      let total = 0;
+      for (let m = 0; m < series.length; m++) {
+        const ref = series[m]![n]!;
+        total += ref;
+        if (m <= 4) expect(both('superpartitions', { n, k: m }), `n=${n} m=${m}`).toEqual([ref, ref]);
+      }
+      expect(both('superpartitions', { n })).toEqual([total, total]);
+    }
+    expect(Number(familyById('superpartitions').count({ n: N }))).toBe(series.reduce((s, row) => s + row[N]!, 0));
+  });
+});

@@ -8,9 +8,11 @@ import { evacuate } from '../../objects/transforms/evacuation.js';
 import { evacuateSkew } from '../../objects/transforms/skew-evacuation.js';
 import { promote } from '../../objects/transforms/skew-promotion.js';
 import { transposeSkew } from '../../objects/transforms/skew-transpose.js';
+import { conjugateSuperpartition } from '../../objects/transforms/superpartition-conjugate.js';
+import { conjugate } from '../../src/core/partitions.js';
 import { schroderReverse } from '../../objects/transforms/schroder-reverse.js';
 import { schroderZetaMap } from '../../objects/transforms/schroder-zeta.js';
-import type { SchroderPath, SetPartition, SkewTableau } from '../../objects/types.js';
+import type { SchroderPath, SetPartition, SkewTableau, Superpartition } from '../../objects/types.js';
 import { statisticById } from '../../statistics/index.js';
 
 const stat = (id: string) => (x: unknown): number => statisticById(id).compute(x);
@@ -114,6 +116,23 @@ describe('skew tableau maps', () => {
     for (const [outer, inner] of shapes) {
       const n = outer.reduce((a, b) => a + b, 0) - inner.reduce((a, b) => a + b, 0);
       for (const t of skew.generate({ outer, inner })) expect(des(t) + des(transposeSkew(t as SkewTableau))).toBe(n - 1);
+    }
+  });
+});
+
+describe('superpartition conjugation', () => {
+  it('an involution keeping the degree n and the fermionic degree m, with Λ* and Λ⊛ conjugated, n ≤ 8 (Desrosiers–Lapointe–Mathieu, J. Algebraic Combin. 24 (2006) §2)', () => {
+    const fam = familyById('superpartitions');
+    const star = (s: Superpartition): number[] => [...s.fermionic.map((f) => f + 1), ...s.bosonic].filter((x) => x > 0).sort((a, b) => b - a);
+    for (let n = 0; n <= 8; n++) {
+      for (const x of fam.generate({ n })) {
+        const s = x as Superpartition;
+        const c = conjugateSuperpartition(s);
+        expect(fam.key(conjugateSuperpartition(c))).toBe(fam.key(s));
+        expect(c.fermionic.length).toBe(s.fermionic.length);
+        expect([...c.fermionic, ...c.bosonic].reduce((a, b) => a + b, 0)).toBe(n);
+        expect(star(c)).toEqual(conjugate(star(s)));
+      }
     }
   });
 });
