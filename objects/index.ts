@@ -15,6 +15,7 @@ import { motzkinPaths } from './motzkin-paths.js';
 import { noncrossingPartitions } from './noncrossing-partitions.js';
 import { orderedMultisetPartitions } from './ordered-multiset-partitions.js';
 import { orderedSetPartitions } from './ordered-set-partitions.js';
+import { orderedSetSuperpartitions } from './ordered-set-superpartitions.js';
 import { parkingFunctions } from './parking-functions.js';
 import { partitions } from './partitions.js';
 import { permutations } from './permutations.js';
@@ -41,6 +42,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   noncrossingPartitions,
   orderedMultisetPartitions,
   orderedSetPartitions,
+  orderedSetSuperpartitions,
   parkingFunctions,
   partitions,
   permutations,

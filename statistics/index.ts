@@ -28,6 +28,7 @@ import { ompDinv, ompInv, ompMaj, ompMinimaj } from './omp-delta-statistics.js';
 import { ospDinv } from './osp-dinv.js';
 import { ospInv } from './osp-inv.js';
 import { ospMaj, ospMinimaj } from './osp-maj.js';
+import { osspBarredInv, osspBars, osspInv, osspMinimaj, osspUnbarred } from './ossp-statistics.js';
 import { decoratedArea, decoratedDinv, parkingArea, parkingDinv } from './parking-statistics.js';
 import { distinctParts, durfeeSquare, largestPart, nLambda, partitionParts } from './partition-statistics.js';
 import { peaks, valleys } from './peaks.js';
@@ -116,6 +117,11 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   ospInv,
   ospMaj,
   ospMinimaj,
+  osspBarredInv,
+  osspBars,
+  osspInv,
+  osspMinimaj,
+  osspUnbarred,
   decoratedArea,
   decoratedDinv,
   parkingArea,

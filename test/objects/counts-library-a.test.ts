@@ -198,3 +198,14 @@ describe('superpartitions', () => {
     expect(Number(familyById('superpartitions').count({ n: N }))).toBe(series.reduce((s, row) => s + row[N]!, 0));
   });
 });
+
+describe('ordered set superpartitions', () => {
+  it('k!·S(n,k)·2^{n−k} (each non-minimal element barred or not; mathjs factorial, stirlingS2)', () => {
+    for (let n = 1; n <= 6; n++) {
+      for (let k = 1; k <= n; k++) {
+        const ref = Number(factorial(k)) * Number(stirlingS2(n, k)) * 2 ** (n - k);
+        expect(both('ordered-set-superpartitions', { n, k })).toEqual([ref, ref]);
+      }
+    }
+  });
+});
