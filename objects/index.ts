@@ -16,6 +16,7 @@ import { noncrossingPartitions } from './noncrossing-partitions.js';
 import { orderedMultisetPartitions } from './ordered-multiset-partitions.js';
 import { orderedSetPartitions } from './ordered-set-partitions.js';
 import { orderedSetSuperpartitions } from './ordered-set-superpartitions.js';
+import { parallelogramPolyominoes } from './parallelogram-polyominoes.js';
 import { parkingFunctions } from './parking-functions.js';
 import { partitions } from './partitions.js';
 import { permutations } from './permutations.js';
@@ -43,6 +44,7 @@ export const FAMILIES: readonly Family<unknown>[] = [
   orderedMultisetPartitions,
   orderedSetPartitions,
   orderedSetSuperpartitions,
+  parallelogramPolyominoes,
   parkingFunctions,
   partitions,
   permutations,

@@ -32,6 +32,7 @@ import { osspBarredInv, osspBars, osspInv, osspMinimaj, osspUnbarred } from './o
 import { decoratedArea, decoratedDinv, parkingArea, parkingDinv } from './parking-statistics.js';
 import { distinctParts, durfeeSquare, largestPart, nLambda, partitionParts } from './partition-statistics.js';
 import { peaks, valleys } from './peaks.js';
+import { polyominoArea, polyominoFirstColumn, polyominoHeight, polyominoLastColumn, polyominoTopRises, polyominoWidth } from './polyomino-statistics.js';
 import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMinima } from './records.js';
 import { rookCancelled, rookCount, rookEmptyColumns, rookInv, rookRowSum } from './rook-statistics.js';
 import { schroderDiagonals, schroderDiagonalsOnLine, schroderHeight, schroderInitialRise, schroderPeaks, schroderReturns, schroderValleys } from './schroder-shape-statistics.js';
@@ -133,6 +134,12 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   partitionParts,
   peaks,
   valleys,
+  polyominoArea,
+  polyominoFirstColumn,
+  polyominoHeight,
+  polyominoLastColumn,
+  polyominoTopRises,
+  polyominoWidth,
   leftToRightMaxima,
   leftToRightMinima,
   rightToLeftMaxima,

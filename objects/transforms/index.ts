@@ -16,6 +16,7 @@ import { krewerasComplementMap } from './kreweras-complement.js';
 import { motzkinReverse } from './motzkin-reverse.js';
 import { ncRotation } from './nc-rotation.js';
 import { ncToDyck } from './nc-to-dyck.js';
+import { polyominoTranspose } from './polyomino-transpose.js';
 import { reverse, wordReverse } from './reverse.js';
 import { rookConjugate } from './rook-conjugate.js';
 import { rskInsertion, rskRecording } from './rsk.js';
@@ -44,6 +45,7 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   motzkinReverse,
   ncRotation,
   ncToDyck,
+  polyominoTranspose,
   reverse,
   wordReverse,
   rookConjugate,

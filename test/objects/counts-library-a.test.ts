@@ -209,3 +209,15 @@ describe('ordered set superpartitions', () => {
     }
   });
 });
+
+describe('parallelogram polyominoes', () => {
+  it('semiperimeter n: Catalan(n−1); width k: Narayana C(n−1,k)C(n−1,k−1)/(n−1) (Delest–Viennot 1984, from memory; mathjs catalan, combinations)', () => {
+    for (let n = 2; n <= 9; n++) {
+      expect(both('parallelogram-polyominoes', { n })).toEqual([catalan(n - 1), catalan(n - 1)]);
+      for (let k = 1; k < n; k++) {
+        const ref = (combinations(n - 1, k) * combinations(n - 1, k - 1)) / (n - 1);
+        expect(both('parallelogram-polyominoes', { n, k })).toEqual([ref, ref]);
+      }
+    }
+  });
+});

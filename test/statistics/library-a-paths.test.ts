@@ -59,3 +59,23 @@ describe('noncrossing partitions', () => {
     }
   });
 });
+
+describe('parallelogram polyominoes', () => {
+  it('the total area of those of semiperimeter n is 4^{n−2}, n ≤ 10 (a classical identity, from memory)', async () => {
+    for (let n = 2; n <= 10; n++) {
+      const d = (await dist('parallelogram-polyominoes', { n }, ['polyomino-area'])).series;
+      let total = 0n;
+      for (const [i, , c] of d.sortedTerms()) total += BigInt(i) * c;
+      expect(total, `n=${n}`).toBe(4n ** BigInt(n - 2));
+    }
+  });
+  it('reflection in y = x swaps width and height and keeps the area: (width, area) and (height, area) are equidistributed, n ≤ 9 (common practice)', async () => {
+    for (let n = 2; n <= 9; n++) {
+      const wa = (await dist('parallelogram-polyominoes', { n }, ['polyomino-width', 'polyomino-area'])).series;
+      const ha = (await dist('parallelogram-polyominoes', { n }, ['polyomino-height', 'polyomino-area'])).series;
+      const viaMap = (await dist('parallelogram-polyominoes', { n }, ['polyomino-height', 'polyomino-area'], { transform: 'polyomino-transpose' })).series;
+      expect(wa.equals(ha)).toBe(true);
+      expect(viaMap.equals(wa)).toBe(true);
+    }
+  });
+});
