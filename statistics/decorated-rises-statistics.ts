@@ -5,6 +5,7 @@
  */
 import { areaSequence } from '../objects/support/dyck.js';
 import type { Statistic } from '../src/enumerate/plugin.js';
+import { dyckBounce, dyckReturns } from './dyck-statistics.js';
 import type { DecoratedDyckPath } from '../objects/types.js';
 
 const FAMILY = 'dyck-paths-decorated-rises';
@@ -101,4 +102,30 @@ export const decoratedRisesFirstRise: Statistic<DecoratedDyckPath> = {
     const i = p.path.indexOf(0);
     return i < 0 ? p.path.length : i;
   },
+};
+
+export const decoratedRisesReturns: Statistic<DecoratedDyckPath> = {
+  id: 'decorated-rises-returns',
+  family: FAMILY,
+  description: 'number of returns of the path to the diagonal (the end included)',
+  source: 'common practice',
+  examples: [
+    [{ path: [1, 1, 0, 0], decorated: [2] }, 1],
+    [{ path: [1, 0, 1, 0, 1, 0], decorated: [] }, 3],
+    [{ path: [1, 1, 0, 1, 0, 0], decorated: [2] }, 1],
+  ],
+  compute: (p) => dyckReturns.compute(p.path),
+};
+
+export const decoratedRisesBounce: Statistic<DecoratedDyckPath> = {
+  id: 'decorated-rises-bounce',
+  family: FAMILY,
+  description: "Haglund's bounce of the path",
+  source: 'Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, AMS 2008',
+  examples: [
+    [{ path: [1, 1, 0, 0], decorated: [2] }, 0],
+    [{ path: [1, 0, 1, 0, 1, 0], decorated: [] }, 3],
+    [{ path: [1, 0, 1, 1, 0, 0], decorated: [3] }, 2],
+  ],
+  compute: (p) => dyckBounce.compute(p.path),
 };

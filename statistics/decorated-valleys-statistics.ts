@@ -5,6 +5,7 @@
  */
 import { areaSequence } from '../objects/support/dyck.js';
 import type { Statistic } from '../src/enumerate/plugin.js';
+import { dyckBounce, dyckPeaks } from './dyck-statistics.js';
 import type { DecoratedDyckPath } from '../objects/types.js';
 
 const FAMILY = 'dyck-paths-decorated-valleys';
@@ -101,4 +102,30 @@ export const decoratedValleysOnDiagonal: Statistic<DecoratedDyckPath> = {
     const a = areaSequence(p.path);
     return p.decorated.filter((r) => a[r - 1] === 0).length;
   },
+};
+
+export const decoratedValleysPeaks: Statistic<DecoratedDyckPath> = {
+  id: 'decorated-valleys-peaks',
+  family: FAMILY,
+  description: 'number of peaks (a north step followed by an east step) of the path',
+  source: 'common practice (Narayana numbers)',
+  examples: [
+    [{ path: [1, 0, 1, 0], decorated: [2] }, 2],
+    [{ path: [1, 1, 0, 0, 1, 0], decorated: [3] }, 2],
+    [{ path: [1, 1, 1, 0, 0, 0], decorated: [] }, 1],
+  ],
+  compute: (p) => dyckPeaks.compute(p.path),
+};
+
+export const decoratedValleysBounce: Statistic<DecoratedDyckPath> = {
+  id: 'decorated-valleys-bounce',
+  family: FAMILY,
+  description: "Haglund's bounce of the path",
+  source: 'Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, AMS 2008',
+  examples: [
+    [{ path: [1, 0, 1, 0], decorated: [2] }, 1],
+    [{ path: [1, 1, 0, 1, 0, 0], decorated: [3] }, 1],
+    [{ path: [1, 0, 1, 0, 1, 0], decorated: [2, 3] }, 3],
+  ],
+  compute: (p) => dyckBounce.compute(p.path),
 };

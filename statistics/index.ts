@@ -10,8 +10,8 @@ import { blockIndexSum } from './block-index-sum.js';
 import { tableauCharge, tableauCocharge, wordCharge, wordCocharge } from './charge.js';
 import { compositionLargestPart, compositionMajorIndex, compositionParts } from './composition-parts.js';
 import { cycles } from './cycles.js';
-import { decoratedRisesArea, decoratedRisesDinv, decoratedRisesFirstRise, decoratedRisesMarkedArea, decoratedRisesPeaks } from './decorated-rises-statistics.js';
-import { decoratedValleysArea, decoratedValleysDinv, decoratedValleysMarkedArea, decoratedValleysOnDiagonal, decoratedValleysReturns } from './decorated-valleys-statistics.js';
+import { decoratedRisesArea, decoratedRisesBounce, decoratedRisesDinv, decoratedRisesFirstRise, decoratedRisesMarkedArea, decoratedRisesPeaks, decoratedRisesReturns } from './decorated-rises-statistics.js';
+import { decoratedValleysArea, decoratedValleysBounce, decoratedValleysDinv, decoratedValleysMarkedArea, decoratedValleysOnDiagonal, decoratedValleysPeaks, decoratedValleysReturns } from './decorated-valleys-statistics.js';
 import { denert } from './denert.js';
 import { ascents, descents, inverseDescents } from './descents.js';
 import { dyckArea, dyckBounce, dyckDinv, dyckPeaks, dyckReturns } from './dyck-statistics.js';
@@ -21,28 +21,29 @@ import { fixedPoints } from './fixed-points.js';
 import { inversions } from './inversions.js';
 import { longestIncreasingSubsequence } from './longest-increasing-subsequence.js';
 import { inverseMajorIndex, majorIndex } from './major-index.js';
-import { motzkinArea, motzkinDoubleRises, motzkinGroundLevels, motzkinHeight, motzkinLeadingLevels, motzkinLevelSteps, motzkinPeaks, motzkinReturns, motzkinUpSteps, motzkinValleys } from './motzkin-statistics.js';
-import { ncBlockOfLast, ncBlockOfOne, ncBlocks, ncBonds, ncLargestBlock, ncNestings, ncOuterBlocks, ncSingletons } from './noncrossing-statistics.js';
-import { ompFirstBlockSize, ompLargestBlock, ompLastBlockSize, ompMinimaDescents, ompSingletonBlocks } from './omp-block-statistics.js';
+import { motzkinArea, motzkinDoubleRises, motzkinFirstReturn, motzkinGroundLevels, motzkinHeight, motzkinLeadingLevels, motzkinLevelRuns, motzkinLevelSteps, motzkinPeaks, motzkinReturns, motzkinUpSteps, motzkinValleys } from './motzkin-statistics.js';
+import { ncBlockOfLast, ncBlockOfOne, ncBlocks, ncBonds, ncDepth, ncDoubletons, ncLargestBlock, ncNestings, ncOuterBlocks, ncSingletons } from './noncrossing-statistics.js';
+import { ompFirstBlockSize, ompLargestBlock, ompLastBlockSize, ompMaximaDescents, ompMinimaDescents, ompSingletonBlocks } from './omp-block-statistics.js';
 import { ompDinv, ompInv, ompMaj, ompMinimaj } from './omp-delta-statistics.js';
 import { ospDinv } from './osp-dinv.js';
 import { ospInv } from './osp-inv.js';
 import { ospMaj, ospMinimaj } from './osp-maj.js';
-import { osspBarredInv, osspBars, osspInv, osspMinimaj, osspUnbarred } from './ossp-statistics.js';
+import { osspBarredBlocks, osspBarredInv, osspBarredSum, osspBars, osspInv, osspMinimaj, osspUnbarred } from './ossp-statistics.js';
+import { parkingPmaj } from './parking-pmaj.js';
 import { decoratedArea, decoratedDinv, parkingArea, parkingDinv } from './parking-statistics.js';
 import { distinctParts, durfeeSquare, largestPart, nLambda, partitionParts } from './partition-statistics.js';
 import { peaks, valleys } from './peaks.js';
-import { polyominoArea, polyominoFirstColumn, polyominoHeight, polyominoLastColumn, polyominoTopRises, polyominoWidth } from './polyomino-statistics.js';
+import { polyominoArea, polyominoBottomRises, polyominoFirstColumn, polyominoHeight, polyominoLastColumn, polyominoTopRises, polyominoUnitColumns, polyominoWidth } from './polyomino-statistics.js';
 import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMinima } from './records.js';
 import { rookCancelled, rookCount, rookEmptyColumns, rookInv, rookRowSum } from './rook-statistics.js';
-import { schroderDiagonals, schroderDiagonalsOnLine, schroderHeight, schroderInitialRise, schroderPeaks, schroderReturns, schroderValleys } from './schroder-shape-statistics.js';
+import { schroderDiagonals, schroderDiagonalsOnLine, schroderDoubleRises, schroderFirstReturn, schroderHeight, schroderInitialRise, schroderPeaks, schroderReturns, schroderValleys } from './schroder-shape-statistics.js';
 import { schroderArea, schroderBounce, schroderDinv } from './schroder-statistics.js';
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
-import { skewComajor, skewDescents, skewDoubleDescents, skewMajorIndex, skewPeaks, skewRowOfLargest } from './skew-tableau-statistics.js';
-import { superBosonicParts, superFermionicDegree, superFermionicSum, superLargestPart, superNStar, superRows, superZeroPart } from './superpartition-statistics.js';
+import { skewComajor, skewDescents, skewDoubleDescents, skewFirstDescent, skewLastDescent, skewMajorIndex, skewPeaks, skewRowOfLargest } from './skew-tableau-statistics.js';
+import { superBosonicParts, superFermionicDegree, superFermionicSum, superLargestFermionic, superLargestPart, superNPlain, superNStar, superRows, superZeroPart } from './superpartition-statistics.js';
 import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
-import { teslerEntrySum, teslerLargestEntry, teslerLastDiagonal, teslerPositive, teslerPositiveOffDiagonal, teslerZeroDiagonal } from './tesler-statistics.js';
-import { valleyDecoratedArea, valleyDecoratedContractible, valleyDecoratedDinv, valleyDecoratedValleys } from './valley-decorated-statistics.js';
+import { teslerDiagonalOnes, teslerEntrySum, teslerLargestEntry, teslerLastColumnPositive, teslerLastDiagonal, teslerPositive, teslerPositiveOffDiagonal, teslerZeroDiagonal } from './tesler-statistics.js';
+import { valleyDecoratedArea, valleyDecoratedBounce, valleyDecoratedContractible, valleyDecoratedDinv, valleyDecoratedReturns, valleyDecoratedValleys } from './valley-decorated-statistics.js';
 import { wordInversions } from './word-inversions.js';
 import { wordDescents, wordMajorIndex } from './word-major-index.js';
 
@@ -60,14 +61,18 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   compositionParts,
   cycles,
   decoratedRisesArea,
+  decoratedRisesBounce,
   decoratedRisesDinv,
   decoratedRisesFirstRise,
   decoratedRisesMarkedArea,
   decoratedRisesPeaks,
+  decoratedRisesReturns,
   decoratedValleysArea,
+  decoratedValleysBounce,
   decoratedValleysDinv,
   decoratedValleysMarkedArea,
   decoratedValleysOnDiagonal,
+  decoratedValleysPeaks,
   decoratedValleysReturns,
   denert,
   ascents,
@@ -89,9 +94,11 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   majorIndex,
   motzkinArea,
   motzkinDoubleRises,
+  motzkinFirstReturn,
   motzkinGroundLevels,
   motzkinHeight,
   motzkinLeadingLevels,
+  motzkinLevelRuns,
   motzkinLevelSteps,
   motzkinPeaks,
   motzkinReturns,
@@ -101,6 +108,8 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   ncBlockOfOne,
   ncBlocks,
   ncBonds,
+  ncDepth,
+  ncDoubletons,
   ncLargestBlock,
   ncNestings,
   ncOuterBlocks,
@@ -108,6 +117,7 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   ompFirstBlockSize,
   ompLargestBlock,
   ompLastBlockSize,
+  ompMaximaDescents,
   ompMinimaDescents,
   ompSingletonBlocks,
   ompDinv,
@@ -118,11 +128,14 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   ospInv,
   ospMaj,
   ospMinimaj,
+  osspBarredBlocks,
   osspBarredInv,
+  osspBarredSum,
   osspBars,
   osspInv,
   osspMinimaj,
   osspUnbarred,
+  parkingPmaj,
   decoratedArea,
   decoratedDinv,
   parkingArea,
@@ -135,10 +148,12 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   peaks,
   valleys,
   polyominoArea,
+  polyominoBottomRises,
   polyominoFirstColumn,
   polyominoHeight,
   polyominoLastColumn,
   polyominoTopRises,
+  polyominoUnitColumns,
   polyominoWidth,
   leftToRightMaxima,
   leftToRightMinima,
@@ -151,6 +166,8 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   rookRowSum,
   schroderDiagonals,
   schroderDiagonalsOnLine,
+  schroderDoubleRises,
+  schroderFirstReturn,
   schroderHeight,
   schroderInitialRise,
   schroderPeaks,
@@ -166,27 +183,35 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   skewComajor,
   skewDescents,
   skewDoubleDescents,
+  skewFirstDescent,
+  skewLastDescent,
   skewMajorIndex,
   skewPeaks,
   skewRowOfLargest,
   superBosonicParts,
   superFermionicDegree,
   superFermionicSum,
+  superLargestFermionic,
   superLargestPart,
+  superNPlain,
   superNStar,
   superRows,
   superZeroPart,
   tableauDescents,
   tableauMajorIndex,
+  teslerDiagonalOnes,
   teslerEntrySum,
   teslerLargestEntry,
+  teslerLastColumnPositive,
   teslerLastDiagonal,
   teslerPositive,
   teslerPositiveOffDiagonal,
   teslerZeroDiagonal,
   valleyDecoratedArea,
+  valleyDecoratedBounce,
   valleyDecoratedContractible,
   valleyDecoratedDinv,
+  valleyDecoratedReturns,
   valleyDecoratedValleys,
   wordInversions,
   wordDescents,

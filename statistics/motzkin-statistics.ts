@@ -164,3 +164,38 @@ export const motzkinLeadingLevels: Statistic<MotzkinPath> = {
     return i;
   },
 };
+
+export const motzkinLevelRuns: Statistic<MotzkinPath> = {
+  id: 'motzkin-level-runs',
+  family: FAMILY,
+  description: 'number of maximal runs of consecutive level steps',
+  source: COMMON,
+  examples: [
+    [[0, 0], 1],
+    [[0, 1, -1, 0], 2],
+    [[1, -1], 0],
+  ],
+  compute(p) {
+    let s = 0;
+    for (let i = 0; i < p.length; i++) if (p[i] === 0 && p[i - 1] !== 0) s++;
+    return s;
+  },
+};
+
+export const motzkinFirstReturn: Statistic<MotzkinPath> = {
+  id: 'motzkin-first-return',
+  family: FAMILY,
+  description: 'length of the shortest non-empty prefix ending at height 0 (0 for the empty path)',
+  source: COMMON,
+  examples: [
+    [[], 0],
+    [[0, 0], 1],
+    [[1, 0, -1], 3],
+    [[1, -1, 1, -1], 2],
+  ],
+  compute(p) {
+    let h = 0;
+    for (let i = 0; i < p.length; i++) if ((h += p[i]!) === 0) return i + 1;
+    return 0;
+  },
+};

@@ -124,3 +124,31 @@ export const ncNestings: Statistic<SetPartition> = {
     return s;
   },
 };
+
+export const ncDoubletons: Statistic<SetPartition> = {
+  id: 'nc-doubletons',
+  family: FAMILY,
+  description: 'number of blocks of size two',
+  source: COMMON,
+  examples: [
+    [[[1, 4], [2, 3]], 2],
+    [[[1, 2, 3]], 0],
+    [[[1, 3], [2]], 1],
+  ],
+  compute: (p) => p.filter((b) => b.length === 2).length,
+};
+
+export const ncDepth: Statistic<SetPartition> = {
+  id: 'nc-depth',
+  family: FAMILY,
+  description: 'largest number of blocks in a chain, each nested in the one before (0 when empty)',
+  source: COMMON,
+  examples: [
+    [[], 0],
+    [[[1], [2], [3]], 1],
+    [[[1, 4], [2, 3]], 2],
+    [[[1, 5], [2, 4], [3]], 3],
+  ],
+  // The blocks around a block of a noncrossing partition are nested in one another.
+  compute: (p) => p.reduce((m, c) => Math.max(m, 1 + p.filter((b) => nested(c, b)).length), 0),
+};

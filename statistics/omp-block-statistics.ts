@@ -72,3 +72,20 @@ export const ompMinimaDescents: Statistic<OrderedMultisetPartition> = {
     return s;
   },
 };
+
+export const ompMaximaDescents: Statistic<OrderedMultisetPartition> = {
+  id: 'omp-maxima-descents',
+  family: FAMILY,
+  description: 'number of j with max B_j > max B_{j+1} (strict descents of the word of block maxima)',
+  source: 'common practice',
+  examples: [
+    [[[1, 2], [1]], 1],
+    [[[2], [1, 2], [1]], 1],
+    [[[1], [1, 2, 3]], 0],
+  ],
+  compute(p) {
+    let s = 0;
+    for (let j = 0; j + 1 < p.length; j++) if (p[j]![p[j]!.length - 1]! > p[j + 1]![p[j + 1]!.length - 1]!) s++;
+    return s;
+  },
+};

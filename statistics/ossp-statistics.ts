@@ -86,3 +86,32 @@ export const osspMinimaj: Statistic<OrderedSetSuperpartition> = {
   ],
   compute: (p) => ospMinimaj.compute(p.blocks),
 };
+
+export const osspBarredBlocks: Statistic<OrderedSetSuperpartition> = {
+  id: 'ossp-barred-blocks',
+  family: FAMILY,
+  description: 'number of blocks holding at least one barred element',
+  source: 'common practice',
+  examples: [
+    [P1, 1],
+    [P2, 0],
+    [P3, 2],
+  ],
+  compute(p) {
+    const bar = new Set(p.barred);
+    return p.blocks.filter((b) => b.some((x) => bar.has(x))).length;
+  },
+};
+
+export const osspBarredSum: Statistic<OrderedSetSuperpartition> = {
+  id: 'ossp-barred-sum',
+  family: FAMILY,
+  description: 'sum of the barred elements',
+  source: 'common practice',
+  examples: [
+    [P1, 3],
+    [P2, 0],
+    [P3, 7],
+  ],
+  compute: (p) => p.barred.reduce((a, b) => a + b, 0),
+};

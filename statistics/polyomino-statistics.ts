@@ -96,3 +96,33 @@ export const polyominoTopRises: Statistic<ParallelogramPolyomino> = {
     return s;
   },
 };
+
+export const polyominoUnitColumns: Statistic<ParallelogramPolyomino> = {
+  id: 'polyomino-unit-columns',
+  family: FAMILY,
+  description: 'number of columns with a single cell',
+  source: 'common practice',
+  examples: [
+    [P1, 1],
+    [P2, 1],
+    [P3, 0],
+  ],
+  compute: (p) => p.filter(([b, t]) => t - b === 1).length,
+};
+
+export const polyominoBottomRises: Statistic<ParallelogramPolyomino> = {
+  id: 'polyomino-bottom-rises',
+  family: FAMILY,
+  description: 'number of columns whose bottom is higher than the bottom of the column before',
+  source: 'common practice',
+  examples: [
+    [P1, 0],
+    [P2, 0],
+    [P3, 1],
+  ],
+  compute(p) {
+    let s = 0;
+    for (let i = 1; i < p.length; i++) if (p[i]![0] > p[i - 1]![0]) s++;
+    return s;
+  },
+};

@@ -125,3 +125,39 @@ export const schroderInitialRise: Statistic<SchroderPath> = {
     return i;
   },
 };
+
+export const schroderDoubleRises: Statistic<SchroderPath> = {
+  id: 'schroder-double-rises',
+  family: FAMILY,
+  description: 'number of north steps followed directly by a north step',
+  source: 'common practice',
+  examples: [
+    [[1, 1, 0, 0], 1],
+    [[1, 1, 1, 0, 0, 0], 2],
+    [[1, 0, 2], 0],
+  ],
+  compute: (p) => factors(p, 1, 1),
+};
+
+export const schroderFirstReturn: Statistic<SchroderPath> = {
+  id: 'schroder-first-return',
+  family: FAMILY,
+  description: 'x-coordinate of the first point of the diagonal reached after the start (0 for the empty path)',
+  source: 'common practice',
+  examples: [
+    [[], 0],
+    [[1, 0, 2], 1],
+    [[2, 1, 0], 1],
+    [[1, 2, 0], 2],
+  ],
+  compute(p) {
+    let x = 0;
+    let y = 0;
+    for (const s of p) {
+      if (s !== 1) x++;
+      if (s !== 0) y++;
+      if (x === y) return x;
+    }
+    return 0;
+  },
+};

@@ -124,3 +124,31 @@ export const skewRowOfLargest: Statistic<SkewTableau> = {
     return row.length === 0 ? 0 : row[row.length - 1]! + 1;
   },
 };
+
+export const skewFirstDescent: Statistic<SkewTableau> = {
+  id: 'skew-first-descent',
+  family: FAMILY,
+  description: 'the smallest descent (0 when there is none)',
+  source: 'common practice',
+  examples: [
+    [T1, 1],
+    [T2, 0],
+    [T3, 1],
+    [T4, 2],
+  ],
+  compute: (t) => descents(t)[0] ?? 0,
+};
+
+export const skewLastDescent: Statistic<SkewTableau> = {
+  id: 'skew-last-descent',
+  family: FAMILY,
+  description: 'the largest descent (0 when there is none)',
+  source: 'common practice',
+  examples: [
+    [T1, 1],
+    [T2, 0],
+    [T3, 3],
+    [T4, 2],
+  ],
+  compute: (t) => descents(t).pop() ?? 0,
+};

@@ -107,3 +107,32 @@ export const superNStar: Statistic<Superpartition> = {
       .sort((a, b) => b - a)
       .reduce((acc, len, i) => acc + i * len, 0),
 };
+
+export const superNPlain: Statistic<Superpartition> = {
+  id: 'superpartition-n-plain',
+  family: FAMILY,
+  description: 'n(Λ⊛) = Σ (i − 1)·Λ⊛_i over all parts sorted decreasingly (circles not counted)',
+  source: `${DLM}; n(λ) as in Macdonald, Symmetric Functions, I.1`,
+  examples: [
+    [S1, 6],
+    [S2, 1],
+    [S3, 1],
+  ],
+  compute: (s) =>
+    [...s.fermionic, ...s.bosonic]
+      .sort((a, b) => b - a)
+      .reduce((acc, len, i) => acc + i * len, 0),
+};
+
+export const superLargestFermionic: Statistic<Superpartition> = {
+  id: 'superpartition-largest-fermionic',
+  family: FAMILY,
+  description: 'largest fermionic part (0 when there is none)',
+  source: 'common practice',
+  examples: [
+    [S1, 3],
+    [S2, 1],
+    [S3, 0],
+  ],
+  compute: (s) => s.fermionic[0] ?? 0,
+};

@@ -96,3 +96,31 @@ export const teslerEntrySum: Statistic<TeslerMatrix> = {
   ],
   compute: (m) => entries(m).reduce((a, b) => a + b, 0),
 };
+
+export const teslerDiagonalOnes: Statistic<TeslerMatrix> = {
+  id: 'tesler-diagonal-ones',
+  family: FAMILY,
+  description: 'number of diagonal entries equal to 1',
+  source: 'common practice',
+  examples: [
+    [I2, 2],
+    [A2, 0],
+    [A3, 0],
+    [B3, 1],
+  ],
+  compute: (m) => m.filter((r, i) => r[i] === 1).length,
+};
+
+export const teslerLastColumnPositive: Statistic<TeslerMatrix> = {
+  id: 'tesler-last-column-positive',
+  family: FAMILY,
+  description: 'number of positive entries in the last column',
+  source: 'common practice',
+  examples: [
+    [I2, 1],
+    [A2, 2],
+    [A3, 2],
+    [B3, 2],
+  ],
+  compute: (m) => m.filter((r) => r[r.length - 1]! > 0).length,
+};

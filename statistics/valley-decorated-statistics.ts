@@ -10,6 +10,7 @@ import { contractibleValleys } from '../objects/valley-decorated-dyck-paths.js';
 import { valleyRows } from '../objects/support/decorations.js';
 import { areaSequence } from '../objects/support/dyck.js';
 import type { Statistic } from '../src/enumerate/plugin.js';
+import { dyckBounce, dyckReturns } from './dyck-statistics.js';
 import type { ValleyDecoratedLabelledDyckPath } from '../objects/types.js';
 
 const FAMILY = 'valley-decorated-dyck-paths';
@@ -80,4 +81,30 @@ export const valleyDecoratedValleys: Statistic<ValleyDecoratedLabelledDyckPath> 
     [{ path: [1, 0, 1, 0, 1, 0], labels: [1, 2, 3], decorated: [2] }, 2],
   ],
   compute: (p) => valleyRows(p.path).length,
+};
+
+export const valleyDecoratedReturns: Statistic<ValleyDecoratedLabelledDyckPath> = {
+  id: 'valley-decorated-returns',
+  family: FAMILY,
+  description: 'number of returns of the path to the diagonal (the end included)',
+  source: 'common practice',
+  examples: [
+    [{ path: [1, 0, 1, 0], labels: [2, 1], decorated: [] }, 2],
+    [{ path: [1, 1, 0, 0, 1, 0], labels: [2, 3, 1], decorated: [3] }, 2],
+    [{ path: [1, 1, 0, 1, 0, 0], labels: [1, 2, 3], decorated: [] }, 1],
+  ],
+  compute: (p) => dyckReturns.compute(p.path),
+};
+
+export const valleyDecoratedBounce: Statistic<ValleyDecoratedLabelledDyckPath> = {
+  id: 'valley-decorated-bounce',
+  family: FAMILY,
+  description: "Haglund's bounce of the underlying Dyck path",
+  source: 'Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, AMS 2008',
+  examples: [
+    [{ path: [1, 0, 1, 0], labels: [2, 1], decorated: [] }, 1],
+    [{ path: [1, 1, 0, 0], labels: [1, 2], decorated: [] }, 0],
+    [{ path: [1, 0, 1, 0, 1, 0], labels: [1, 2, 3], decorated: [2] }, 3],
+  ],
+  compute: (p) => dyckBounce.compute(p.path),
 };

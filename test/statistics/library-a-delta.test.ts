@@ -75,3 +75,13 @@ describe('decorated Dyck paths against Δ′_{e_{k−1}} e_n', () => {
     }
   });
 });
+
+describe("Loehr's pmaj", () => {
+  it('Σ q^area t^pmaj = Σ q^dinv t^area over parking functions, n ≤ 6 (Loehr, Adv. in Appl. Math. 34 (2005); Haglund, AMS 2008, ch. 5)', async () => {
+    for (let n = 1; n <= 6; n++) {
+      const ap = (await dist('parking-functions', { n }, ['parking-area', 'parking-pmaj'])).series;
+      const da = (await dist('parking-functions', { n }, ['parking-dinv', 'parking-area'])).series;
+      expect(ap.equals(da), `n=${n}`).toBe(true);
+    }
+  });
+});
