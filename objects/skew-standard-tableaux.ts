@@ -2,7 +2,7 @@
  * Standard tableaux of a skew shape λ/μ (English): the cells of λ not in μ filled with
  * 1..n increasing along rows and down columns. Counted by removing outer corners; the tests
  * compare with Aitken's determinant f^{λ/μ} = n!·det[1/(λ_i − μ_j − i + j)!] (Stanley, EC2
- * Cor. 7.16.3). Order: 1, 2, … placed in the addable cells from the top row down.
+ * Cor. 7.16.3, numbering from memory). Order: 1, 2, … placed in the addable cells from the top row down.
  */
 import { InputError } from '../src/core/errors.js';
 import type { Family, ParamSpec, Params } from '../src/enumerate/plugin.js';

@@ -1,11 +1,11 @@
 /**
  * inv, dinv, maj and minimaj on ordered multiset partitions π = B_1|…|B_k (blocks are sets),
- * the four statistics of the Delta conjecture at t = 0: Haglund–Remmel–Wilson, "The Delta
- * Conjecture", Trans. Amer. Math. Soc. 370 (2018) §4 (their Theorem 4.1 and conjecture there,
- * with Wilson, Electron. J. Combin. 23 (2016), for inv/dinv/maj, and Rhoades, "Ordered set
- * partition statistics and the Delta Conjecture", J. Combin. Theory Ser. A 154 (2018), for
- * minimaj). The definitions are those of the ordered set partition statistics (osp-*.ts),
- * read with strict comparisons, so repeated letters in different blocks never count.
+ * the four statistics of the Delta conjecture at t = 0 (Haglund–Remmel–Wilson, "The Delta
+ * Conjecture", Trans. Amer. Math. Soc. 370 (2018) §4; Wilson, Electron. J. Combin. 23 (2016) for
+ * inv, dinv and maj; Rhoades, "Ordered set partition statistics and the Delta Conjecture",
+ * J. Combin. Theory Ser. A 154 (2018) for minimaj). The definitions are those of the ordered
+ * set partition statistics (osp-*.ts), read with strict comparisons, so a letter repeated in
+ * different blocks never counts against itself.
  * The tests check all four against ⟨Δ′_{e_{k−1}} e_n |_{t=0}, h_α⟩ from the symmetric-function engine.
  */
 import type { Statistic } from '../src/enumerate/plugin.js';

@@ -4,7 +4,7 @@
  * column and the cells to its right in its row; inv counts the board cells neither holding a
  * rook nor cancelled. Σ q^{inv} over the placements of k rooks is R_k(B, q), and
  * Σ_k R_k(B,q) [x]_q[x−1]_q…[x−c+k+1]_q = Π_i [x + h_i − i + 1]_q (Garsia–Remmel, "Q-counting
- * rook configurations and a formula of Frobenius", J. Combin. Theory Ser. A 41 (1986), Thm. 1;
+ * rook configurations and a formula of Frobenius", J. Combin. Theory Ser. A 41 (1986), their factorization theorem;
  * checked in the tests).
  */
 import type { Statistic } from '../src/enumerate/plugin.js';
@@ -38,7 +38,7 @@ export const rookInv: Statistic<RookPlacement> = {
   id: 'rook-inv',
   family: FAMILY,
   description: 'board cells neither holding a rook nor lying above a rook in its column or right of a rook in its row',
-  source: `${GR}, Thm. 1`,
+  source: `${GR} (the factorization theorem)`,
   examples: [
     [{ heights: B, rows: [0, 0, 0] }, 5],
     [{ heights: B, rows: [1, 0, 0] }, 2],

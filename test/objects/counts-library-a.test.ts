@@ -118,7 +118,7 @@ describe('Motzkin paths and noncrossing partitions', () => {
 });
 
 describe('skew standard tableaux', () => {
-  /** Aitken's formula f^{λ/μ} = n!·det[1/(λ_i − μ_j − i + j)!] (Stanley, EC2 Cor. 7.16.3), exact with mathjs fractions. */
+  /** Aitken's formula f^{λ/μ} = n!·det[1/(λ_i − μ_j − i + j)!] (Stanley, EC2 Cor. 7.16.3, numbering from memory), exact with mathjs fractions. */
   function aitken(outer: number[], inner: number[]): number {
     const l = outer.length;
     const n = outer.reduce((a, b) => a + b, 0) - inner.reduce((a, b) => a + b, 0);
@@ -129,7 +129,7 @@ describe('skew standard tableaux', () => {
     }));
     return Number(multiply(det(matrix(rows)), factorial(n)));
   }
-  it("Aitken's determinant (Stanley, EC2 Cor. 7.16.3; mathjs det over fractions)", () => {
+  it("Aitken's determinant (Stanley, EC2 Cor. 7.16.3, numbering from memory; mathjs det over fractions)", () => {
     const cases: [number[], number[]][] = [[[2, 1], [1]], [[3, 2], [1]], [[3, 3, 1], [2, 1]], [[2, 2], [1, 1]], [[4, 3, 2], [2, 1]], [[4, 4, 2, 1], [2, 1]], [[3, 3, 3], [2, 1]], [[5, 3, 1], []], [[3, 1], [3, 1]]];
     for (const [outer, inner] of cases) {
       const ref = aitken(outer, inner);

@@ -78,7 +78,7 @@ describe('noncrossing partition maps', () => {
 describe('skew tableau maps', () => {
   const skew = familyById('skew-standard-tableaux');
   const shapes: [number[], number[]][] = [[[3, 2], [1]], [[3, 3, 1], [2, 1]], [[4, 3, 2], [2, 1]], [[2, 2, 2], []], [[3, 3], []], [[4, 2, 1], [1]]];
-  it('promotion is a bijection, evacuation an involution, and ε∂ = ∂^{-1}ε, i.e. (ε∂)² = id (Stanley, "Promotion and evacuation", EJC 16(2) (2009), Thm. 2.1)', () => {
+  it('promotion is a bijection, evacuation an involution, and ε∂ = ∂^{-1}ε, i.e. (ε∂)² = id (Stanley, "Promotion and evacuation", EJC 16(2) (2009) §2, from memory)', () => {
     for (const [outer, inner] of shapes) {
       const images = new Set<string>();
       for (const t of skew.generate({ outer, inner })) {

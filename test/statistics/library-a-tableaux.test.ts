@@ -36,7 +36,7 @@ async function qRook(shape: number[], k: number): Promise<Poly> {
 }
 
 describe('Garsia–Remmel q-rook numbers', () => {
-  it('factorization Σ_k R_k(B,q)·[x]_q[x−1]_q…[x−c+k+1]_q = Π_i [x + h_i − i + 1]_q for c columns of heights h_1 ≤ … ≤ h_c, at x = c..c+3 (Garsia–Remmel, J. Combin. Theory Ser. A 41 (1986), Thm. 1)', async () => {
+  it('factorization Σ_k R_k(B,q)·[x]_q[x−1]_q…[x−c+k+1]_q = Π_i [x + h_i − i + 1]_q for c columns of heights h_1 ≤ … ≤ h_c, at x = c..c+3 (Garsia–Remmel, J. Combin. Theory Ser. A 41 (1986), the factorization theorem)', async () => {
     for (const shape of [[2, 2, 1], [3, 3, 1], [4, 2, 2, 1], [3, 3, 3], [5, 3, 1], [4, 4, 4, 4]]) {
       const h = [...shape].reverse();
       const c = h.length;
