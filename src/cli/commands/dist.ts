@@ -61,7 +61,7 @@ function printText(d: Distribution, out: (s: string) => void): void {
 export const distCommand: CommandSpec = {
   name: 'dist',
   summary: 'distribution of one or two statistics over a family (q- or q,t-polynomial, Frobenius-level sums)',
-  usage: 'dist <family> <stat> [--stat2 S2] [--transform T] --n N [--k K] [--shape A,B,…] [--content A,B,…] [--frobenius] [--by-shape] [--max-objects M] [--workers W] [--json]',
+  usage: 'dist <family> <stat> [--stat2 S2] [--transform T] --n N [--k K] [--shape A,B,…] [--content A,B,…] [--outer A,B,… [--inner A,B,…]] [--frobenius] [--by-shape] [--max-objects M] [--workers W] [--json]',
   positionals: [
     { name: 'family', description: 'a family id (gradus families lists them)' },
     { name: 'stat', description: 'a statistic id of the family, or transform:statistic (gradus statistics --family F)' },

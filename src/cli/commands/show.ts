@@ -1,5 +1,5 @@
 /**
- * `gradus show <family> --n N [--k K] [--d D] [--shape λ] [--content μ] [--stat S…]
+ * `gradus show <family> --n N [--k K] [--d D] [--shape λ] [--content μ] [--outer λ --inner μ] [--stat S…]
  * [--limit M] [--sample] [--seed S] [--json]`: draws objects of a family with the values
  * of chosen statistics beside each. familyParams turns the options into family params
  * (exported so other commands read family parameters the same way).
@@ -95,7 +95,7 @@ function describeParams(p: Params): string {
 export const showCommand: CommandSpec = {
   name: 'show',
   summary: 'draw objects of a family with the values of chosen statistics',
-  usage: 'show <family> --n N [--k K] [--d D] [--shape A,B,…] [--content A,B,…] [--stat S …] [--limit M] [--sample [--seed S]] [--json]',
+  usage: 'show <family> --n N [--k K] [--d D] [--shape A,B,…] [--content A,B,…] [--outer A,B,… [--inner A,B,…]] [--stat S …] [--limit M] [--sample [--seed S]] [--json]',
   positionals: [{ name: 'family', description: 'a family id (see gradus families)' }],
   options: [
     ...FAMILY_PARAM_OPTIONS,
