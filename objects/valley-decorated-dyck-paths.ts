@@ -112,5 +112,5 @@ export const valleyDecoratedDyckPaths: Family<ValleyDecoratedLabelledDyckPath> =
   },
   key: (p) => `${p.path.map((s) => (s === 1 ? 'N' : 'E')).join('')}:${p.labels.join(',')}:${p.decorated.join(',')}`,
   readingWord: parkingReadingWord,
-  testParams: [{ n: 1, k: 1 }, { n: 2, k: 1 }, { n: 3, k: 3 }, { n: 3, k: 2 }, { n: 4, d: 1 }, { n: 4, k: 2 }, { n: 4, k: 1 }],
+  testParams: [{ n: 1, k: 1 }, { n: 2, k: 1 }, { n: 3, k: 3 }, { n: 3, k: 2 }, { n: 4, k: 3 }, { n: 4, k: 2 }, { n: 4, k: 1 }],
 };

@@ -56,6 +56,6 @@ export function decoratedUnlabelledFamily(kind: DecoratedKind): Family<Decorated
       return { path, decorated };
     },
     key: (p) => `${p.path.map((s) => (s === 1 ? 'N' : 'E')).join('')}:${p.decorated.join(',')}`,
-    testParams: [{ n: 1, k: 1 }, { n: 3, k: 3 }, { n: 3, k: 2 }, { n: 4, d: 1 }, { n: 4, k: 2 }, { n: 5, k: 2 }, { n: 6, k: 1 }],
+    testParams: [{ n: 1, k: 1 }, { n: 3, k: 3 }, { n: 3, k: 2 }, { n: 4, k: 3 }, { n: 4, k: 2 }, { n: 5, k: 2 }, { n: 6, k: 1 }],
   };
 }

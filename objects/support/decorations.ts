@@ -1,18 +1,20 @@
 /**
- * Shared by the decorated Dyck path families: the number of decorations asked for (k of
- * Δ′_{e_{k−1}} e_n, or d = n − k directly) and the rises and valleys of a path.
+ * Shared by the decorated Dyck path families: the number of decorations n − k asked for (k of
+ * Δ′_{e_{k−1}} e_n) and the rises and valleys of a path.
  */
 import { InputError } from '../../src/core/errors.js';
 import type { ParamSpec, Params } from '../../src/enumerate/plugin.js';
 import type { DyckPath } from '../types.js';
-import { intParam, optIntParam, validateBySpec } from './params.js';
+import { intParam, validateBySpec } from './params.js';
 
-/** The params n, k, d of a decorated family whose n runs up to maxN. */
+/**
+ * The params n, k of a decorated family whose n runs up to maxN: k is required (not given as
+ * an alternative d = n − k) so that the catalogue, which fills families by n and k, takes it.
+ */
 export function decorationParams(maxN: number, what: string): ParamSpec[] {
   return [
     { name: 'n', kind: 'int', description: 'size n (number of rows)', min: 1, max: maxN },
-    { name: 'k', kind: 'int', description: `k of Δ′_{e_{k−1}} e_n (1..n): n − k decorated ${what}`, min: 1, max: maxN, optional: true },
-    { name: 'd', kind: 'int', description: `number of decorated ${what} d = n − k (0..n−1)`, min: 0, max: maxN - 1, optional: true },
+    { name: 'k', kind: 'int', description: `k of Δ′_{e_{k−1}} e_n (1..n): n − k decorated ${what}`, min: 1, max: maxN },
   ];
 }
 
@@ -20,13 +22,9 @@ export function decorationParams(maxN: number, what: string): ParamSpec[] {
 export function decorationCount(id: string, specs: readonly ParamSpec[], params: Params): number {
   validateBySpec(id, specs, params);
   const n = intParam(params, 'n');
-  const k = optIntParam(params, 'k');
-  const d = optIntParam(params, 'd');
-  if (k === undefined && d === undefined) throw new InputError(`${id} needs k (1..${n}) or d, the number of decorations (0..${n - 1})`, 'k');
-  if (k !== undefined && k > n) throw new InputError(`${id}: k must be at most n = ${n} (got ${k})`, 'k');
-  if (d !== undefined && d > n - 1) throw new InputError(`${id}: d must be at most n − 1 = ${n - 1} (got ${d})`, 'd');
-  if (k !== undefined && d !== undefined && k + d !== n) throw new InputError(`${id}: k and d must satisfy k + d = n (got k=${k}, d=${d})`, 'd');
-  return d ?? n - k!;
+  const k = intParam(params, 'k');
+  if (k > n) throw new InputError(`${id}: k must be at most n = ${n} (got ${k})`, 'k');
+  return n - k;
 }
 
 /** Rows r (1-based, r ≥ 2) whose north step directly follows the north step of row r − 1. */

@@ -52,7 +52,7 @@ describe('ordered multiset partitions', () => {
 describe('decorated Dyck paths', () => {
   it('labelled, decorated valleys: no decoration gives the (n+1)^(n−1) parking functions (Konheim–Weiss); n − 1 decorations give one object (Δ′_{e_0} e_n = e_n, MATH.md §3)', () => {
     for (let n = 1; n <= 5; n++) {
-      expect(both('valley-decorated-dyck-paths', { n, d: 0 })).toEqual([(n + 1) ** (n - 1), (n + 1) ** (n - 1)]);
+      expect(both('valley-decorated-dyck-paths', { n, k: n })).toEqual([(n + 1) ** (n - 1), (n + 1) ** (n - 1)]);
       expect(both('valley-decorated-dyck-paths', { n, k: 1 })).toEqual([1, 1]);
     }
     for (const k of [2, 3]) expect(streamed('valley-decorated-dyck-paths', { n: 6, k })).toBe(Number(familyById('valley-decorated-dyck-paths').count({ n: 6, k })));
@@ -67,10 +67,10 @@ describe('decorated Dyck paths', () => {
           if (n - p >= d) rises += nar * combinations(n - p, d);
           if (p - 1 >= d) valleys += nar * combinations(p - 1, d);
         }
-        expect(both('dyck-paths-decorated-rises', { n, d }), `rises n=${n} d=${d}`).toEqual([rises, rises]);
-        expect(both('dyck-paths-decorated-valleys', { n, d }), `valleys n=${n} d=${d}`).toEqual([valleys, valleys]);
+        expect(both('dyck-paths-decorated-rises', { n, k: n - d }), `rises n=${n} d=${d}`).toEqual([rises, rises]);
+        expect(both('dyck-paths-decorated-valleys', { n, k: n - d }), `valleys n=${n} d=${d}`).toEqual([valleys, valleys]);
       }
-      expect(Number(familyById('dyck-paths-decorated-rises').count({ n, d: 0 }))).toBe(catalan(n));
+      expect(Number(familyById('dyck-paths-decorated-rises').count({ n, k: n }))).toBe(catalan(n));
     }
   });
 });
