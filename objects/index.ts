@@ -11,25 +11,38 @@ import { binaryTrees } from './binary-trees.js';
 import { compositions } from './compositions.js';
 import { decoratedDyckPaths } from './decorated-dyck-paths.js';
 import { dyckPaths } from './dyck-paths.js';
+import { dyckPathsDecoratedRises } from './dyck-paths-decorated-rises.js';
+import { dyckPathsDecoratedValleys } from './dyck-paths-decorated-valleys.js';
 import { fillings } from './fillings.js';
 import { increasingPlaneTrees } from './increasing-plane-trees.js';
 import { increasingTrees } from './increasing-trees.js';
 import { inversionSequences } from './inversion-sequences.js';
 import { labelledTrees } from './labelled-trees.js';
 import { monotoneTriangles } from './monotone-triangles.js';
+import { motzkinPaths } from './motzkin-paths.js';
+import { noncrossingPartitions } from './noncrossing-partitions.js';
+import { orderedMultisetPartitions } from './ordered-multiset-partitions.js';
 import { orderedSetPartitions } from './ordered-set-partitions.js';
+import { orderedSetSuperpartitions } from './ordered-set-superpartitions.js';
+import { parallelogramPolyominoes } from './parallelogram-polyominoes.js';
 import { parkingFunctions } from './parking-functions.js';
 import { partitions } from './partitions.js';
 import { perfectMatchings } from './perfect-matchings.js';
 import { permutations } from './permutations.js';
 import { planeTrees } from './plane-trees.js';
 import { pruferCodes } from './prufer-codes.js';
+import { rookPlacements } from './rook-placements.js';
+import { schroderPaths } from './schroder-paths.js';
 import { semistandardTableaux } from './semistandard-tableaux.js';
 import { setPartitions } from './set-partitions.js';
 import { signedPermutations } from './signed-permutations.js';
+import { skewStandardTableaux } from './skew-standard-tableaux.js';
 import { standardTableaux } from './standard-tableaux.js';
 import { stirlingPermutations } from './stirling-permutations.js';
 import { subsets } from './subsets.js';
+import { superpartitions } from './superpartitions.js';
+import { teslerMatrices } from './tesler-matrices.js';
+import { valleyDecoratedDyckPaths } from './valley-decorated-dyck-paths.js';
 import { words } from './words.js';
 
 export const FAMILIES: readonly Family<unknown>[] = [
@@ -39,25 +52,38 @@ export const FAMILIES: readonly Family<unknown>[] = [
   compositions,
   decoratedDyckPaths,
   dyckPaths,
+  dyckPathsDecoratedRises,
+  dyckPathsDecoratedValleys,
   fillings,
   increasingPlaneTrees,
   increasingTrees,
   inversionSequences,
   labelledTrees,
   monotoneTriangles,
+  motzkinPaths,
+  noncrossingPartitions,
+  orderedMultisetPartitions,
   orderedSetPartitions,
+  orderedSetSuperpartitions,
+  parallelogramPolyominoes,
   parkingFunctions,
   partitions,
   perfectMatchings,
   permutations,
   planeTrees,
   pruferCodes,
+  rookPlacements,
+  schroderPaths,
   semistandardTableaux,
   setPartitions,
   signedPermutations,
+  skewStandardTableaux,
   standardTableaux,
   stirlingPermutations,
   subsets,
+  superpartitions,
+  teslerMatrices,
+  valleyDecoratedDyckPaths,
   words,
 ];
 

@@ -73,3 +73,52 @@ export type InversionSequence = readonly number[];
 export type StirlingPermutation = readonly number[];
 /** A perfect matching of [2n]: partner[i−1] is the point matched with i. */
 export type PerfectMatching = readonly number[];
+// Families of the Delta/Shuffle and superspace library (part A).
+
+/** An ordered multiset partition: blocks in order, each a set of letters (strictly increasing). */
+export type OrderedMultisetPartition = readonly (readonly number[])[];
+/**
+ * A labelled Dyck path with decorated contractible valleys (valley version of the Delta
+ * conjecture): `decorated` lists rows r (1-based, r ≥ 2) whose north step follows an east step
+ * and which stay a labelled Dyck path when that north step moves one column left.
+ */
+export interface ValleyDecoratedLabelledDyckPath extends LabelledDyckPath {
+  readonly decorated: readonly number[];
+}
+/** An unlabelled Dyck path with decorated rows (double rises or valleys, by family), 1-based rows. */
+export interface DecoratedDyckPath {
+  readonly path: DyckPath;
+  readonly decorated: readonly number[];
+}
+/** A Schröder path from (0,0) to (n,n) weakly above the diagonal: 1 = north, 0 = east, 2 = diagonal. */
+export type SchroderPath = readonly (0 | 1 | 2)[];
+/** A Motzkin path: 1 = up, 0 = level, −1 = down, never below height 0, ending at 0. */
+export type MotzkinPath = readonly (-1 | 0 | 1)[];
+/** A skew standard tableau of shape outer/inner (English): rows[i] fills columns inner[i]..outer[i]−1. */
+export interface SkewTableau {
+  readonly outer: readonly number[];
+  readonly inner: readonly number[];
+  readonly rows: readonly (readonly number[])[];
+}
+/**
+ * Non-attacking rooks on a Ferrers board: `heights` are the column heights left to right
+ * (weakly increasing, positive), `rows[c]` the row (1 = bottom) of the rook in column c, 0 if none.
+ */
+export interface RookPlacement {
+  readonly heights: readonly number[];
+  readonly rows: readonly number[];
+}
+/** A Tesler matrix: an upper triangular n × n matrix of non-negative integers, given by its rows. */
+export type TeslerMatrix = readonly (readonly number[])[];
+/** A superpartition: strictly decreasing fermionic parts (a last part 0 allowed) and a partition. */
+export interface Superpartition {
+  readonly fermionic: readonly number[];
+  readonly bosonic: readonly number[];
+}
+/** An ordered set superpartition: an ordered set partition with some non-minimal elements barred. */
+export interface OrderedSetSuperpartition {
+  readonly blocks: OrderedSetPartition;
+  readonly barred: readonly number[];
+}
+/** A parallelogram polyomino as its columns left to right, each the rows [bottom, top) it covers. */
+export type ParallelogramPolyomino = readonly (readonly [number, number])[];

@@ -12,6 +12,8 @@ import { blockIndexSum } from './block-index-sum.js';
 import { tableauCharge, tableauCocharge, wordCharge, wordCocharge } from './charge.js';
 import { compositionLargestPart, compositionMajorIndex, compositionParts } from './composition-parts.js';
 import { cycles } from './cycles.js';
+import { decoratedRisesArea, decoratedRisesBounce, decoratedRisesDinv, decoratedRisesFirstRise, decoratedRisesMarkedArea, decoratedRisesPeaks, decoratedRisesReturns } from './decorated-rises-statistics.js';
+import { decoratedValleysArea, decoratedValleysBounce, decoratedValleysDinv, decoratedValleysMarkedArea, decoratedValleysOnDiagonal, decoratedValleysPeaks, decoratedValleysReturns } from './decorated-valleys-statistics.js';
 import { denert } from './denert.js';
 import { ascents, descents, inverseDescents } from './descents.js';
 import { dyckArea, dyckBounce, dyckDinv, dyckPeaks, dyckReturns } from './dyck-statistics.js';
@@ -26,21 +28,35 @@ import { treeChildlessVertices, treeDecreasingEdges, treeHeight, treeInversions,
 import { longestIncreasingSubsequence } from './longest-increasing-subsequence.js';
 import { inverseMajorIndex, majorIndex } from './major-index.js';
 import { matchingAlignments, matchingComponents, matchingCrossings, matchingFirstArcLength, matchingNestings, matchingOuterArcs, matchingShortArcs } from './matching-statistics.js';
+import { motzkinArea, motzkinDoubleRises, motzkinFirstReturn, motzkinGroundLevels, motzkinHeight, motzkinLeadingLevels, motzkinLevelRuns, motzkinLevelSteps, motzkinPeaks, motzkinReturns, motzkinUpSteps, motzkinValleys } from './motzkin-statistics.js';
+import { ncBlockOfLast, ncBlockOfOne, ncBlocks, ncBonds, ncDepth, ncDoubletons, ncLargestBlock, ncNestings, ncOuterBlocks, ncSingletons } from './noncrossing-statistics.js';
+import { ompFirstBlockSize, ompLargestBlock, ompLastBlockSize, ompMaximaDescents, ompMinimaDescents, ompSingletonBlocks } from './omp-block-statistics.js';
+import { ompDinv, ompInv, ompMaj, ompMinimaj } from './omp-delta-statistics.js';
 import { ospDinv } from './osp-dinv.js';
 import { ospInv } from './osp-inv.js';
 import { ospMaj, ospMinimaj } from './osp-maj.js';
+import { osspBarredBlocks, osspBarredInv, osspBarredSum, osspBars, osspInv, osspMinimaj, osspUnbarred } from './ossp-statistics.js';
+import { parkingPmaj } from './parking-pmaj.js';
 import { decoratedArea, decoratedDinv, parkingArea, parkingDinv } from './parking-statistics.js';
 import { distinctParts, durfeeSquare, largestPart, nLambda, partitionParts } from './partition-statistics.js';
 import { peaks, valleys } from './peaks.js';
 import { planeTreeBinaryNodes, planeTreeHeight, planeTreeLeaves, planeTreeLeftBranch, planeTreeMaxDegree, planeTreePathLength, planeTreeRightBranch, planeTreeRootDegree, planeTreeUnaryNodes } from './plane-tree-statistics.js';
+import { polyominoArea, polyominoBottomRises, polyominoFirstColumn, polyominoHeight, polyominoLastColumn, polyominoTopRises, polyominoUnitColumns, polyominoWidth } from './polyomino-statistics.js';
 import { pruferDistinctLetters, pruferMaxMultiplicity, pruferZeros } from './prufer-statistics.js';
 import { leftToRightMaxima, leftToRightMinima, rightToLeftMaxima, rightToLeftMinima } from './records.js';
+import { rookCancelled, rookCount, rookEmptyColumns, rookInv, rookRowSum } from './rook-statistics.js';
+import { schroderDiagonals, schroderDiagonalsOnLine, schroderDoubleRises, schroderFirstReturn, schroderHeight, schroderInitialRise, schroderPeaks, schroderReturns, schroderValleys } from './schroder-shape-statistics.js';
+import { schroderArea, schroderBounce, schroderDinv } from './schroder-statistics.js';
 import { blocks, crossings, nestings, singletons } from './set-partition-statistics.js';
 import { flagDescents, flagMajorIndex, negativeDescents, negativeMajorIndex, signedDescents, typeBDescents } from './signed-descents.js';
 import { flagExcedances, signedMajorIndex, typeBExcedances } from './signed-excedances.js';
 import { flagInversions, negatedFixedPoints, negativeSum, negativeSumPairs, negatives, signedFixedPoints, signedInversions, signedLength } from './signed-length.js';
+import { skewComajor, skewDescents, skewDoubleDescents, skewFirstDescent, skewLastDescent, skewMajorIndex, skewPeaks, skewRowOfLargest } from './skew-tableau-statistics.js';
 import { stirlingAscents, stirlingDescents, stirlingInversions, stirlingPlateaux } from './stirling-permutation-statistics.js';
+import { superBosonicParts, superFermionicDegree, superFermionicSum, superLargestFermionic, superLargestPart, superNPlain, superNStar, superRows, superZeroPart } from './superpartition-statistics.js';
 import { tableauDescents, tableauMajorIndex } from './tableau-major-index.js';
+import { teslerDiagonalOnes, teslerEntrySum, teslerLargestEntry, teslerLastColumnPositive, teslerLastDiagonal, teslerPositive, teslerPositiveOffDiagonal, teslerZeroDiagonal } from './tesler-statistics.js';
+import { valleyDecoratedArea, valleyDecoratedBounce, valleyDecoratedContractible, valleyDecoratedDinv, valleyDecoratedReturns, valleyDecoratedValleys } from './valley-decorated-statistics.js';
 import { wordInversions } from './word-inversions.js';
 import { wordDescents, wordMajorIndex } from './word-major-index.js';
 
@@ -72,6 +88,20 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   compositionMajorIndex,
   compositionParts,
   cycles,
+  decoratedRisesArea,
+  decoratedRisesBounce,
+  decoratedRisesDinv,
+  decoratedRisesFirstRise,
+  decoratedRisesMarkedArea,
+  decoratedRisesPeaks,
+  decoratedRisesReturns,
+  decoratedValleysArea,
+  decoratedValleysBounce,
+  decoratedValleysDinv,
+  decoratedValleysMarkedArea,
+  decoratedValleysOnDiagonal,
+  decoratedValleysPeaks,
+  decoratedValleysReturns,
   denert,
   ascents,
   descents,
@@ -128,10 +158,50 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   matchingNestings,
   matchingOuterArcs,
   matchingShortArcs,
+  motzkinArea,
+  motzkinDoubleRises,
+  motzkinFirstReturn,
+  motzkinGroundLevels,
+  motzkinHeight,
+  motzkinLeadingLevels,
+  motzkinLevelRuns,
+  motzkinLevelSteps,
+  motzkinPeaks,
+  motzkinReturns,
+  motzkinUpSteps,
+  motzkinValleys,
+  ncBlockOfLast,
+  ncBlockOfOne,
+  ncBlocks,
+  ncBonds,
+  ncDepth,
+  ncDoubletons,
+  ncLargestBlock,
+  ncNestings,
+  ncOuterBlocks,
+  ncSingletons,
+  ompFirstBlockSize,
+  ompLargestBlock,
+  ompLastBlockSize,
+  ompMaximaDescents,
+  ompMinimaDescents,
+  ompSingletonBlocks,
+  ompDinv,
+  ompInv,
+  ompMaj,
+  ompMinimaj,
   ospDinv,
   ospInv,
   ospMaj,
   ospMinimaj,
+  osspBarredBlocks,
+  osspBarredInv,
+  osspBarredSum,
+  osspBars,
+  osspInv,
+  osspMinimaj,
+  osspUnbarred,
+  parkingPmaj,
   decoratedArea,
   decoratedDinv,
   parkingArea,
@@ -152,6 +222,14 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   planeTreeRightBranch,
   planeTreeRootDegree,
   planeTreeUnaryNodes,
+  polyominoArea,
+  polyominoBottomRises,
+  polyominoFirstColumn,
+  polyominoHeight,
+  polyominoLastColumn,
+  polyominoTopRises,
+  polyominoUnitColumns,
+  polyominoWidth,
   pruferDistinctLetters,
   pruferMaxMultiplicity,
   pruferZeros,
@@ -159,6 +237,23 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   leftToRightMinima,
   rightToLeftMaxima,
   rightToLeftMinima,
+  rookCancelled,
+  rookCount,
+  rookEmptyColumns,
+  rookInv,
+  rookRowSum,
+  schroderDiagonals,
+  schroderDiagonalsOnLine,
+  schroderDoubleRises,
+  schroderFirstReturn,
+  schroderHeight,
+  schroderInitialRise,
+  schroderPeaks,
+  schroderReturns,
+  schroderValleys,
+  schroderArea,
+  schroderBounce,
+  schroderDinv,
   blocks,
   crossings,
   nestings,
@@ -180,12 +275,43 @@ export const STATISTICS: readonly Statistic<unknown>[] = [
   signedFixedPoints,
   signedInversions,
   signedLength,
+  skewComajor,
+  skewDescents,
+  skewDoubleDescents,
+  skewFirstDescent,
+  skewLastDescent,
+  skewMajorIndex,
+  skewPeaks,
+  skewRowOfLargest,
   stirlingAscents,
   stirlingDescents,
   stirlingInversions,
   stirlingPlateaux,
+  superBosonicParts,
+  superFermionicDegree,
+  superFermionicSum,
+  superLargestFermionic,
+  superLargestPart,
+  superNPlain,
+  superNStar,
+  superRows,
+  superZeroPart,
   tableauDescents,
   tableauMajorIndex,
+  teslerDiagonalOnes,
+  teslerEntrySum,
+  teslerLargestEntry,
+  teslerLastColumnPositive,
+  teslerLastDiagonal,
+  teslerPositive,
+  teslerPositiveOffDiagonal,
+  teslerZeroDiagonal,
+  valleyDecoratedArea,
+  valleyDecoratedBounce,
+  valleyDecoratedContractible,
+  valleyDecoratedDinv,
+  valleyDecoratedReturns,
+  valleyDecoratedValleys,
   wordInversions,
   wordDescents,
   wordMajorIndex,

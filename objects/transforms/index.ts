@@ -19,15 +19,20 @@ import { conjugate } from './conjugate.js';
 import { dyckReverse } from './dyck-reverse.js';
 import { dyckTo321Avoiding } from './dyck-to-321-avoiding.js';
 import { dyckToBinaryTree } from './dyck-to-binary-tree.js';
+import { dyckToNc } from './dyck-to-nc.js';
 import { dyckToPlaneTree } from './dyck-to-plane-tree.js';
 import { evacuation } from './evacuation.js';
 import { foata, wordFoata } from './foata.js';
 import { increasingTreeOfPermutation } from './increasing-tree-of-permutation.js';
 import { inverse } from './inverse.js';
+import { krewerasComplementMap } from './kreweras-complement.js';
 import { lehmerCode } from './lehmer-code.js';
 import { lehmerDecode } from './lehmer-decode.js';
 import { matchingReverse } from './matching-reverse.js';
 import { matchingToInvolution } from './matching-to-involution.js';
+import { motzkinReverse } from './motzkin-reverse.js';
+import { ncRotation } from './nc-rotation.js';
+import { ncToDyck } from './nc-to-dyck.js';
 import { parkingToTree } from './parking-to-tree.js';
 import { permutationMatrix } from './permutation-matrix.js';
 import { permutationOfIncreasingTree } from './permutation-of-increasing-tree.js';
@@ -35,19 +40,27 @@ import { planeToBinaryTree } from './plane-to-binary-tree.js';
 import { planeTreeMirror } from './plane-tree-mirror.js';
 import { planeTreeToDyck } from './plane-tree-to-dyck.js';
 import { planeTreeToStirling } from './plane-tree-to-stirling.js';
+import { polyominoTranspose } from './polyomino-transpose.js';
 import { pruferCode } from './prufer-code.js';
 import { pruferDecode } from './prufer-decode.js';
 import { reverse, wordReverse } from './reverse.js';
+import { rookConjugate } from './rook-conjugate.js';
 import { rskInsertion, rskRecording } from './rsk.js';
+import { schroderReverse } from './schroder-reverse.js';
+import { schroderZeta } from './schroder-zeta.js';
 import { signedAbsolute } from './signed-absolute.js';
 import { signedInverse } from './signed-inverse.js';
 import { signedNegation } from './signed-negation.js';
 import { signedReverse } from './signed-reverse.js';
 import { signedReverseComplement } from './signed-reverse-complement.js';
+import { skewEvacuation } from './skew-evacuation.js';
+import { skewPromotion } from './skew-promotion.js';
+import { skewTranspose } from './skew-transpose.js';
 import { standardize } from './standardize.js';
 import { stirlingReverse } from './stirling-reverse.js';
 import { stirlingToPlaneTree } from './stirling-to-plane-tree.js';
 import { subsetComplement } from './subset-complement.js';
+import { superpartitionConjugate } from './superpartition-conjugate.js';
 import { transpose } from './transpose.js';
 import { treeToParking } from './tree-to-parking.js';
 import { wordRskInsertion } from './word-rsk-insertion.js';
@@ -70,16 +83,21 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   dyckReverse,
   dyckTo321Avoiding,
   dyckToBinaryTree,
+  dyckToNc,
   dyckToPlaneTree,
   evacuation,
   foata,
   wordFoata,
   increasingTreeOfPermutation,
   inverse,
+  krewerasComplementMap,
   lehmerCode,
   lehmerDecode,
   matchingReverse,
   matchingToInvolution,
+  motzkinReverse,
+  ncRotation,
+  ncToDyck,
   parkingToTree,
   permutationMatrix,
   permutationOfIncreasingTree,
@@ -87,21 +105,29 @@ export const TRANSFORMS: readonly Transform<unknown, unknown>[] = [
   planeTreeMirror,
   planeTreeToDyck,
   planeTreeToStirling,
+  polyominoTranspose,
   pruferCode,
   pruferDecode,
   reverse,
   wordReverse,
+  rookConjugate,
   rskInsertion,
   rskRecording,
+  schroderReverse,
+  schroderZeta,
   signedAbsolute,
   signedInverse,
   signedNegation,
   signedReverse,
   signedReverseComplement,
+  skewEvacuation,
+  skewPromotion,
+  skewTranspose,
   standardize,
   stirlingReverse,
   stirlingToPlaneTree,
   subsetComplement,
+  superpartitionConjugate,
   transpose,
   treeToParking,
   wordRskInsertion,
