@@ -1,7 +1,8 @@
 /**
  * Labelled Dyck paths of size n with decorated double rises, for the rise version of the
- * Delta theorem (MATH.md §3): Δ'_{e_{k−1}} e_n sums over those with n − k decorations.
- * Give k (1..n, as in MATH.md and the superspace modules δ_{n,k}) or the number of
+ * Delta theorem (Haglund–Remmel–Wilson, The Delta Conjecture, Trans. Amer. Math. Soc. 370
+ * (2018)): Δ'_{e_{k−1}} e_n sums over those with n − k decorations.
+ * Give k (1..n, as in Δ'_{e_{k−1}} e_n and the superspace modules δ_{n,k}) or the number of
  * decorations d = n − k (0..n−1). A double rise is a row r ≥ 2 whose north step follows
  * the north step of row r−1. Order: Dyck paths (lexicographic), then the decorated sets
  * (lexicographic), then the labellings.

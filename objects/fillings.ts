@@ -1,7 +1,7 @@
 /**
  * Standard fillings of a diagram μ (French: rows[0] is the bottom row, of length μ_1):
  * the entries 1..n each once, no increase condition — the n! fillings of the
- * Haglund–Haiman–Loehr formula for H̃_μ (MATH.md §3). Streamed by writing the
+ * Haglund–Haiman–Loehr formula for H̃_μ (J. Amer. Math. Soc. 18 (2005)). Streamed by writing the
  * permutations of 1..n (lexicographic) into the cells row by row from the bottom.
  */
 import { factorial } from '../src/core/integers.js';
@@ -23,8 +23,8 @@ function fill(shape: Partition, w: readonly number[]): Filling {
 }
 
 /**
- * The reading word of the filling formula: rows from top to bottom, each left to right
- * (MATH.md §3). H̃_μ = Σ q^inv t^maj F_{iDes(word)} over standard fillings (Haglund–
+ * The reading word of the filling formula: rows from top to bottom, each left to right.
+ * H̃_μ = Σ q^inv t^maj F_{iDes(word)} over standard fillings (Haglund–
  * Haiman–Loehr 2005); with μ = (2) this gives s_2 + q s_11, with μ = (1,1) s_2 + t s_11.
  */
 export function fillingReadingWord(f: Filling): number[] {

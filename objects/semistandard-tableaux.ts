@@ -1,7 +1,8 @@
 /**
  * Semistandard Young tableaux (English) of shape λ with content μ (letter i used μ_i
  * times): letter by letter, each letter fills a horizontal strip. Counted by the Kostka
- * number K_{λμ} (MATH.md §2), computed by the same strip recursion with memoization.
+ * number K_{λμ} (Stanley, EC2 §7.10; Macdonald, Symmetric Functions, I.6), computed by the
+ * same strip recursion with memoization.
  */
 import { InputError } from '../src/core/errors.js';
 import type { Partition } from '../src/core/partitions.js';

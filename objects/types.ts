@@ -33,7 +33,8 @@ export interface LabelledDyckPath {
 /**
  * A labelled Dyck path with decorated double rises: `decorated` lists rows r (1-based)
  * such that rows r−1 and r are a double rise (north steps r−1 and r are consecutive)
- * and row r carries a decoration (rise version of the Delta theorem, MATH.md §3).
+ * and row r carries a decoration (rise version of the Delta theorem, Haglund–Remmel–Wilson,
+ * Trans. Amer. Math. Soc. 370 (2018)).
  */
 export interface DecoratedLabelledDyckPath extends LabelledDyckPath {
   readonly decorated: readonly number[];

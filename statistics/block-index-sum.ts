@@ -4,7 +4,8 @@
  * restricted growth word w this is Σ (w_i − 1) over positions that are not first occurrences.
  * Appending n to a partition of [n−1] either opens a new block (adds 0) or joins block j
  * (adds j − 1, j = 1..k), which is the recurrence Stir_q(n,k) = Stir_q(n−1,k−1) + [k]_q Stir_q(n−1,k)
- * of MATH.md §1; so over partitions with k blocks the generating function is Stir_q(n,k).
+ * of Carlitz's q-Stirling numbers; so over partitions with k blocks the generating function is
+ * Stir_q(n,k).
  */
 import type { Statistic } from '../src/enumerate/plugin.js';
 import type { SetPartition } from '../objects/types.js';
@@ -13,7 +14,7 @@ export const blockIndexSum: Statistic<SetPartition> = {
   id: 'block-index-sum',
   family: 'set-partitions',
   description: 'sum over non-minimal elements of (index of their block by minima) − 1; Stir_q(n,k) over k blocks',
-  source: 'Milne, Trans. Amer. Math. Soc. 245 (1978), q-analog of restricted growth functions (from memory); recurrence of MATH.md §1',
+  source: 'Milne, Trans. Amer. Math. Soc. 245 (1978), q-analog of restricted growth functions (from memory); q-Stirling recurrence of Carlitz, Duke Math. J. 15 (1948) (from memory)',
   examples: [
     [[[1, 2, 3]], 0],
     [[[1], [2, 3]], 1],

@@ -1,7 +1,7 @@
 /**
  * inv and maj of standard fillings of a diagram μ (French: rows[0] is the bottom row), the
  * statistics of the Haglund–Haiman–Loehr formula H̃_μ = Σ_σ q^{inv σ} t^{maj σ} x^σ
- * (J. Amer. Math. Soc. 18 (2005); MATH.md §3). Reading order: rows top to bottom, each left
+ * (J. Amer. Math. Soc. 18 (2005)). Reading order: rows top to bottom, each left
  * to right. A descent is a cell above the bottom row whose entry exceeds the entry directly
  * below; maj = Σ_{descents u} (leg(u) + 1). Cells attack when in the same row, or in adjacent
  * rows with the upper one strictly right of the lower one; inv = #(attacking pairs u before
@@ -17,7 +17,7 @@ function columnHeight(rows: Filling['rows'], c: number): number {
   return h;
 }
 
-const SOURCE = 'Haglund–Haiman–Loehr, J. Amer. Math. Soc. 18 (2005); MATH.md §3';
+const SOURCE = 'Haglund–Haiman–Loehr, A combinatorial formula for Macdonald polynomials, J. Amer. Math. Soc. 18 (2005)';
 
 export const fillingMaj: Statistic<Filling> = {
   id: 'filling-maj',

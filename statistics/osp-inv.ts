@@ -1,5 +1,5 @@
 /**
- * inv on ordered set partitions B_1|…|B_k of [n] (MATH.md §4): pairs (b, j) with b ∈ B_i,
+ * inv on ordered set partitions B_1|…|B_k of [n]: pairs (b, j) with b ∈ B_i,
  * i < j and b > min B_j. Its distribution over OP(n,k) is [k]_q!·Stir_q(n,k)
  * (Remmel–Wilson, "An extension of MacMahon's equidistribution theorem to ordered set
  * partitions", JCTA (2015)); the tests check this for n ≤ 6.
@@ -17,7 +17,7 @@ export const ospInv: Statistic<OrderedSetPartition> = {
   id: 'osp-inv',
   family: 'ordered-set-partitions',
   description: 'pairs (b, j): b in an earlier block than B_j and b > min B_j',
-  source: 'MATH.md §4; Remmel–Wilson, JCTA (2015); Haglund–Remmel–Wilson, Trans. Amer. Math. Soc. 370 (2018)',
+  source: 'Remmel–Wilson, JCTA (2015); Haglund–Remmel–Wilson, Trans. Amer. Math. Soc. 370 (2018)',
   examples: [
     [[[1, 2, 3]], 0],
     [[[1, 3], [2]], 1],

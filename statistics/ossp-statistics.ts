@@ -2,7 +2,7 @@
  * Statistics on ordered set superpartitions (Rhoades–Wilson, "Set superpartitions and
  * superspace duality modules", Forum Math. Sigma 10 (2022)): the number of bars (the
  * θ-degree of the superspace module of δ_{n,k}, checked in the tests) and inv-type counts.
- * inv pairs: (b, j) with b in a block before B_j and b > min B_j (MATH.md §4).
+ * inv pairs: (b, j) with b in a block before B_j and b > min B_j (Remmel–Wilson, J. Combin. Theory Ser. A (2015)).
  */
 import type { Statistic } from '../src/enumerate/plugin.js';
 import type { OrderedSetSuperpartition } from '../objects/types.js';
@@ -45,7 +45,7 @@ export const osspInv: Statistic<OrderedSetSuperpartition> = {
   id: 'ossp-inv',
   family: FAMILY,
   description: 'inv of the underlying ordered set partition (bars ignored)',
-  source: 'MATH.md §4; Remmel–Wilson, J. Combin. Theory Ser. A (2015)',
+  source: 'Remmel–Wilson, J. Combin. Theory Ser. A (2015); Haglund–Remmel–Wilson, Trans. Amer. Math. Soc. 370 (2018)',
   examples: [
     [P1, 1],
     [P2, 2],

@@ -1,6 +1,6 @@
 /**
  * area and dinv of parking functions (labelled Dyck paths), as in the shuffle theorem
- * (MATH.md §3): ∇e_n = Σ q^{dinv} t^{area} F_{iDes(reading word)} (Carlsson–Mellit,
+ * ∇e_n = Σ q^{dinv} t^{area} F_{iDes(reading word)} (Carlsson–Mellit,
  * J. Amer. Math. Soc. 31 (2018); statistics from Haglund's book, AMS 2008).
  * Rows are counted bottom to top; a_i is the area of row i and l_i its car. dinv counts
  * pairs of rows i < j with a_i = a_j and l_i < l_j, or a_i = a_j + 1 and l_i > l_j.
@@ -20,7 +20,7 @@ function dinvOf(a: readonly number[], l: readonly number[]): number {
   return s;
 }
 
-const SOURCE = 'Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, AMS 2008; MATH.md §3';
+const SOURCE = 'Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, AMS 2008; Carlsson–Mellit, A proof of the shuffle conjecture, J. Amer. Math. Soc. 31 (2018)';
 
 export const parkingArea: Statistic<LabelledDyckPath> = {
   id: 'parking-area',
@@ -54,7 +54,7 @@ export const parkingDinv: Statistic<LabelledDyckPath> = {
   compute: (pf) => dinvOf(areaSequence(pf.path), pf.labels),
 };
 
-const RISE = 'Haglund–Remmel–Wilson, "The Delta Conjecture", Trans. Amer. Math. Soc. 370 (2018), rise version; MATH.md §3';
+const RISE = 'Haglund–Remmel–Wilson, "The Delta Conjecture", Trans. Amer. Math. Soc. 370 (2018), rise version';
 
 export const decoratedArea: Statistic<DecoratedLabelledDyckPath> = {
   id: 'decorated-area',

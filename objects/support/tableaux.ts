@@ -62,7 +62,8 @@ export function isStandard(t: readonly (readonly number[])[], shape?: Partition)
 /**
  * The row reading word, rows from the bottom (English: last row) to the top, each left
  * to right: i+1 comes before i exactly when i+1 lies in a lower row, so its inverse
- * descent set is the descent set of the tableau (Σ_T F_{Des T} = s_λ, MATH.md §2).
+ * descent set is the descent set of the tableau (Σ_T F_{Des T} = s_λ, Stanley, Enumerative
+ * Combinatorics vol. 2, §7.19).
  */
 export function rowReadingWord(t: readonly (readonly number[])[]): number[] {
   return [...t].reverse().flat();

@@ -1,6 +1,7 @@
 /**
- * q-analogs (MATH.md §1): q-integers, q-factorials, q-binomials, q-multinomials and
- * q-Stirling numbers of the second kind. All results are exact polynomials in q.
+ * q-analogs (common practice; Stanley, Enumerative Combinatorics vol. 1, 2nd ed., ch. 1):
+ * q-integers, q-factorials, q-binomials, q-multinomials and q-Stirling numbers of the second
+ * kind. All results are exact polynomials in q.
  */
 import { InputError } from './errors.js';
 import { Poly } from './poly.js';
@@ -59,7 +60,7 @@ export function qMultinomial(parts: readonly number[]): Poly {
 
 const stirlingCache = new Map<string, Poly>();
 
-/** q-Stirling Stir_q(n,k): Stir_q(n,k) = Stir_q(n−1,k−1) + [k]_q Stir_q(n−1,k) (MATH.md §1). */
+/** q-Stirling Stir_q(n,k): Stir_q(n,k) = Stir_q(n−1,k−1) + [k]_q Stir_q(n−1,k) (Carlitz, q-Bernoulli numbers and polynomials, Duke Math. J. 15 (1948) — from memory). */
 export function qStirling2(n: number, k: number): Poly {
   checkNat('n', n);
   if (!Number.isInteger(k)) throw new InputError(`k must be an integer (got ${k})`, 'k');
@@ -74,7 +75,7 @@ export function qStirling2(n: number, k: number): Poly {
   return v;
 }
 
-/** [k]_q! · Stir_q(n,k): the q-count of ordered set partitions of [n] into k blocks (MATH.md §4). */
+/** [k]_q! · Stir_q(n,k): the q-count of ordered set partitions of [n] into k blocks (Remmel–Wilson, J. Combin. Theory Ser. A (2015); Haglund–Remmel–Wilson, Trans. Amer. Math. Soc. 370 (2018)). */
 export function qOrderedStirling(n: number, k: number): Poly {
   return qFactorial(Math.max(k, 0)).mul(qStirling2(n, k));
 }

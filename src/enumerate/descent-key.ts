@@ -1,6 +1,8 @@
 /**
  * The inverse descent set of a word, the index of Gessel's fundamental quasisymmetric
- * function in Frobenius-level sums (MATH.md §2–3: Σ q^stat F_{n, iDes(reading word)}).
+ * function in Frobenius-level sums (Stanley, Enumerative Combinatorics vol. 2, §7.19; as in
+ * Carlsson–Mellit, A proof of the shuffle conjecture, J. Amer. Math. Soc. 31 (2018):
+ * Σ q^stat F_{n, iDes(reading word)}).
  * A word with repeated letters is first standardized (equal letters numbered left to
  * right), so iDes = { i : the letter numbered i+1 stands left of the one numbered i }.
  */

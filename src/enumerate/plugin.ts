@@ -1,5 +1,6 @@
 /**
- * The plug-in shapes every family, statistic and transform follows (DESIGN.md).
+ * The plug-in shapes every family, statistic and transform follows (DEVELOPERS.md, "Families,
+ * transforms and the registries").
  * Registries (objects/index.ts, statistics/index.ts) list them; contract tests run
  * every entry through the same checks.
  */

@@ -1,6 +1,6 @@
 /**
- * All graded pieces of a derivative closure for one Young-subgroup task in one pass
- * (design note): for each seed term γ, every S_μ-orbit representative of one side — the
+ * All graded pieces of a derivative closure for one Young-subgroup task in one pass:
+ * for each seed term γ, every S_μ-orbit representative of one side — the
  * operator monomial ∂x^α ∂y^β ∂θ_T or the target γ − g, whichever has strict representatives —
  * contributes c(γ)·Π γ!/(γ−α)!·(θ sign)·(fold sign) at (row = operator class, column = target
  * class); the other side is folded (sorted block by block as the enumeration completes each
@@ -82,7 +82,7 @@ export class DerivativeMatrixBuilder {
     this.block = blockOf(n, task.blocks);
     // In each block, enumerate the side whose fold kills repeated θ-free letters (strict
     // representatives, far fewer); fold the other. The operator side folds with the seed's
-    // character folded in (design note: C(σg) = χ(σ) σ C(g)).
+    // character folded in (the closure map intertwines: C(σg) = χ(σ) σ C(g)).
     this.repIsOp = new Uint8Array(n);
     this.foldAlt = new Uint8Array(n);
     this.repKill = new Uint8Array(n);

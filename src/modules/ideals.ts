@@ -1,9 +1,12 @@
 /**
- * Generators of the built-in ideals (MATH.md §4) and of typed ones:
+ * Generators of the built-in ideals and of typed ones:
  * - `coinvariant`: the positive-degree S_n-invariants in the chosen variables, generated (over
  *   Q, and over F_p for p > n) by the polarized power sums Σ_i x_i^a y_i^b θ_i^c, c ∈ {0,1},
- *   0 < a + b + c, a + b ≤ n (for x alone: p_1..p_n; with θ the Σ x_i^a θ_i, a < n, are needed);
- * - `generalized-coinvariant`: x_1^k, …, x_n^k, e_n, e_{n−1}, …, e_{n−k+1} (x only);
+ *   0 < a + b + c, a + b ≤ n (for x alone: p_1..p_n; with θ the Σ x_i^a θ_i, a < n, are needed)
+ *   (common practice);
+ * - `generalized-coinvariant`: x_1^k, …, x_n^k, e_n, e_{n−1}, …, e_{n−k+1} (x only; Haglund–
+ *   Rhoades–Shimozono, Ordered set partitions, generalized coinvariant algebras, and the Delta
+ *   Conjecture, Adv. Math. 329 (2018));
  * - `generators`: typed superpolynomials.
  */
 import { InputError } from '../core/errors.js';

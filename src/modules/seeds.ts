@@ -1,5 +1,6 @@
 /**
- * Seeds of closure modules (MATH.md §4): the classical Vandermonde, the superspace
+ * Seeds of closure modules (Rhoades–Wilson, Vandermondes in superspace, Trans. Amer. Math.
+ * Soc. (2020) — from memory): the classical Vandermonde, the superspace
  * Vandermonde δ_{n,k} with height s, the θ-staircase, any super-monomial (antisymmetrized
  * or symmetrized), and any typed superpolynomial (optionally (anti)symmetrized).
  */

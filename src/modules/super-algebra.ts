@@ -1,6 +1,7 @@
 /**
  * Superpolynomials as Maps from packed super-monomials (SuperSpace) to coefficients, with
- * the operations of MATH.md §4: products with the θ sign rule, ∂/∂x_i, ∂/∂y_i, ∂/∂θ_i,
+ * the operations of superspace (Rhoades–Wilson, Vandermondes in superspace, Trans. Amer.
+ * Math. Soc. (2020)): products with the θ sign rule, ∂/∂x_i, ∂/∂y_i, ∂/∂θ_i,
  * polarizations Σ_i y_i (∂/∂x_i)^j and the diagonal S_n action with its re-sorting sign.
  */
 import type { Coeffs } from './coefficients.js';

@@ -1,11 +1,11 @@
 /**
- * Which subgroup computes what (design note "Frobenius without full bases", widened): a task
+ * Which subgroup computes what: a task
  * is a product S_μ × S_ν of symmetric groups on consecutive blocks, with the trivial character
  * on the μ-blocks and the sign on the ν-blocks; the dimension of the vectors of M on which it
  * acts by that character is ⟨Frob(M), h_μ e_ν⟩ = Σ_λ ⟨s_λ, h_μ e_ν⟩ m_λ. Costs fall roughly
  * with the cube of the group order, so the plan takes functionals h_μ e_ν by decreasing
  * group order, keeping each one that is independent of those kept, until the pairing matrix
- * is invertible. Pure h_λ or e_λ, as in the note, are the special cases ν = ∅ and μ = ∅;
+ * is invertible. Pure h_λ or e_λ are the special cases ν = ∅ and μ = ∅;
  * mixed ones replace the small groups of the middle partitions (n = 9: h_5 e_4, group 2880,
  * gives m_{6111} + m_{51111}, where S_{51111} has order 120). The multiplicities are then
  * the exact solution of the integer system.

@@ -86,7 +86,7 @@ export function seriesAtOne(s: Series): bigint {
   }
 }
 
-/** The graded dimension ⟨F, p_1^n⟩ = Σ f^λ c_λ of a Frobenius series (MATH.md §2). */
+/** The graded dimension ⟨F, p_1^n⟩ = Σ f^λ c_λ of a Frobenius series (Macdonald, Symmetric Functions and Hall Polynomials, 2nd ed., ch. I §7). */
 export function hilbertOfSchur(s: Series): Series {
   if (s.kind !== 'schur') return s;
   let h = Poly.zero;

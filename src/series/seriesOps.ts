@@ -28,7 +28,7 @@ function reverseTo(p: Poly, d: number): Poly {
   return Poly.fromTerms(p.sortedTerms().map(([i, j, c]) => [d - i, j, c] as const));
 }
 
-/** ω(s_λ) = s_λ' (MATH.md §2). Only for Frobenius series. */
+/** ω(s_λ) = s_λ' (Macdonald, Symmetric Functions and Hall Polynomials, 2nd ed., ch. I). Only for Frobenius series. */
 export function omegaSeries(s: Series): Series {
   if (s.kind !== 'schur') throw new Error('ω applies to Frobenius series only');
   return schurSeries([...s.terms].map(([k, c]) => [conjugate(keyToPartition(k)), c] as const));

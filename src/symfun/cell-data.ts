@@ -1,5 +1,6 @@
 /**
- * Polynomials attached to a partition μ in French notation (MATH.md §3): for a cell c in
+ * Polynomials attached to a partition μ in French notation (Haglund, The q,t-Catalan numbers
+ * and the space of diagonal harmonics, AMS 2008, ch. 2 — from memory): for a cell c in
  * row r (from the bottom) and column j, a'(c) = j, l'(c) = r, a(c) = μ_r − 1 − j,
  * l(c) = μ'_j − 1 − r.
  *   B_μ = Σ_c q^{a'} t^{l'},  T_μ = Π_c q^{a'} t^{l'},  Π_μ = Π_{c ≠ (0,0)} (1 − q^{a'} t^{l'}),

@@ -1,6 +1,8 @@
 /**
  * A second route to H̃_μ, independent of the filling formula: at numeric q = q0, t = t0 the
- * characterisation (Haiman; MATH.md §3)
+ * characterisation (Haiman, Hilbert schemes, polygraphs, and the Macdonald positivity
+ * conjecture, J. Amer. Math. Soc. 14 (2001); Haglund, The q,t-Catalan numbers and the space
+ * of diagonal harmonics, AMS 2008, ch. 2 — from memory)
  *   H̃_μ[X(1−q)] ∈ span{s_λ : λ ≥ μ},  H̃_μ[X(1−t)] ∈ span{s_λ : λ ≥ μ′},  ⟨H̃_μ, s_(n)⟩ = 1
  * is a linear system over Q in the Schur coefficients; it is solved exactly by Gaussian
  * elimination, and its solution must be unique. Used to cross-check macdonald.ts.

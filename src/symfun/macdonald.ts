@@ -1,6 +1,7 @@
 /**
  * Modified Macdonald polynomials H̃_μ(X;q,t) by the filling formula of Haglund–Haiman–Loehr
- * (MATH.md §3), summed over standard fillings as Σ q^inv t^maj F_{iDes(reading word)}:
+ * (A combinatorial formula for Macdonald polynomials, J. Amer. Math. Soc. 18 (2005)), summed
+ * over standard fillings as Σ q^inv t^maj F_{iDes(reading word)}:
  * a filling with repeated entries standardises (equal entries increasing in reading order)
  * without changing inv or maj. The fillings are generated cell by cell in reading order
  * with inv, maj and the inverse descent set kept incrementally, tallied in plain numbers,

@@ -1,6 +1,7 @@
 /**
  * Operators diagonal in the modified Macdonald basis: ∇ H̃_μ = T_μ H̃_μ,
- * Δ_f H̃_μ = f[B_μ] H̃_μ, Δ'_f H̃_μ = f[B_μ − 1] H̃_μ (MATH.md §3).
+ * Δ_f H̃_μ = f[B_μ] H̃_μ, Δ'_f H̃_μ = f[B_μ − 1] H̃_μ (as in Haglund–Remmel–Wilson, The Delta
+ * Conjecture, Trans. Amer. Math. Soc. 370 (2018)).
  * A homogeneous F of degree n is expanded as F = Σ_μ ⟨F, H̃_μ⟩_* / w_μ · H̃_μ, by the
  * orthogonality ⟨H̃_λ, H̃_μ⟩_* = δ_{λμ} w_μ of the *-scalar product
  * ⟨p_λ, p_μ⟩_* = δ (−1)^{n−ℓ(μ)} z_μ Π_i (1 − q^{μ_i})(1 − t^{μ_i}) (verified in the tests by
