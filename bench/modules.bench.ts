@@ -44,7 +44,7 @@ function report(name: string, total: number, target: number): void {
   console.log(`  => ${name}: ${total.toFixed(1)} s (target ${target} s, ratio ${(total / target).toFixed(2)}), peak RSS ${peakMB().toFixed(0)} MB`);
 }
 
-/** The graded Frobenius series against Σ_T q^maj(T) s_shape(T) (MATH.md §4). */
+/** The graded Frobenius series against Σ_T q^maj(T) s_shape(T) (Lusztig–Stanley; Stanley, Bull. Amer. Math. Soc. 1 (1979) — from memory). */
 function majCheck(r: ModuleResult, n: number): string {
   const expected = majFrobenius(n);
   const same = partitionList(n).every((l, i) => Poly.fromTerms(r.cells.map((c) => [c.degree[0], 0, BigInt(c.multiplicities![i]!)] as const)).equals(expected.get(partitionKey(l)) ?? Poly.zero));
@@ -93,7 +93,8 @@ async function polarized(n: number, ks: readonly number[]): Promise<number> {
     const [r, wall, cpu] = await timed({ seed: 'superspace-vandermonde', n, k, ops });
     total += wall;
     line(`δ_{${n},${k}} (x, y, P1..P${n - 1})`, r, wall, cpu);
-    // Δ'_{e_{k−1}} e_n (MATH.md §4: theorem for k = n, conjecture otherwise)
+    // Δ'_{e_{k−1}} e_n (Haiman, Invent. Math. 149 (2002) for k = n; a conjecture of Rhoades–Wilson,
+    // Trans. Amer. Math. Soc. (2020) otherwise)
     const t0 = performance.now();
     const g = k === 1 ? SymFun.one : SymFun.basisElement('e', [k - 1]);
     const expected = new Map<string, Poly>();

@@ -24,7 +24,7 @@ describe('gradus command line (child process)', () => {
     const r = runCli(['qseries', 'stirling', '--n', '4', '--k', '2', '--json']);
     expect(r.code).toBe(0);
     const doc = JSON.parse(r.stdout);
-    // Stir_q(4,2) = 3 + 3q + q^2 (MATH.md §1 recurrence, worked by hand)
+    // Stir_q(4,2) = 3 + 3q + q^2 (Carlitz's q-Stirling recurrence, worked by hand)
     expect(doc.series).toEqual([3, 3, 1]);
     expect(doc.atOne).toBe(7);
   });

@@ -20,7 +20,7 @@ describe('gradus dist', { timeout: 60_000 }, () => {
     expect(doc.params).toEqual({ n: 3 });
     expect(doc.statistics).toEqual(['dyck-dinv', 'dyck-area']);
     expect(doc.count).toBe(5);
-    // C_3(q,t) = q³ + q²t + qt² + t³ + qt (MATH.md §3): [i][j] = coefficient of q^i t^j
+    // C_3(q,t) = q³ + q²t + qt² + t³ + qt (q,t-Catalan: Haglund, AMS 2008, ch. 3 — from memory): [i][j] = coefficient of q^i t^j
     expect(doc.series).toEqual([
       [0, 0, 0, 1],
       [0, 1, 1, 0],
@@ -29,7 +29,7 @@ describe('gradus dist', { timeout: 60_000 }, () => {
     ]);
   });
 
-  it('--frobenius gives the F-expansion of ∇e_2 = s_2 + (q+t) s_11 = F_∅ + (q+t) F_{1} (MATH.md §3)', () => {
+  it('--frobenius gives the F-expansion of ∇e_2 = s_2 + (q+t) s_11 = F_∅ + (q+t) F_{1} (Haglund, AMS 2008, ch. 2 — from memory)', () => {
     const r = runCli(['dist', 'parking-functions', 'parking-dinv', '--stat2', 'parking-area', '--n', '2', '--frobenius', '--json']);
     expect(r.code).toBe(0);
     const doc = JSON.parse(r.stdout);
@@ -42,11 +42,11 @@ describe('gradus dist', { timeout: 60_000 }, () => {
     expect(text.stdout).toContain('F{1}: q + 1');
   });
 
-  it('--transform and t:s names; ordered set partitions give [k]_q! Stir_q(n,k) (MATH.md §4)', () => {
+  it('--transform and t:s names; ordered set partitions give [k]_q! Stir_q(n,k) (Haglund–Remmel–Wilson 2018; Rhoades 2018)', () => {
     const r = runCli(['dist', 'permutations', 'foata:inversions', '--n', '3', '--json']);
     expect(JSON.parse(r.stdout).series).toEqual([1, 2, 2, 1]);
     const o = runCli(['dist', 'ordered-set-partitions', 'osp-minimaj', '--n', '4', '--k', '2', '--json']);
-    // [2]_q Stir_q(4,2) = (1+q)(3 + 3q + q²) = 3 + 6q + 4q² + q³ (MATH.md §1 recurrence, by hand)
+    // [2]_q Stir_q(4,2) = (1+q)(3 + 3q + q²) = 3 + 6q + 4q² + q³ (Carlitz's q-Stirling recurrence, by hand)
     expect(JSON.parse(o.stdout).series).toEqual([3, 6, 4, 1]);
   });
 
@@ -55,7 +55,7 @@ describe('gradus dist', { timeout: 60_000 }, () => {
     expect(r.code).toBe(0);
     const doc = JSON.parse(r.stdout);
     expect(doc.provenance.method).toContain('2 worker threads');
-    // [3]_q! Stir_q(5,3) (MATH.md §4), at q = 1: 3!·S(5,3) = 150
+    // [3]_q! Stir_q(5,3) (Remmel–Wilson 2015; Haglund–Remmel–Wilson 2018), at q = 1: 3!·S(5,3) = 150
     expect(doc.count).toBe(150);
     expect(doc.series).toEqual(qOrderedStirling(5, 3).toQArray().map(Number));
   });

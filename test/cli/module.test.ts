@@ -12,7 +12,7 @@ describe('gradus module', () => {
     expect(doc.k).toBe(2);
     expect(doc.ops).toEqual(['x', 'theta']);
     expect(doc.axes).toEqual(['x', 'theta']);
-    // 2!·S(3,2) = 6 in each θ row (MATH.md §4); the half-turn makes the table symmetric
+    // 2!·S(3,2) = 6 in each θ row (Rhoades–Wilson, Trans. Amer. Math. Soc. (2020) — from memory); the half-turn makes the table symmetric
     expect(doc.hilbert).toEqual([[1, 2], [3, 3], [2, 1]]);
     expect(doc.hilbertSeries).toEqual(doc.hilbert);
     expect(Object.keys(doc.schur)).toEqual(['3', '2,1', '1,1,1']);
@@ -26,7 +26,7 @@ describe('gradus module', () => {
     const r = runCli(['module', '--seed', 'vandermonde', '--n', '3', '--ops', 'x', '--frobenius', '--json']);
     const doc = JSON.parse(r.stdout);
     expect(doc.axes).toEqual(['x']);
-    expect(doc.hilbert).toEqual([1, 2, 2, 1]); // [3]_q! (Lusztig–Stanley, MATH.md §4)
+    expect(doc.hilbert).toEqual([1, 2, 2, 1]); // [3]_q! (Lusztig–Stanley; Stanley, Bull. Amer. Math. Soc. 1 (1979) — from memory)
     expect(doc.schur['2,1']).toEqual([0, 1, 1, 0]);
   });
   it('text output: table, Frobenius, findings, provenance', () => {
@@ -53,7 +53,7 @@ describe('gradus module', () => {
 });
 
 describe('gradus quotient', () => {
-  it('generalized coinvariant ring: dimension k!·S(n,k) (MATH.md §4)', () => {
+  it('generalized coinvariant ring: dimension k!·S(n,k) (Haglund–Rhoades–Shimozono, Adv. Math. 329 (2018))', () => {
     const r = runCli(['quotient', '--ideal', 'generalized-coinvariant', '--n', '4', '--k', '2', '--frobenius', '--json']);
     expect(r.code).toBe(0);
     const doc = JSON.parse(r.stdout);
@@ -61,7 +61,7 @@ describe('gradus quotient', () => {
     expect(doc.dimension).toBe(14);
     expect(doc.axes).toEqual(['x']);
   });
-  it('diagonal coinvariants n = 3: dimension 16 = (n+1)^(n−1) (Haiman 2002, MATH.md §3)', () => {
+  it('diagonal coinvariants n = 3: dimension 16 = (n+1)^(n−1) (Haiman, Invent. Math. 149 (2002))', () => {
     const r = runCli(['quotient', '--ideal', 'coinvariant', '--n', '3', '--vars', 'x,y', '--json']);
     const doc = JSON.parse(r.stdout);
     expect(doc.dimension).toBe(16);

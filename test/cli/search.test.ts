@@ -1,6 +1,7 @@
 /**
  * Acceptance through the command line (child processes): the search finds the known
- * combinatorial formulas of MATH.md from the module and symmetric-function engines.
+ * combinatorial formulas of the literature (sources beside each case) from the module and
+ * symmetric-function engines.
  */
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -53,7 +54,7 @@ function search(args: string[]): { code: number; doc: { matches: Match[]; recogn
 }
 
 describe('gradus search (acceptance)', () => {
-  it('δ_{n,k} under x-derivatives, n ≤ 6, all k: an ordered-set-partition statistic and the q-Stirling recurrence (MATH.md §4)', () => {
+  it('δ_{n,k} under x-derivatives, n ≤ 6, all k: an ordered-set-partition statistic and the q-Stirling recurrence (Rhoades–Wilson, Vandermondes in superspace, Trans. Amer. Math. Soc. (2020) — from memory)', () => {
     const r = search(['--n-range', '1..6', '--from', 'module --seed superspace-vandermonde --ops x --n {n} --k {k}', '--take', 'hilbert', '--save', join(dir, 'delta-x-hilbert.search.json')]);
     expect(r.code, r.stderr).toBe(0);
     const m = r.doc.matches.find((x) => x.family === 'ordered-set-partitions' && x.combine === 'single' && x.variant === 'as-given');
@@ -66,7 +67,7 @@ describe('gradus search (acceptance)', () => {
     expect(info.results).toEqual([{ kind: 'module', count: 21 }]);
     exportFixtures('delta-x-hilbert');
   }, 120_000);
-  it('the Vandermonde module, n ≤ 6: Σ q^maj s_shape over standard Young tableaux first (Lusztig–Stanley, MATH.md §4)', () => {
+  it('the Vandermonde module, n ≤ 6: Σ q^maj s_shape over standard Young tableaux first (Lusztig–Stanley; Stanley, Bull. Amer. Math. Soc. 1 (1979) — from memory)', () => {
     const r = search(['--n-range', '1..6', '--from', 'module --seed vandermonde --ops x --n {n} --frobenius', '--save', join(dir, 'vandermonde-frobenius.search.json')]);
     expect(r.code, r.stderr).toBe(0);
     const first = r.doc.matches[0]!;
@@ -74,7 +75,7 @@ describe('gradus search (acceptance)', () => {
     expect(first.verified).toBe('n = 1..6');
     exportFixtures('vandermonde-frobenius');
   }, 120_000);
-  it('⟨∇e_n, e_n⟩, n ≤ 6: a pair of Dyck-path statistics, area with dinv or bounce (MATH.md §3, q,t-Catalan)', () => {
+  it('⟨∇e_n, e_n⟩, n ≤ 6: a pair of Dyck-path statistics, area with dinv or bounce (q,t-Catalan: Haglund, AMS 2008, ch. 3 — from memory)', () => {
     const r = search(['--n-range', '1..6', '--from', 'sym "nabla(e({n}))"', '--take', 'sign', '--save', join(dir, 'nabla-en-sign.search.json')]);
     expect(r.code, r.stderr).toBe(0);
     const pairs = r.doc.matches.filter((x) => x.family === 'dyck-paths' && x.transform === '' && x.combine === 'joint').map((x) => x.statistics.join('&'));

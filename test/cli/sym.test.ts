@@ -5,7 +5,7 @@ describe('gradus sym (child process)', () => {
   it('prints ∇e_2 in the Schur basis', { timeout: 30_000 }, () => {
     const r = runCli(['sym', 'nabla(e(2))']);
     expect(r.code).toBe(0);
-    expect(r.stdout).toContain('s(2) + (q + t)*s(1,1)'); // MATH.md §3: ∇e_2 = s_2 + (q+t) s_11
+    expect(r.stdout).toContain('s(2) + (q + t)*s(1,1)'); // ∇e_2 = s_2 + (q+t) s_11 (Haglund, AMS 2008, ch. 2 — from memory)
   });
   it('a parse error names its column and exits 2', { timeout: 30_000 }, () => {
     const r = runCli(['sym', 'e(2)*(q+t']);

@@ -45,7 +45,7 @@ describe('q-analogs', () => {
     for (let n = 0; n <= 14; n++)
       for (let k = 0; k <= n; k++) expect(Number(qStirling2(n, k).sumCoefficients())).toBe(Number(stirlingS2(n, k)));
   });
-  it('Stir_q(4,2) = 3 + 3q + q^2 … from the recurrence of MATH.md §1 by hand: Stir_q(3,1) + [2]_q Stir_q(3,2)', () => {
+  it('Stir_q(4,2) = 3 + 3q + q^2 … from the recurrence of Carlitz (Duke Math. J. 15 (1948) — from memory) by hand: Stir_q(3,1) + [2]_q Stir_q(3,2)', () => {
     // Stir_q(3,2) = Stir_q(2,1) + [2]_q Stir_q(2,2) = 1 + (1+q) = 2 + q
     expect(qStirling2(3, 2).toQArray()).toEqual([2n, 1n]);
     // Stir_q(4,2) = 1 + (1+q)(2+q) = 3 + 3q + q^2

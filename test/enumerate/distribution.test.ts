@@ -64,7 +64,7 @@ describe('distribution engine', () => {
       expect(JSON.stringify(two.frobenius?.terms.map((t) => [t.set, t.series.toString()]))).toBe(JSON.stringify(one.frobenius?.terms.map((t) => [t.set, t.series.toString()])));
     }
     const osp = await computeDistribution(cases[1]!, { workers: 2 });
-    expect(osp.series.equals(qOrderedStirling(6, 3))).toBe(true); // MATH.md §4
+    expect(osp.series.equals(qOrderedStirling(6, 3))).toBe(true); // Remmel–Wilson, JCTA (2015)
   }, 60_000);
 
   it('reports progress with the total', async () => {

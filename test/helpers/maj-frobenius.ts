@@ -1,7 +1,8 @@
 /**
  * Σ_T q^maj(T) s_shape(T) over the standard Young tableaux of size n (the graded Frobenius
- * series of the Vandermonde's derivative closure, MATH.md §4), computed independently of the
- * engines: tableaux by adding n to a corner, maj from the descents i (i + 1 in a lower row).
+ * series of the Vandermonde's derivative closure: Lusztig–Stanley; Stanley, Bull. Amer. Math.
+ * Soc. 1 (1979) — from memory), computed independently of the engines: tableaux by adding n
+ * to a corner, maj from the descents i (i + 1 in a lower row).
  */
 import { partitionKey } from '../../src/core/partitions.js';
 import { Poly } from '../../src/core/poly.js';

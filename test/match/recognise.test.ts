@@ -77,7 +77,7 @@ describe('q-products', () => {
 });
 
 describe('recurrences', () => {
-  it('finds the q-Stirling recurrence on Stir_q and on [k]_q!·Stir_q (MATH.md §1, §4)', () => {
+  it('finds the q-Stirling recurrence on Stir_q and on [k]_q!·Stir_q (Carlitz, Duke Math. J. 15 (1948) — from memory; Remmel–Wilson 2015)', () => {
     const s = findRecurrences(grid(6, (n, k) => qStirling2(n, k)));
     expect(s[0]!.name).toBe('q-Stirling recurrence');
     expect(s[0]!.text).toBe('f(n,k) = f(n-1,k-1) + [k]_q · f(n-1,k)');

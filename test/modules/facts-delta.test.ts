@@ -1,10 +1,12 @@
 /**
- * Closures of δ_{n,k} against the symmetric-function engine's Δ'_{e_{k−1}} e_n (MATH.md §4):
+ * Closures of δ_{n,k} against the symmetric-function engine's Δ'_{e_{k−1}} e_n:
  * - under ∂x, ∂y and the polarizations P_1..P_{n−1}, bigraded by (x, y): Δ'_{e_{k−1}} e_n
- *   (Haiman's theorem for k = n, a conjecture otherwise — MATH.md reports it confirmed for
- *   n ≤ 5), q marking x-degree and t marking y-degree, no twist;
+ *   (Haiman, Invent. Math. 149 (2002) for k = n; otherwise a conjecture of Rhoades–Wilson,
+ *   Vandermondes in superspace, Trans. Amer. Math. Soc. (2020), compared here for n ≤ 4),
+ *   q marking x-degree and t marking y-degree, no twist;
  * - under ∂x alone, graded by x-degree: Δ'_{e_{k−1}} e_n at t = 0 with q marking x-degree,
- *   and no further twist (MATH.md §4).
+ *   and no further twist (we name no publication for this normalisation: checked here against
+ *   the symmetric-function engine).
  */
 import { describe, expect, it } from 'vitest';
 import { partitionKey, partitionList } from '../../src/core/partitions.js';

@@ -1,6 +1,7 @@
 /**
- * x- and θ-derivative closure of δ_{n,k} (MATH.md §4, "Ordered set partitions, generalized
- * coinvariant algebras, and the Delta Conjecture", Adv. Math. 329 (2018), as quoted there):
+ * x- and θ-derivative closure of δ_{n,k} (Haglund–Rhoades–Shimozono, "Ordered set partitions,
+ * generalized coinvariant algebras, and the Delta Conjecture", Adv. Math. 329 (2018); Rhoades–
+ * Wilson, Vandermondes in superspace, Trans. Amer. Math. Soc. (2020) — from memory):
  * the full-θ row is the x-closure, the θ-degree-0 row is the generalized coinvariant ring
  * computed independently by the quotient side; the ω + half-turn and unimodality findings are
  * reported (the first is a published claim, the second a conjecture checked up to n = 7).

@@ -1,5 +1,5 @@
 /**
- * Facts of MATH.md §4 for x-derivative closures and the coinvariant quotient, with sources.
+ * Published facts on x-derivative closures and the coinvariant quotient, each with its source.
  */
 import { stirlingS2 } from 'mathjs';
 import { describe, expect, it } from 'vitest';
@@ -16,7 +16,7 @@ function qFact(n: number): Poly {
   for (let i = 1; i <= n; i++) r = r.mul(Poly.fromQCoeffs(new Array<number>(i).fill(1)));
   return r;
 }
-/** Stir_q(n,k) by the recurrence of MATH.md §1, computed here. */
+/** Stir_q(n,k) by Carlitz's q-Stirling recurrence, computed here. */
 function qStir(n: number, k: number): Poly {
   if (n === 0 && k === 0) return Poly.one;
   if (n === 0 || k === 0) return Poly.zero;
@@ -26,7 +26,7 @@ function hilbert(cells: readonly ModuleCell[]): Poly {
   return Poly.fromTerms(cells.map((c) => [c.degree[0], 0, BigInt(c.dim)] as const));
 }
 
-describe('x-closure of the Vandermonde (Lusztig–Stanley, MATH.md §4)', () => {
+describe('x-closure of the Vandermonde (Lusztig–Stanley; Stanley, Invariants of finite groups and their applications to combinatorics, Bull. Amer. Math. Soc. 1 (1979) — from memory)', () => {
   for (const n of [1, 2, 3, 4, 5]) {
     it(`n = ${n}: Hilbert series [n]_q!, Frobenius Σ_T q^maj(T) s_shape(T)`, () => {
       const r = computeModule({ seed: 'vandermonde', n, ops: ['x'] }, { frobenius: true });
@@ -43,7 +43,7 @@ describe('x-closure of the Vandermonde (Lusztig–Stanley, MATH.md §4)', () => 
   }
 });
 
-describe('x-closure of δ_{n,k} (MATH.md §4; dimension against mathjs stirlingS2)', () => {
+describe('x-closure of δ_{n,k} (Rhoades–Wilson, Vandermondes in superspace, Trans. Amer. Math. Soc. (2020) — from memory; dimension against mathjs stirlingS2)', () => {
   for (let n = 1; n <= 5; n++) {
     for (let k = 1; k <= n; k++) {
       it(`n = ${n}, k = ${k}: dimension k!·S(n,k), Hilbert [k]_q!·Stir_q(n,k)`, () => {

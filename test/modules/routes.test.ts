@@ -1,7 +1,7 @@
 /**
  * The three routes agree: Young-subgroup ranks (derivative closures), the iterated closure
  * with folded bases, and the exact route over Q with characters by traces on a reduced
- * echelon basis (design note, "Checks that keep this honest"); Q against F_p.
+ * echelon basis; Q against F_p.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

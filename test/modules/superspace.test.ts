@@ -1,4 +1,4 @@
-/** Monomial encoding and the sign rules of MATH.md §4. */
+/** Monomial encoding and the sign rules of superspace (θ's anticommute: common practice; Rhoades–Wilson, Vandermondes in superspace, Trans. Amer. Math. Soc. (2020)). */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { primeCoeffs } from '../../src/modules/coefficients.js';
@@ -47,7 +47,7 @@ describe('θ sign rules', () => {
       }),
     );
   });
-  it('∂θ_T = ∂θ_t1 ∘ … ∘ ∂θ_tk agrees with applying single derivatives (MATH.md §4 rule)', () => {
+  it('∂θ_T = ∂θ_t1 ∘ … ∘ ∂θ_tk agrees with applying single derivatives (the left θ-derivative sign rule, common practice)', () => {
     const sp = new SuperSpace(5, false, true, 2);
     const alg = new SuperAlgebra(sp, primeCoeffs(101));
     fc.assert(
@@ -76,7 +76,7 @@ describe('θ sign rules', () => {
     );
   });
   it('permuteMask: the sign of re-sorting θ_{σ(i1)}…θ_{σ(ir)}', () => {
-    // σ = (0 1) on θ_0 θ_1 gives θ_1 θ_0 = −θ_0 θ_1 (MATH.md §4, by hand)
+    // σ = (0 1) on θ_0 θ_1 gives θ_1 θ_0 = −θ_0 θ_1 (θ's anticommute, by hand)
     expect(permuteMask([1, 0, 2], 0b011)).toEqual([0b011, -1]);
     expect(permuteMask([1, 0, 2], 0b101)).toEqual([0b110, 1]);
   });

@@ -50,7 +50,7 @@ describe('ordered multiset partitions', () => {
 });
 
 describe('decorated Dyck paths', () => {
-  it('labelled, decorated valleys: no decoration gives the (n+1)^(n−1) parking functions (Konheim–Weiss); n − 1 decorations give one object (Δ′_{e_0} e_n = e_n, MATH.md §3)', () => {
+  it('labelled, decorated valleys: no decoration gives the (n+1)^(n−1) parking functions (Konheim–Weiss); n − 1 decorations give one object (Δ′_{e_0} e_n = e_n, Haglund–Remmel–Wilson, Trans. Amer. Math. Soc. 370 (2018))', () => {
     for (let n = 1; n <= 5; n++) {
       expect(both('valley-decorated-dyck-paths', { n, k: n })).toEqual([(n + 1) ** (n - 1), (n + 1) ** (n - 1)]);
       expect(both('valley-decorated-dyck-paths', { n, k: 1 })).toEqual([1, 1]);

@@ -110,7 +110,7 @@ describe('counts against outside references', () => {
       expect(s).toBe(multinomial(content));
     }
   });
-  it('decorated labelled Dyck paths: no decoration gives the parking functions; n−1 decorations give one path (Δ′_{e_0} e_n = e_n, MATH.md §3)', () => {
+  it('decorated labelled Dyck paths: no decoration gives the parking functions; n−1 decorations give one path (Δ′_{e_0} e_n = e_n, Haglund–Remmel–Wilson, Trans. Amer. Math. Soc. 370 (2018))', () => {
     for (let n = 1; n <= 5; n++) {
       expect(both('decorated-dyck-paths', { n, d: 0 })).toEqual([(n + 1) ** (n - 1), (n + 1) ** (n - 1)]);
       expect(both('decorated-dyck-paths', { n, k: 1 })).toEqual([1, 1]);

@@ -1,6 +1,7 @@
 /**
  * The reading-word conventions, checked through the formulas they serve (statistics are
- * computed inline here from their definitions in MATH.md §3): the shuffle theorem's
+ * computed inline here from their published definitions: dinv and area in Haglund, AMS 2008;
+ * inv and maj in Haglund–Haiman–Loehr, J. Amer. Math. Soc. 18 (2005)): the shuffle theorem's
  * ⟨∇e_n, e_n⟩ = C_n(q,t) picks the parking functions whose word is n…1, and the
  * Haglund–Haiman–Loehr sum over standard fillings gives H̃_μ (F-expansions are unique).
  */
@@ -58,7 +59,7 @@ describe('parking functions: reading word of the shuffle theorem', () => {
     const plain = Object.fromEntries([...m].map(([k, v]) => [k, Object.fromEntries(v)]));
     expect(plain).toEqual({ '': { '0,0': 1 }, '1': s21, '2': s21, '1,2': { '3,0': 1, '2,1': 1, '1,2': 1, '0,3': 1, '1,1': 1 } });
   });
-  it('word n…1 selects C_3(q,t) = q³ + q²t + qt² + t³ + qt (MATH.md §3)', () => {
+  it('word n…1 selects C_3(q,t) = q³ + q²t + qt² + t³ + qt (q,t-Catalan: Haglund, AMS 2008, ch. 3 — from memory)', () => {
     expect(Object.fromEntries(catalanPart(3))).toEqual({ '3,0': 1, '2,1': 1, '1,2': 1, '0,3': 1, '1,1': 1 });
   });
   it('for n = 4, 5 it selects a q,t-symmetric polynomial with C_n(1,1) = 14, 42 terms', () => {
@@ -71,7 +72,7 @@ describe('parking functions: reading word of the shuffle theorem', () => {
 });
 
 describe('standard fillings: reading word of the filling formula', () => {
-  /** inv and maj of MATH.md §3 on a French filling (rows[0] bottom). */
+  /** inv and maj of Haglund–Haiman–Loehr (J. Amer. Math. Soc. 18 (2005)) on a French filling (rows[0] bottom). */
   function invMaj(f: Filling): [number, number] {
     const rows = f.rows;
     const cells: [number, number][] = []; // reading order: top row first, left to right
@@ -108,7 +109,7 @@ describe('standard fillings: reading word of the filling formula', () => {
     return m;
   }
   const plain = (m: Map<string, Map<string, number>>) => Object.fromEntries([...m].map(([k, v]) => [k, Object.fromEntries(v)]));
-  it('H̃_(2) = s_2 + q s_11 and H̃_(11) = s_2 + t s_11 (MATH.md §3; s_2 = F_∅, s_11 = F_{1})', () => {
+  it('H̃_(2) = s_2 + q s_11 and H̃_(11) = s_2 + t s_11 (Haglund, AMS 2008, ch. 2 — from memory; s_2 = F_∅, s_11 = F_{1})', () => {
     expect(plain(expansion([2]))).toEqual({ '': { '0,0': 1 }, '1': { '1,0': 1 } });
     expect(plain(expansion([1, 1]))).toEqual({ '': { '0,0': 1 }, '1': { '0,1': 1 } });
   });
@@ -120,7 +121,7 @@ describe('standard fillings: reading word of the filling formula', () => {
       '1,2': { '1,1': 1 },
     });
   });
-  it('H̃_μ(q,t) = H̃_μ′(t,q) for μ = (3,1), (2,2) at n = 4 (MATH.md §3)', () => {
+  it('H̃_μ(q,t) = H̃_μ′(t,q) for μ = (3,1), (2,2) at n = 4 (Haglund, AMS 2008, ch. 2 — from memory)', () => {
     expect(plain(expansion([3, 1]))).toEqual(plain(expansion([2, 1, 1], true)));
     expect(plain(expansion([2, 2]))).toEqual(plain(expansion([2, 2], true)));
   });

@@ -36,14 +36,14 @@ describe('series', () => {
       }),
     );
   });
-  it('ω conjugates partitions: ω(s_3 + q s_21) = s_111 + q s_21 (MATH.md §2)', () => {
+  it('ω conjugates partitions: ω(s_3 + q s_21) = s_111 + q s_21 (Macdonald, Symmetric Functions and Hall Polynomials, 2nd ed., ch. I)', () => {
     const f = schurSeries([[[3], Poly.one], [[2, 1], Poly.q]]);
     const g = schurSeries([[[1, 1, 1], Poly.one], [[2, 1], Poly.q]]);
     expect(seriesEquals(omegaSeries(f), g)).toBe(true);
   });
   it('count at one and Hilbert series of a Frobenius series: s_21 has f = 2 (common practice)', () => {
     const f = schurSeries([[[3], Poly.one], [[2, 1], Poly.q.add(Poly.q.pow(2))], [[1, 1, 1], Poly.q.pow(3)]]);
-    // Σ_T q^maj(T) s_shape for n = 3 gives [3]_q! (Lusztig–Stanley, MATH.md §4)
+    // Σ_T q^maj(T) s_shape for n = 3 gives [3]_q! (Lusztig–Stanley; Stanley, Bull. Amer. Math. Soc. 1 (1979) — from memory)
     expect(seriesEquals(hilbertOfSchur(f), qSeries(qFactorial(3)))).toBe(true);
     expect(seriesAtOne(f)).toBe(6n);
   });
@@ -53,7 +53,7 @@ describe('series', () => {
     expect(isUnimodal(Poly.fromQCoeffs([1, 0, 1]))).toBe(false);
     expect(isPalindromic(Poly.fromQCoeffs([1, 2]))).toBe(false);
     expect(isUnimodal(Poly.fromQCoeffs([1, 3, 2, 4]))).toBe(false);
-    // Stir_q(4,2) = 3 + 3q + q^2: unimodal, not palindromic (MATH.md §1 recurrence, by hand)
+    // Stir_q(4,2) = 3 + 3q + q^2: unimodal, not palindromic (Carlitz's q-Stirling recurrence, by hand)
     expect(isUnimodal(qStirling2(4, 2))).toBe(true);
     expect(isPalindromic(qStirling2(4, 2))).toBe(false);
   });
@@ -78,7 +78,7 @@ describe('series', () => {
   it('reads the three data documents (dist, sym, module)', () => {
     const sym = { expression: 'x', degree: 2, basis: 's', terms: { '2': [[1]], '1,1': [[0, 1], [1]] } };
     expect(seriesFromDocument(sym, 'auto', 'sym').kind).toBe('schur');
-    // ⟨∇e_2, e_2⟩ = q + t (MATH.md §3: ∇e_2 = s_2 + (q+t) s_11)
+    // ⟨∇e_2, e_2⟩ = q + t (∇e_2 = s_2 + (q+t) s_11: Haglund, AMS 2008, ch. 2 — from memory)
     expect(seriesEquals(seriesFromDocument(sym, 'sign', 'sym'), qtSeries(Poly.q.add(Poly.t)))).toBe(true);
     const mod = { axes: ['x'], hilbertSeries: [1, 1], schur: { '2': [1], '1,1': [0, 1] } };
     expect(seriesEquals(seriesFromDocument(mod, 'hilbert', 'm'), qSeries(Poly.fromQCoeffs([1, 1])))).toBe(true);

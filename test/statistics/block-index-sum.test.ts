@@ -7,7 +7,7 @@ import { qStirling2 } from '../../src/core/qanalogs.js';
 import { blockIndexSum } from '../../statistics/block-index-sum.js';
 
 describe('block-index-sum on set partitions', () => {
-  it('has generating function Stir_q(n,k) over partitions with k blocks, n ≤ 7 (MATH.md §1 recurrence; S(n,k) from mathjs stirlingS2)', () => {
+  it('has generating function Stir_q(n,k) over partitions with k blocks, n ≤ 7 (the q-Stirling recurrence of Carlitz, Duke Math. J. 15 (1948) — from memory; S(n,k) from mathjs stirlingS2)', () => {
     const family = familyById('set-partitions');
     for (let n = 1; n <= 7; n++) {
       for (let k = 1; k <= n; k++) {

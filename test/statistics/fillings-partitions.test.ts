@@ -8,13 +8,13 @@ import { modifiedMacdonaldSchur } from '../../src/symfun/macdonald.js';
 import { partitionList } from '../../src/core/partitions.js';
 import { dist } from './dist-helper.js';
 
-describe('fillings: the Haglund–Haiman–Loehr statistics (MATH.md §3)', () => {
-  it('H̃_(21) at the level of x_1x_2x_3: 1 + 2q + 2t + qt (MATH.md §3: s_3 + (q+t)s_21 + qt s_111)', async () => {
+describe('fillings: the Haglund–Haiman–Loehr statistics (J. Amer. Math. Soc. 18 (2005))', () => {
+  it('H̃_(21) at the level of x_1x_2x_3: 1 + 2q + 2t + qt (H̃_(21) = s_3 + (q+t)s_21 + qt s_111: Haglund, AMS 2008, ch. 2 — from memory)', async () => {
     const d = await dist('fillings', { shape: [2, 1] }, ['filling-inv', 'filling-maj']);
     expect(d.series.equals(Poly.fromTerms([[0, 0, 1n], [1, 0, 2n], [0, 1, 2n], [1, 1, 1n]]))).toBe(true);
   });
 
-  it('Hilbert sums satisfy H(μ)(q,t) = H(μ′)(t,q) and give n! at q = t = 1, for |μ| ≤ 5 (MATH.md §3)', async () => {
+  it('Hilbert sums satisfy H(μ)(q,t) = H(μ′)(t,q) and give n! at q = t = 1, for |μ| ≤ 5 (Haglund, AMS 2008, ch. 2 — from memory)', async () => {
     for (let n = 1; n <= 5; n++) {
       for (const mu of partitions(n)) {
         const a = (await dist('fillings', { shape: mu }, ['filling-inv', 'filling-maj'])).series;

@@ -1,4 +1,4 @@
-/** The superspace families of part A against the module engine (MATH.md §4). */
+/** The superspace families of part A against the module engine (Rhoades–Wilson, Forum Math. Sigma 10 (2022)). */
 import { describe, expect, it } from 'vitest';
 import { computeModule } from '../../src/modules/compute-module.js';
 import { dist } from './dist-helper.js';

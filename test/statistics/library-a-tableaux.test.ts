@@ -54,7 +54,7 @@ describe('Garsia–Remmel q-rook numbers', () => {
       }
     }
   });
-  it('staircase of size n: R_k = q^{C(n−k,2)}·Stir_q(n, n−k) with Stir_q of MATH.md §1 (Garsia–Remmel 1986: their q-Stirling numbers, from memory of the normalisation; checked for n ≤ 7)', async () => {
+  it('staircase of size n: R_k = q^{C(n−k,2)}·Stir_q(n, n−k) with the Stir_q of Carlitz (Garsia–Remmel 1986: their q-Stirling numbers, from memory of the normalisation; checked for n ≤ 7)', async () => {
     for (let n = 1; n <= 7; n++) {
       for (let k = 0; k < n; k++) {
         const r = (await dist('rook-placements', { n, k }, ['rook-inv'])).series;

@@ -1,4 +1,4 @@
-/** The four Delta-conjecture statistics on ordered set partitions (MATH.md §4). */
+/** The four Delta-conjecture statistics on ordered set partitions (Haglund–Remmel–Wilson, Trans. Amer. Math. Soc. 370 (2018)). */
 import { describe, expect, it } from 'vitest';
 import { familyById } from '../../objects/index.js';
 import type { OrderedSetPartition } from '../../objects/types.js';
@@ -30,7 +30,7 @@ function minimajBrute(p: OrderedSetPartition): number {
 }
 
 describe('ordered set partition statistics', () => {
-  it('inv, maj, minimaj and dinv each have distribution [k]_q!·Stir_q(n,k) for n ≤ 6, all k (MATH.md §4; Haglund–Remmel–Wilson 2018; Rhoades 2018)', async () => {
+  it('inv, maj, minimaj and dinv each have distribution [k]_q!·Stir_q(n,k) for n ≤ 6, all k (Haglund–Remmel–Wilson 2018; Rhoades 2018)', async () => {
     for (let n = 0; n <= 6; n++) {
       for (let k = 0; k <= n; k++) {
         const target = qOrderedStirling(n, k);

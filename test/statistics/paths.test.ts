@@ -1,4 +1,4 @@
-/** Dyck paths, parking functions and decorated labelled paths (Haglund's book; MATH.md §3). */
+/** Dyck paths, parking functions and decorated labelled paths (Haglund's book; Carlsson–Mellit 2018; Haglund–Remmel–Wilson 2018). */
 import { catalan, combinations } from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { Poly } from '../../src/core/poly.js';
@@ -20,7 +20,7 @@ describe('Dyck path statistics', () => {
     }
   });
 
-  it('C_3(q,t) = q³ + q²t + qt² + t³ + qt (MATH.md §3)', async () => {
+  it('C_3(q,t) = q³ + q²t + qt² + t³ + qt (q,t-Catalan: Haglund, AMS 2008, ch. 3 — from memory)', async () => {
     const c3 = Poly.fromTerms([[3, 0, 1n], [2, 1, 1n], [1, 2, 1n], [0, 3, 1n], [1, 1, 1n]]);
     expect((await dist('dyck-paths', { n: 3 }, ['dyck-dinv', 'dyck-area'])).series.equals(c3)).toBe(true);
   });
@@ -46,7 +46,7 @@ describe('parking functions', () => {
     }
   });
 
-  it('Σ q^dinv t^area F_{iDes} is symmetric, ∇e_2 = s_2 + (q+t) s_11 (MATH.md §3) and ⟨∇e_n, s_{1^n}⟩ = C_n(q,t) for n ≤ 5', async () => {
+  it('Σ q^dinv t^area F_{iDes} is symmetric, ∇e_2 = s_2 + (q+t) s_11 (Haglund, AMS 2008, ch. 2 — from memory) and ⟨∇e_n, s_{1^n}⟩ = C_n(q,t) for n ≤ 5', async () => {
     for (let n = 1; n <= 5; n++) {
       const d = await dist('parking-functions', { n }, ['parking-dinv', 'parking-area'], { frobenius: 'descents' });
       const coeffs = new Map<number, Poly>(d.frobenius!.terms.map((t) => [t.set!.reduce((m, i) => m + 2 ** (i - 1), 0), t.series]));
@@ -62,8 +62,8 @@ describe('parking functions', () => {
   });
 });
 
-describe('decorated labelled Dyck paths (rise version, MATH.md §3)', () => {
-  it('Σ q^dinv t^{area without decorated rows} is symmetric in q,t and at t = 0 equals [k]_q!·Stir_q(n,k) (MATH.md §4), n ≤ 5', async () => {
+describe('decorated labelled Dyck paths (rise version, Haglund–Remmel–Wilson, Trans. Amer. Math. Soc. 370 (2018))', () => {
+  it('Σ q^dinv t^{area without decorated rows} is symmetric in q,t and at t = 0 equals [k]_q!·Stir_q(n,k) (Haglund–Remmel–Wilson 2018 — from memory), n ≤ 5', async () => {
     for (let n = 1; n <= 5; n++) {
       for (let k = 1; k <= n; k++) {
         const d = (await dist('decorated-dyck-paths', { n, k }, ['decorated-dinv', 'decorated-area'])).series;

@@ -5,7 +5,8 @@
  * - shuffle theorem (Carlsson–Mellit, J. Amer. Math. Soc. 31 (2018)):
  *   ∇e_n = Σ_PF q^{dinv} t^{area} F_{iDes(reading word)};
  * - rise Delta theorem (stated in Haglund–Remmel–Wilson, Trans. Amer. Math. Soc. 370 (2018);
- *   proved 2022 — from memory, MATH.md §3): Δ'_{e_{k−1}} e_n = Σ over labelled Dyck paths with
+ *   proved in D'Adderio–Mellit, A proof of the compositional Delta conjecture, Adv. Math. 402
+ *   (2022) — from memory): Δ'_{e_{k−1}} e_n = Σ over labelled Dyck paths with
  *   n − k decorated double rises of q^{dinv} t^{area of the undecorated rows} F_{iDes}.
  * Statistics (Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, ch. 5):
  * rows bottom to top, a_i = area of row i, l_i its car; dinv = #{i < j : a_i = a_j, l_i < l_j}

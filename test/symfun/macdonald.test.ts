@@ -14,12 +14,12 @@ const { q, t } = Poly;
 const s = (...l: number[]) => SymFun.basisElement('s', l);
 
 describe('modified Macdonald polynomials by the filling formula', () => {
-  it('check values H̃_(2), H̃_(11), H̃_(21) (Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, AMS 2008, ch. 2 — from memory, via MATH.md §3)', () => {
+  it('check values H̃_(2), H̃_(11), H̃_(21) (Haglund, The q,t-Catalan numbers and the space of diagonal harmonics, AMS 2008, ch. 2 — from memory)', () => {
     expect(modifiedMacdonald([2]).equals(s(2).add(s(1, 1).scale(q)))).toBe(true);
     expect(modifiedMacdonald([1, 1]).equals(s(2).add(s(1, 1).scale(t)))).toBe(true);
     expect(modifiedMacdonald([2, 1]).equals(s(3).add(s(2, 1).scale(q.add(t))).add(s(1, 1, 1).scale(q.mul(t))))).toBe(true);
   });
-  it('H̃_μ(X;q,t) = H̃_μ′(X;t,q), ⟨H̃_μ, s_(n)⟩ = 1 and H̃_μ(X;1,1) = h_1^n for n ≤ 6 (MATH.md §3; Haiman)', () => {
+  it('H̃_μ(X;q,t) = H̃_μ′(X;t,q), ⟨H̃_μ, s_(n)⟩ = 1 and H̃_μ(X;1,1) = h_1^n for n ≤ 6 (Haglund, AMS 2008, ch. 2 — from memory; Haiman)', () => {
     for (let n = 1; n <= 6; n++) {
       const h1n = SymFun.basisElement('h', new Array(n).fill(1));
       for (const mu of partitionList(n)) {
@@ -41,7 +41,7 @@ describe('modified Macdonald polynomials by the filling formula', () => {
         expect(flipped.equals(modifiedMacdonald(mu).omega()), partitionKey(mu)).toBe(true);
       }
   });
-  it('independent route: the triangularity characterisation holds for n ≤ 5 (Haiman; MATH.md §3)', () => {
+  it('independent route: the triangularity characterisation holds for n ≤ 5 (Haiman, J. Amer. Math. Soc. 14 (2001) — from memory)', () => {
     // H̃_μ[X(1−q)] ∈ span{s_λ : λ ≥ μ}, H̃_μ[X(1−t)] ∈ span{s_λ : λ ≥ μ′}, ⟨H̃_μ, s_(n)⟩ = 1
     // determine H̃_μ uniquely; here the filling sum is checked against them.
     const oneMinusQ = Poly.one.sub(q);
@@ -73,7 +73,7 @@ describe('modified Macdonald polynomials by the filling formula', () => {
   });
 });
 
-describe('the triangularity route (solving, not checking; Haiman\'s characterisation, MATH.md §3)', () => {
+describe('the triangularity route (solving, not checking; Haiman\'s characterisation, J. Amer. Math. Soc. 14 (2001) — from memory)', () => {
   it('the system has a unique solution equal to the filling formula at sample points, n ≤ 5', () => {
     const points = [
       [frac(2n), frac(-3n)],

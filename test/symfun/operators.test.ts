@@ -49,7 +49,7 @@ describe('expansion of any F in the H̃ basis', () => {
 });
 
 describe('nabla and Delta operators', () => {
-  it('∇e_2 = s_2 + (q+t) s_11 and C_3 = q³ + q²t + qt² + t³ + qt (MATH.md §3)', () => {
+  it('∇e_2 = s_2 + (q+t) s_11 and C_3 = q³ + q²t + qt² + t³ + qt (Haglund, AMS 2008, ch. 2–3 — from memory)', () => {
     expect(nabla(e(2)).equals(s(2).add(s(1, 1).scale(q.add(t))))).toBe(true);
     const c3 = nabla(e(3)).hallInner(e(3));
     expect(c3.equals(P(Poly.fromTerms([[3, 0, 1n], [2, 1, 1n], [1, 2, 1n], [0, 3, 1n], [1, 1, 1n]])))).toBe(true);
@@ -61,7 +61,7 @@ describe('nabla and Delta operators', () => {
       expect(ne.hilbert().evaluate(1, 1).equals(Number((n + 1) ** (n - 1)))).toBe(true);
     }
   });
-  it('Δ′_{e_{n−1}} e_n = ∇e_n (generic route against the e_n route) and Δ′_{e_0} e_n = e_n, n ≤ 5 (MATH.md §3)', () => {
+  it('Δ′_{e_{n−1}} e_n = ∇e_n (generic route against the e_n route) and Δ′_{e_0} e_n = e_n, n ≤ 5 (Haglund–Remmel–Wilson, Trans. Amer. Math. Soc. 370 (2018))', () => {
     for (let n = 1; n <= 5; n++) {
       const viaNabla = nabla(e(n));
       expect(deltaPrime(e(n - 1), e(n)).equals(viaNabla)).toBe(true);

@@ -7,7 +7,7 @@ import { compositionMask, fundamentalToSchur, maskComposition } from '../../src/
 import { SymFun } from '../../src/symfun/symfun.js';
 
 describe('fundamental quasisymmetric functions to Schur', () => {
-  it('Σ_{T ∈ SYT(λ)} F_{Des(T)} = s_λ for n ≤ 6 (Gessel; MATH.md §2)', () => {
+  it('Σ_{T ∈ SYT(λ)} F_{Des(T)} = s_λ for n ≤ 6 (Gessel; Stanley, Enumerative Combinatorics vol. 2, §7.19)', () => {
     for (let n = 1; n <= 6; n++)
       for (const l of partitionList(n)) {
         const coeffs = new Map<number, Poly>();

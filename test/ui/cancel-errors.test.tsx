@@ -26,7 +26,7 @@ describe('Modules screen: cancel and errors', () => {
     // Still usable: a small module computes.
     await request(r, '--seed vandermonde --n 3 --ops x');
     f = await waitForFrame(r, (x) => x.includes('dimension 6'));
-    // Vandermonde n = 3: Hilbert series [3]_q! = 1 + 2q + 2q^2 + q^3 (MATH.md §4).
+    // Vandermonde n = 3: Hilbert series [3]_q! = 1 + 2q + 2q^2 + q^3 (Lusztig–Stanley; Stanley, Bull. Amer. Math. Soc. 1 (1979) — from memory).
     expect(f).toMatch(/dim +\[. 1\] +. 2 +. 2 +. 1/);
   }, 60_000);
 

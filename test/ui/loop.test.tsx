@@ -79,7 +79,7 @@ describe('search and export loop', () => {
     await press(r, 'g');
     expect(frame(r)).toContain('Hilbert series (q=x) of closure of Vandermonde');
     await press(r, KEYS.enter);
-    // Vandermonde: Hilbert series [n]_q! (MATH.md §4), the inversion generating function.
+    // Vandermonde: Hilbert series [n]_q! (Lusztig–Stanley; Stanley, Bull. Amer. Math. Soc. 1 (1979) — from memory), the inversion generating function.
     const f = await waitForFrame(r, (x) => x.includes('candidate'));
     expect(f).toContain('formula: [n]_q!');
     expect(f).toContain('inversions on permutations');

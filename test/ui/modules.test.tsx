@@ -51,7 +51,7 @@ describe('Modules screen: choosing the request with keys', () => {
     await press(r, '-');
     expect(frame(r)).toContain('module --seed vandermonde --n 3 --ops x');
     await press(r, KEYS.enter);
-    // Vandermonde n = 3: dimension 3! = 6 (MATH.md §4).
+    // Vandermonde n = 3: dimension 3! = 6 (the regular representation, Lusztig–Stanley; Stanley, Bull. Amer. Math. Soc. 1 (1979) — from memory).
     const f = await waitForFrame(r, (x) => x.includes('dimension 6'));
     expect(f).toContain('Vandermonde');
     // A module result is exported as the JSON of `gradus module --json`.

@@ -12,7 +12,7 @@ describe('Symmetric functions screen', () => {
     r = renderApp({ initialScreen: 'symfun' });
     await press(r, 'e');
     await press(r, '\u0015', 'nabla(e(2))', KEYS.enter);
-    // ∇e_2 = s_2 + (q+t) s_11 (MATH.md §3, Haglund 2008 ch. 2 — from memory; the engine's tests check it independently).
+    // ∇e_2 = s_2 + (q+t) s_11 (Haglund 2008 ch. 2 — from memory; the engine's tests check it independently).
     const f = await waitForFrame(r, (x) => x.includes('Schur basis'));
     expect(f).toContain('s(2) + (q + t)*s(1,1)');
     expect(f).toContain('degree 2');
@@ -38,7 +38,7 @@ describe('Symmetric functions screen', () => {
     expect(frame(r)).toContain('sym nabla(e({n}))');
     expect(frame(r)).toContain('{n} = 3');
     await press(r, '-', KEYS.enter);
-    // ∇e_2 = s_2 + (q+t) s_11 (MATH.md §3).
+    // ∇e_2 = s_2 + (q+t) s_11 (Haglund 2008 ch. 2 — from memory).
     let f = await waitForFrame(r, (x) => x.includes('Schur basis'));
     expect(f).toContain('s(2) + (q + t)*s(1,1)');
     await press(r, 'g');
