@@ -40,8 +40,10 @@ function common(o: SchedulerOptions, withMem: boolean): string[] {
   if (withMem && o.mem) lines.push(`--mem=${directiveValue('mem', o.mem)}`);
   if (o.account) lines.push(`--account=${directiveValue('account', o.account)}`);
   if (o.qos) lines.push(`--qos=${directiveValue('qos', o.qos)}`);
-  for (const a of o.sbatchArgs ?? []) {
-    if (!/^--[a-z][\w-]*(=[^\s'"\\#]+)?$/.test(a)) throw new InputError(`--sbatch-arg takes one sbatch option written as --name=value (got "${a.slice(0, 60)}")`, 'sbatch-arg');
+  for (const typed of o.sbatchArgs ?? []) {
+    // `constraint=avx2` or `--constraint=avx2` (a value starting with -- must follow an =)
+    const a = typed.startsWith('--') ? typed : `--${typed}`;
+    if (!/^--[a-z][\w-]*(=[^\s'"\\#]+)?$/.test(a)) throw new InputError(`--sbatch-arg takes one sbatch option written as name=value, e.g. constraint=avx2 (got "${typed.slice(0, 60)}")`, 'sbatch-arg');
     if (/^--(array|output|error|job-name|dependency|parsable|wrap)\b/.test(a)) throw new InputError(`--sbatch-arg ${a.split('=')[0]}: gradus sets that option itself`, 'sbatch-arg');
     lines.push(a);
   }

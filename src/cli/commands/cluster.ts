@@ -19,7 +19,7 @@ const OPTIONS: readonly (OptionSpec & { readonly for: readonly Action[] })[] = [
   { name: 'cpus-per-task', type: 'int', description: 'submit: CPUs of each array task (its pieces run side by side)', placeholder: 'C', min: 1, max: 256, for: ['submit'] },
   { name: 'account', type: 'string', description: 'submit: Slurm account', placeholder: 'A', for: ['submit'] },
   { name: 'qos', type: 'string', description: 'submit: Slurm quality of service', placeholder: 'Q', for: ['submit'] },
-  { name: 'sbatch-arg', type: 'string', repeatable: true, description: 'submit: one more sbatch option, as --name=value (repeatable)', placeholder: 'OPT', for: ['submit'] },
+  { name: 'sbatch-arg', type: 'string', repeatable: true, description: 'submit: one more sbatch option as name=value, e.g. constraint=avx2 (repeatable)', placeholder: 'OPT', for: ['submit'] },
   { name: 'setup', type: 'string', description: 'submit: a shell line run before gradus in each job (e.g. "module load nodejs")', placeholder: 'LINE', for: ['submit'] },
   { name: 'max-parallel', type: 'int', description: 'submit: at most K array tasks at once', placeholder: 'K', min: 1, max: 100_000, for: ['submit'] },
   { name: 'print', type: 'flag', description: 'submit: write and print the batch scripts, submit nothing', for: ['submit'] },
