@@ -34,11 +34,12 @@ interface ModuleSetup {
   readonly ops: { x: boolean; y: boolean; theta: boolean };
   readonly chi: -1 | 0 | 1;
   readonly plan: readonly YoungTask[];
-  readonly estimate: { units: number; seconds: number };
+  /** Only when planning (the shards and the merge need no estimate). */
+  readonly estimate?: { units: number; seconds: number };
 }
 
 /** The route decisions of computeModuleAsync, taken the same way here so that the merge meets them again. */
-function setup(r: ModuleRequest): ModuleSetup {
+function setup(r: ModuleRequest, estimating = false): ModuleSetup {
   if (r.method === 'exact') throw new InputError('--method exact works over Q on one machine; the cluster splits the modular routes (leave out --method exact)', 'method');
   const spec = r.spec;
   const ops = parseOperatorFamilies(spec.ops);
@@ -55,25 +56,26 @@ function setup(r: ModuleRequest): ModuleSetup {
   const chi = probe.character === 'sign' ? -1 : probe.character === 'trivial' ? 1 : 0;
   const dops = derivativeFamilies(ops);
   const route = !young ? 'iterated' : derivOnly ? 'young' : 'polarized';
-  const estimate = estimateModuleWork(support, ops, route, chi === -1 && mirrorHolds([support], dops), chi !== 0);
-  if (r.maxWork !== undefined && estimate.units > r.maxWork) {
+  const estimate = estimating ? estimateModuleWork(support, ops, route, chi === -1 && mirrorHolds([support], dops), chi !== 0) : undefined;
+  if (estimate && r.maxWork !== undefined && estimate.units > r.maxWork) {
     throw new LimitError(`estimated work ${estimate.units.toExponential(2)} units exceeds the limit ${r.maxWork.toExponential(2)}; raise it with --max-work (or leave it out: a cluster plan has no limit of its own)`, 'max-work');
   }
   const exact = young && derivOnly ? integerSeedSupport(support, terms) : undefined;
   const plan = exact ? closurePlan(spec.n, chi, mirrorHolds([exact], dops)) : [];
-  return { p1, p2, ...(exact ? { exact } : {}), ops: dops, chi, plan, estimate };
+  return { p1, p2, ...(exact ? { exact } : {}), ops: dops, chi, plan, ...(estimate ? { estimate } : {}) };
 }
 
 /** Share of a task in the whole (the eliminations dominate; cost falls with the cube of the group order). */
 const taskCost = (t: YoungTask): number => groupOrder(t.blocks) ** -3;
 
-export function planModule(r: ModuleRequest, maxShards: number): { body: Omit<ManifestBody, 'key'>; estimate: ModuleSetup['estimate'] } {
+export function planModule(r: ModuleRequest, maxShards: number): { body: Omit<ManifestBody, 'key'>; estimate: { units: number; seconds: number } } {
   if (r.checkpoint !== undefined) throw new InputError('--resume is for one machine; a work folder keeps finished shards itself (leave out --resume)', 'resume');
-  const s = setup(r);
+  const s = setup(r, true);
+  const estimate = s.estimate!;
   const primes: [number, number] = [s.p1, s.p2];
   if (!s.exact) {
     const shards = primes.map((prime, id) => ({ id, label: `prime ${prime}`, work: { type: 'prime' as const, prime } }));
-    return { body: { kind: 'module', route: 'one shard per prime (a whole one-prime run each)', primes, shards }, estimate: s.estimate };
+    return { body: { kind: 'module', route: 'one shard per prime (a whole one-prime run each)', primes, shards }, estimate };
   }
   const tasks = computedTasks(s.plan);
   const total = tasks.reduce((sum, t) => sum + taskCost(s.plan[t]!), 0);
@@ -90,7 +92,7 @@ export function planModule(r: ModuleRequest, maxShards: number): { body: Omit<Ma
   }));
   return {
     body: { kind: 'module', route: `Young-subgroup tasks (${tasks.length} computed of ${s.plan.length}) × primes, exact-integer entries: one enumeration serves both primes`, primes, shards },
-    estimate: s.estimate,
+    estimate,
   };
 }
 
