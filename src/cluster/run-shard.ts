@@ -99,7 +99,7 @@ export async function runShard(folder: WorkFolder, id: number, o: ShardRunOption
   try {
     result = await compute(m, shard.work, o);
   } catch (e) {
-    writeFailure(folder, id, o.signal?.aborted ? `stopped: ${String(o.signal.reason ?? 'a signal')}` : (e as Error).message ?? String(e));
+    writeFailure(folder, id, o.signal?.aborted ? `stopped by ${String(o.signal.reason ?? 'a signal')} (scancel, a time limit or the node going down)` : (e as Error).message ?? String(e));
     throw e;
   }
   const seconds = (performance.now() - t0) / 1000;

@@ -4,6 +4,7 @@
  * gives), unusable (a file at the shard's place that is not of this plan) or missing (none of
  * these: never run, or stopped without a word, such as a task killed outright).
  */
+import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { codeText } from './code-version.js';
 import { jobNames, readJobs, type Submission } from './jobs-file.js';
@@ -50,7 +51,7 @@ export function planStatus(folder: WorkFolder): PlanStatus {
     const base = { id: s.id, label: s.label };
     const sub = last.get(s.id);
     const job = sub?.array ? `${sub.array}_${s.id}` : undefined;
-    const where = job ? { job, log: join(folder.logsDir, `shard-${job}.out`) } : {};
+    const where: { job?: string; log?: string } = job ? { job, log: join(folder.logsDir, `shard-${job}.out`) } : {};
     const file = readShard(folder, s.id);
     if (file.state === 'done') return { ...base, state: 'done', ...where };
     if (file.state === 'invalid') return { ...base, state: 'unusable', detail: file.why, ...where };
@@ -60,7 +61,8 @@ export function planStatus(folder: WorkFolder): PlanStatus {
     const final = job ? acct?.get(job) : undefined;
     if (note) return { ...base, state: 'failed', detail: note.message, ...where };
     if (final && final.state !== 'COMPLETED') return { ...base, state: 'failed', detail: `${final.state} (exit ${final.exit})`, ...where };
-    return { ...base, state: 'missing', ...(job ? { detail: 'its task left the queue without a result (stopped or killed); see its log' } : {}), ...where };
+    const why = !job ? undefined : existsSync(where.log!) ? 'its task left the queue without a result (killed, or out of time or memory); see its log' : 'its task left the queue before it started (cancelled)';
+    return { ...base, state: 'missing', ...(why ? { detail: why } : {}), ...where };
   });
   const counts = Object.fromEntries(SHARD_STATES.map((st) => [st, shards.filter((s) => s.state === st).length])) as Record<ShardState, number>;
   const merged = readMerged(folder);
