@@ -11,7 +11,7 @@ import { inspectCatalogueFile } from '../store/catalogue-file.js';
 import { planUnits, statsSignature, unitProvenance, type Unit } from '../store/planUnits.js';
 import { mergeRaw, type RawTally } from '../store/rawTally.js';
 import { rowsOfTally } from '../store/tallyUnit.js';
-import { signatureHash, type Manifest, type ManifestBody, type TallyPiece } from './manifest.js';
+import { signatureHash, type Manifest, type ManifestBody, type PlannedUnit, type TallyPiece } from './manifest.js';
 import { packByCost } from './pack.js';
 import { rawTallyFromJson } from './raw-tally-json.js';
 import type { ShardResult } from './shard-file.js';
@@ -85,46 +85,53 @@ function pieceLabel(p: TallyPiece): string {
 
 const unitKey = (family: string, params: Readonly<Record<string, number>>): string => `${family} ${JSON.stringify(Object.entries(params).sort())}`;
 
-/** Write the units of a finished plan into the catalogue; returns the number of units and distributions. */
-export function mergeCatalogue(m: Manifest, results: readonly ShardResult[], path: string): { units: number; rows: number } {
+/**
+ * Write the units of a finished plan into the catalogue, reading the shards one at a time: a
+ * unit is written as soon as its last piece is in (its pieces added in their index order), so
+ * memory holds only the units under way. The plan's units are checked against this code's
+ * statistics before anything is written.
+ */
+export function mergeCatalogue(m: Manifest, shardIds: readonly number[], read: (id: number) => ShardResult, path: string): { units: number; rows: number } {
   const build = m.build!;
   const plan = planUnits(build.nMax, build.families);
   const byKey = new Map(plan.units.map((u) => [unitKey(u.family.id, u.params), u]));
-  const pieces = new Map<string, { raws: Map<number, RawTally>; seconds: number }>();
-  for (const x of results) {
-    if (x.type !== 'tally') throw new Error('a catalogue plan holds tally shards only');
-    for (const p of x.pieces) {
-      const k = unitKey(p.family, p.params);
-      const e = pieces.get(k) ?? { raws: new Map<number, RawTally>(), seconds: 0 };
-      e.raws.set(p.shard?.index ?? 0, rawTallyFromJson(p.raw));
-      e.seconds += p.seconds;
-      pieces.set(k, e);
-    }
-  }
-  // every unit, checked whole before the catalogue is touched
-  const ready = m.units!.map((pu) => {
-    const k = unitKey(pu.family, pu.params);
-    const unit = byKey.get(k);
-    if (!unit || signatureHash(statsSignature(unit)) !== pu.statistics) throw new InputError(`the statistics of ${k} differ from the plan's: plan again in a new folder`, 'folder');
-    const got = pieces.get(k);
-    if (!got || got.raws.size !== pu.pieces) throw new InputError(`the shards hold ${got?.raws.size ?? 0} of the ${pu.pieces} pieces of ${k}`, 'folder');
-    const raw = [...got.raws.keys()].sort((a, b) => a - b).map((i) => got.raws.get(i)!).reduce((a, b) => mergeRaw(a, b));
-    if (BigInt(raw.objects) !== BigInt(pu.objects)) throw new InputError(`the pieces of ${k} hold ${raw.objects} objects, the plan counted ${pu.objects}`, 'folder');
-    return { unit, raw, seconds: got.seconds, pieces: pu.pieces };
-  });
+  const wanted = new Map<string, { unit: Unit; planned: PlannedUnit; raws: Map<number, RawTally>; seconds: number }>(
+    m.units!.map((pu) => {
+      const k = unitKey(pu.family, pu.params);
+      const unit = byKey.get(k);
+      if (!unit || signatureHash(statsSignature(unit)) !== pu.statistics) throw new InputError(`the statistics of ${k} differ from the plan's: plan again in a new folder`, 'folder');
+      return [k, { unit, planned: pu, raws: new Map<number, RawTally>(), seconds: 0 }];
+    }),
+  );
   const cat = Catalogue.open(path);
   let rows = 0;
+  let written = 0;
   try {
     cat.beginBuild({ nMax: build.nMax, ...(build.families ? { families: build.families } : {}), units: plan.units.length });
-    for (const { unit, raw, seconds, pieces: count } of ready) {
-      const r = rowsOfTally(unit.family, unit.params, unit.stats, raw);
-      const how = `exhaustive enumeration, exact integer tallies (cluster plan ${m.id}, ${count} piece${count > 1 ? 's' : ''})`;
-      cat.writeUnit(unit.family.id, unit.params, r.objects, seconds, r.rows, unitProvenance(unit, how, seconds), statsSignature(unit));
-      rows += r.rows.length;
+    for (const id of shardIds) {
+      const x = read(id);
+      if (x.type !== 'tally') throw new Error('a catalogue plan holds tally shards only');
+      for (const p of x.pieces) {
+        const k = unitKey(p.family, p.params);
+        const w = wanted.get(k);
+        if (!w) throw new InputError(`shard ${id} holds ${k}, which the plan does not build`, 'folder');
+        w.raws.set(p.shard?.index ?? 0, rawTallyFromJson(p.raw));
+        w.seconds += p.seconds;
+        if (w.raws.size < w.planned.pieces) continue;
+        const raw = [...w.raws.keys()].sort((a, b) => a - b).map((i) => w.raws.get(i)!).reduce((a, b) => mergeRaw(a, b));
+        w.raws.clear();
+        if (BigInt(raw.objects) !== BigInt(w.planned.objects)) throw new InputError(`the pieces of ${k} hold ${raw.objects} objects, the plan counted ${w.planned.objects}`, 'folder');
+        const r = rowsOfTally(w.unit.family, w.unit.params, w.unit.stats, raw);
+        const how = `exhaustive enumeration, exact integer tallies (cluster plan ${m.id}, ${w.planned.pieces} piece${w.planned.pieces > 1 ? 's' : ''})`;
+        cat.writeUnit(w.unit.family.id, w.unit.params, r.objects, w.seconds, r.rows, unitProvenance(w.unit, how, w.seconds), statsSignature(w.unit));
+        rows += r.rows.length;
+        written++;
+      }
     }
+    if (written < wanted.size) throw new InputError(`the shards hold ${written} of the plan's ${wanted.size} units whole; the units written are kept, the build stays unfinished`, 'folder');
     cat.finishBuild();
   } finally {
     cat.close();
   }
-  return { units: ready.length, rows };
+  return { units: written, rows };
 }

@@ -19,7 +19,7 @@ import { idRanges } from './id-ranges.js';
 import { mergeModule } from './module-split.js';
 import { mergeQuotient } from './quotient-split.js';
 import { requestOf } from './request-of.js';
-import { readShard, type ShardFile } from './shard-file.js';
+import { readShard, type ShardFile, type ShardResult } from './shard-file.js';
 import { checkCode, type WorkFolder } from './work-folder.js';
 
 const MERGED = z.object({ format: z.literal('gradus-cluster-merged'), version: z.literal(1), plan: z.string(), time: z.string(), output: z.string(), confirmation: z.string().optional() });
@@ -41,15 +41,18 @@ export interface MergeReport {
   readonly rows?: number;
 }
 
-/** Every shard of the plan, checked; InputError naming the missing and the unusable ones. */
-export function finishedShards(folder: WorkFolder): ShardFile[] {
+/**
+ * Every shard of the plan, checked; InputError naming the missing and the unusable ones. With
+ * `keep` false only their headers are kept (a large catalogue plan is read again shard by shard).
+ */
+export function finishedShards(folder: WorkFolder, keep = true): ShardFile[] {
   const m = folder.manifest;
   const missing: number[] = [];
   const bad: string[] = [];
   const files: ShardFile[] = [];
   for (const s of m.shards) {
     const r = readShard(folder, s.id);
-    if (r.state === 'done') files.push(r.file);
+    if (r.state === 'done') files.push(keep ? r.file : { ...r.file, result: { type: 'prime', prime: 2, cells: [] } });
     else if (r.state === 'missing') missing.push(s.id);
     else bad.push(r.why);
   }
@@ -79,13 +82,18 @@ export function mergePlan(folder: WorkFolder, o: MergeOptions): MergeReport {
   checkCode(m.code, codeVersion(), `${folder.dir} was planned by`);
   const out = o.out !== undefined ? resolve(o.cwd, o.out) : undefined;
   if (out) checkOut(out, o.force ?? false);
-  const files = finishedShards(folder);
+  const files = finishedShards(folder, m.kind !== 'catalogue');
   const results = files.map((f) => f.result);
   const shardSeconds = files.reduce((s, f) => s + f.seconds, 0);
   const t0 = performance.now();
   let report: MergeReport;
   if (m.kind === 'catalogue') {
-    const r = mergeCatalogue(m, results, m.catalogue!);
+    const read = (id: number): ShardResult => {
+      const r = readShard(folder, id);
+      if (r.state !== 'done') throw new InputError(`shard ${id} changed during the merge (${r.state === 'invalid' ? r.why : 'it is gone'}); the units written so far are kept, merge again`, 'folder');
+      return r.file.result;
+    };
+    const r = mergeCatalogue(m, m.shards.map((x) => x.id), read, m.catalogue!);
     report = { output: m.catalogue!, shards: files.length, shardSeconds, units: r.units, rows: r.rows };
   } else {
     const request = requestOf(m, o.cwd);
