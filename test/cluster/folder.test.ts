@@ -32,7 +32,7 @@ afterAll(async () => {
 });
 
 describe('cluster work folders', () => {
-  it('plans only into a new or empty folder, or one holding the same plan; anything else is left untouched', () => {
+  it('plans only into a new or empty folder, or one holding the same plan; anything else is left untouched', { timeout: 300_000 }, () => {
     const other = join(root, 'notes');
     mkdirSync(other);
     writeFileSync(join(other, 'mine.txt'), 'my notes');
@@ -58,7 +58,7 @@ describe('cluster work folders', () => {
     expect(() => planRun(join(root, 's'), ['sym', 'e(3)'], env)).toThrow(/module, quotient and catalogue build/);
   });
 
-  it('runs shards once, and merges only a complete set of this plan and this code', async () => {
+  it('runs shards once, and merges only a complete set of this plan and this code', { timeout: 300_000 }, async () => {
     const dir = join(root, 'm');
     const folder = WorkFolder.open(dir, root);
     const qFolder = planRun(join(root, 'q'), QUOTIENT, env).folder;

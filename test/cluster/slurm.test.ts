@@ -56,7 +56,7 @@ async function planJobPrefix(dir: string): Promise<string> {
 }
 
 /** Wait until the plan's jobs have left the queue; its logs when something went wrong. */
-async function settled(dir: string, limitSeconds = 170): Promise<void> {
+async function settled(dir: string, limitSeconds = 360): Promise<void> {
   const prefix = await planJobPrefix(dir);
   const until = Date.now() + limitSeconds * 1000;
   while (queuedJobs(prefix).length > 0) {
@@ -106,9 +106,9 @@ describe.skipIf(!HAS_SLURM)('cluster runs on Slurm', () => {
       ),
       ok(['cluster', 'plan', dirs.quotient, '--', ...QUOTIENT]).then(() => ok(['cluster', 'submit', dirs.quotient])),
     ]);
-  });
+  }, 300_000);
 
-  it('a bigraded module with Frobenius: array and merge job give the one-machine document', async () => {
+  it('a bigraded module with Frobenius: array and merge job give the one-machine document', { timeout: 400_000 }, async () => {
     await settled(dirs.module);
     await expectOneMachineDocument(dirs.module, MODULE);
     const status = JSON.parse(await ok(['cluster', 'status', dirs.module, '--json'])) as { counts: Record<string, number>; merge: { state: string } };
@@ -116,7 +116,7 @@ describe.skipIf(!HAS_SLURM)('cluster runs on Slurm', () => {
     expect(status.merge.state).toBe('merged');
   });
 
-  it('a catalogue build (n ≤ 5, large units in pieces): the same rows as the one-machine build', async () => {
+  it('a catalogue build (n ≤ 5, large units in pieces): the same rows as the one-machine build', { timeout: 400_000 }, async () => {
     await settled(dirs.catalogue);
     expect(existsSync(join(dirs.catalogue, 'merged.json')), logsOf(dirs.catalogue)).toBe(true);
     const one = Catalogue.open(join(root, 'one.sqlite'));
@@ -133,12 +133,12 @@ describe.skipIf(!HAS_SLURM)('cluster runs on Slurm', () => {
     c.close();
   });
 
-  it('a quotient: the one-machine document', async () => {
+  it('a quotient: the one-machine document', { timeout: 400_000 }, async () => {
     await settled(dirs.quotient);
     await expectOneMachineDocument(dirs.quotient, QUOTIENT);
   });
 
-  it('a cancelled array task is submitted again alone; finished shards are kept', async () => {
+  it('a cancelled array task is submitted again alone; finished shards are kept', { timeout: 400_000 }, async () => {
     const dir = dirs.faults;
     await ok(['cluster', 'plan', dir, '--shards', '2', '--', ...MODULE]);
     // one task at a time, so the second is still waiting when it is cancelled
