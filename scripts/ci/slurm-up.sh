@@ -80,7 +80,8 @@ for i in $(seq 1 50); do
   sleep 0.2
 done
 
-pgrep -x slurmctld >/dev/null 2>&1 || slurmctld
+# a test cluster starts empty: jobs left queued by an earlier session must not run here (-c)
+pgrep -x slurmctld >/dev/null 2>&1 || slurmctld -c
 pgrep -x slurmd >/dev/null 2>&1 || slurmd
 
 for i in $(seq 1 120); do
