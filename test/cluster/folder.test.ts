@@ -13,6 +13,10 @@ import { readShard, writeShard } from '../../src/cluster/shard-file.js';
 import { runShard } from '../../src/cluster/run-shard.js';
 import { planRun } from '../../src/cluster/plan.js';
 import { submitPlan } from '../../src/cluster/submit.js';
+import { mergePlan } from '../../src/cluster/merge.js';
+import { silentProgress } from '../../src/core/progress.js';
+import { buildCatalogue } from '../../src/store/buildCatalogue.js';
+import { Catalogue } from '../../src/store/catalogue.js';
 import { toJsonText } from '../../src/core/json-text.js';
 import { compute, requestFromWords } from '../../src/requests/index.js';
 import { stopPool } from '../../src/pool/pool.js';
@@ -104,6 +108,34 @@ describe('cluster work folders', () => {
     const got = JSON.parse(text) as { provenance: Record<string, unknown> };
     for (const k of ['time', 'seconds', 'notes']) one.provenance[k] = got.provenance[k];
     expect(text).toBe(`${toJsonText(one)}\n`);
+  });
+
+  it('routes without the subgroup split (one shard per prime) and catalogue pieces merge into the one-machine results', { timeout: 300_000 }, async () => {
+    const polar = ['module', '--seed', 'superspace-vandermonde', '--n', '3', '--k', '2', '--ops', 'x,polar1', '--frobenius'];
+    const { folder } = planRun(join(root, 'polar'), polar, env);
+    expect(folder.manifest.shards.map((x) => x.work.type)).toEqual(['prime', 'prime']);
+    for (const x of folder.manifest.shards) await runShard(folder, x.id, quiet);
+    mergePlan(folder, { cwd: root });
+    const one = (await compute(requestFromWords(polar, root))).document as { provenance: Record<string, unknown> };
+    const got = JSON.parse(readFileSync(folder.resultPath, 'utf8')) as { provenance: Record<string, unknown> };
+    for (const k of ['time', 'seconds', 'notes']) one.provenance[k] = got.provenance[k];
+    expect(got).toEqual(one);
+
+    const families = ['permutations', 'dyck-paths'];
+    const cat = planRun(join(root, 'cat'), ['catalogue', 'build', '--n-max', '4', '--families', families.join(','), '--catalogue', join(root, 'sharded.sqlite')], { ...env, shards: 2, objectsPerShard: 5n }).folder;
+    expect(cat.manifest.units!.some((u) => u.pieces > 1)).toBe(true);
+    for (const x of cat.manifest.shards) await runShard(cat, x.id, quiet);
+    expect(mergePlan(cat, { cwd: root }).units).toBe(cat.manifest.units!.length);
+    const whole = Catalogue.open(join(root, 'whole.sqlite'));
+    buildCatalogue(whole, { nMax: 4, maxObjects: 1_000_000n, families, progress: silentProgress });
+    whole.close();
+    const hashes = (path: string): string[] => {
+      const c = Catalogue.open(path, { existing: true });
+      const rows = c.db.prepare('SELECT family, params, statistics, combine, transform, hash FROM distributions ORDER BY 1, 2, 3, 4, 5').all();
+      c.close();
+      return rows.map((r) => JSON.stringify(r));
+    };
+    expect(hashes(join(root, 'sharded.sqlite'))).toEqual(hashes(join(root, 'whole.sqlite')));
   });
 
   it('submit --print writes batch scripts with the scheduler options passed through', () => {
