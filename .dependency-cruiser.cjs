@@ -4,6 +4,7 @@
  *   objects/, statistics/ (the plug-ins; they see the plug-in shapes of src/enumerate/plugin.ts)
  *   engines: src/enumerate, src/symfun, src/modules, src/series, src/pool
  *   src/requests (the request model over the engines)   src/store (the catalogue)
+ *   src/cluster (sharded runs: over requests and store; only src/cli imports it)
  *   src/match (search over the store, targets from requests)
  *   src/export
  *   front ends: src/ui, src/cli (only src/cli and bin/ import src/cli)
@@ -25,6 +26,8 @@ module.exports = {
     { name: 'store-below-match', severity: 'error', from: { path: '^src/store/' }, to: { path: '^src/(requests|match|export|cli|ui)/' } },
     { name: 'match-below-export', severity: 'error', from: { path: '^src/match/' }, to: { path: '^src/(export|cli|ui)/' } },
     { name: 'export-below-front-ends', severity: 'error', from: { path: '^src/export/' }, to: { path: '^src/(cli|ui)/' } },
+    { name: 'cluster-over-requests-and-store', severity: 'error', from: { path: '^src/cluster/' }, to: { path: '^src/(match|export|cli|ui)/' } },
+    { name: 'only-the-cli-imports-the-cluster', severity: 'error', from: { pathNot: '^(src/cli/|src/cluster/)' }, to: { path: '^src/cluster/' } },
     { name: 'only-the-cli-imports-the-cli', severity: 'error', from: { pathNot: '^(src/cli/|bin/)' }, to: { path: '^src/cli/' } },
   ],
   options: {

@@ -9,6 +9,7 @@ import { moduleChecks } from './checks.js';
 import { primeCoeffs } from './coefficients.js';
 import { idealGenerators, type IdealSpec } from './ideals.js';
 import { mergeRuns } from './merge-runs.js';
+import type { ModuleCell } from './module-cell.js';
 import type { Axis, ModuleResult } from './module-result.js';
 import { quotientCells } from './quotient-ring.js';
 
@@ -17,6 +18,10 @@ export interface QuotientOptions {
   readonly prime?: number;
   readonly onProgress?: (done: number, total: number, label: string) => void;
   readonly signal?: AbortSignal;
+  /** Cells already computed for some primes (cluster shards, one prime each). */
+  readonly precomputed?: ReadonlyMap<number, readonly ModuleCell[]>;
+  /** Compute the first prime only, without confirmation (a shard; the merge confirms). */
+  readonly onePrime?: boolean;
 }
 
 export function computeQuotient(spec: IdealSpec, options: QuotientOptions = {}): ModuleResult {
@@ -27,21 +32,21 @@ export function computeQuotient(spec: IdealSpec, options: QuotientOptions = {}):
   let description = '';
   let stable = true;
   let axes: Axis[] = ['x'];
-  const merged = mergeRuns(
-    [p1, p2],
-    (p) => {
-      const ideal = idealGenerators(spec, primeCoeffs(p));
-      description = ideal.description;
-      stable = ideal.stable;
-      const sp = ideal.alg.space;
-      axes = ['x', ...(sp.hasY ? (['y'] as const) : []), ...(sp.hasTheta ? (['theta'] as const) : [])];
-      return quotientCells(
+  const run = (p: number): readonly ModuleCell[] => {
+    const ideal = idealGenerators(spec, primeCoeffs(p));
+    description = ideal.description;
+    stable = ideal.stable;
+    const sp = ideal.alg.space;
+    axes = ['x', ...(sp.hasY ? (['y'] as const) : []), ...(sp.hasTheta ? (['theta'] as const) : [])];
+    return (
+      options.precomputed?.get(p) ??
+      quotientCells(
         { alg: ideal.alg, p, generators: ideal.generators, stable: ideal.stable, frobenius: frob, maxDegree: ideal.maxDegree },
         { onProgress: options.onProgress, signal: options.signal },
-      );
-    },
-    PRIMES,
-  );
+      )
+    );
+  };
+  const merged = options.onePrime ? { cells: run(p1), primes: [p1], confirmation: 'one prime only (a shard; the merge confirms with a second prime)' } : mergeRuns([p1, p2], run, PRIMES);
   const frobOk = frob && stable;
   const cells = frobOk ? merged.cells : merged.cells.map((c) => ({ degree: c.degree, dim: c.dim }));
   const notes = ['ranks mod p are lower bounds of ranks over Q (quotient dimensions upper bounds); multiplicities are integer combinations of ranks'];

@@ -101,7 +101,14 @@ export async function compute<T = unknown>(request: DataRequest, context: Comput
   const kind = REQUEST_KINDS[request.kind];
   const key = requestKey(request);
   const result = await kind.compute(request, context);
-  // the document as the command line prints it: plain JSON (polynomials as arrays, big integers as strings)
-  const document = JSON.parse(toJsonText(kind.document(request, result, key))) as Record<string, unknown>;
-  return { request, key, result: result as T, document };
+  return { request, key, result: result as T, document: documentOf(request, result) };
+}
+
+/**
+ * The JSON document of a result as the command line prints it: plain JSON (polynomials as
+ * arrays, big integers as strings). Results assembled elsewhere (cluster merges) go through it too.
+ */
+export function documentOf(request: DataRequest, result: unknown): Record<string, unknown> {
+  const kind = REQUEST_KINDS[request.kind];
+  return JSON.parse(toJsonText(kind.document(request, result, requestKey(request)))) as Record<string, unknown>;
 }
