@@ -5,6 +5,7 @@
  *   engines: src/enumerate, src/symfun, src/modules, src/series, src/pool
  *   src/requests (the request model over the engines)   src/store (the catalogue)
  *   src/match (search over the store, targets from requests)
+ *   src/sweep (scans of seed families; beside src/match, below export; only the front ends import it)
  *   src/export
  *   front ends: src/ui, src/cli (only src/cli and bin/ import src/cli)
  * A module may import its own layer and the layers below; never a layer above, and no cycles.
@@ -24,6 +25,8 @@ module.exports = {
     { name: 'requests-below-store-match', severity: 'error', from: { path: '^src/requests/' }, to: { path: '^src/(store|match|export|cli|ui)/' } },
     { name: 'store-below-match', severity: 'error', from: { path: '^src/store/' }, to: { path: '^src/(requests|match|export|cli|ui)/' } },
     { name: 'match-below-export', severity: 'error', from: { path: '^src/match/' }, to: { path: '^src/(export|cli|ui)/' } },
+    { name: 'sweep-below-export', severity: 'error', from: { path: '^src/sweep/' }, to: { path: '^src/(export|cli|ui)/' } },
+    { name: 'only-front-ends-import-the-sweep', severity: 'error', from: { pathNot: '^(src/(sweep|cli|ui)/|bin/)' }, to: { path: '^src/sweep/' } },
     { name: 'export-below-front-ends', severity: 'error', from: { path: '^src/export/' }, to: { path: '^src/(cli|ui)/' } },
     { name: 'only-the-cli-imports-the-cli', severity: 'error', from: { pathNot: '^(src/cli/|bin/)' }, to: { path: '^src/cli/' } },
   ],

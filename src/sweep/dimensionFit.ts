@@ -1,7 +1,8 @@
 /**
  * Dimension formulas in n, fitted on the first sizes computed and checked on the next ones:
- * a polynomial in n (of the least degree that the first points fix), c·r^n, or a product
- * d(n) = (αn+β)·d(n−1) (n!, (n+1)!/2, …). Exact rationals; a formula is reported only when
+ * a polynomial in n (of the least degree that the first points fix), c·r^n, a product
+ * d(n) = (αn+β)·d(n−1) (n!, (n+1)!/2, …), or a linear recurrence of order two with constant
+ * coefficients (A·r^n + B·s^n when its roots are rational). Exact rationals; a formula is reported only when
  * at least one computed size beyond those it was fitted on agrees.
  */
 import { frac, type Fraction } from '../core/rational.js';
@@ -58,6 +59,7 @@ function polynomialFit(ns: readonly number[], ds: readonly Fraction[]): Fit | un
     const coeffs = interpolate(ns.slice(0, deg + 1), ds.slice(0, deg + 1));
     const value = (n: number) => coeffs.reduce((s, c, j) => s.add(c.mul(frac(BigInt(n) ** BigInt(j)))), frac(0));
     if (ns.slice(deg + 1).every((n, i) => value(n).equals(ds[deg + 1 + i]!))) {
+      if (coeffs.slice(1).every((c) => c.equals(0))) return undefined; // a constant dimension is no formula
       return { text: polyText(coeffs), fitted: deg + 1, checked: ns.length - deg - 1, cost: deg };
     }
   }
@@ -95,6 +97,63 @@ function ratioFit(ns: readonly number[], ds: readonly Fraction[]): Fit | undefin
   return { text: `d(n) = (${polyText([beta, alpha])})·d(n-1), d(${n0}) = ${fracText(ds[0]!)}`, fitted: 3, checked: r.length - 2, cost: 3 };
 }
 
+/** The square root of a non-negative rational when it is rational. */
+function ratSqrt(f: Fraction): Fraction | undefined {
+  const root = (m: bigint): bigint | undefined => {
+    if (m < 0n) return undefined;
+    let r = BigInt(Math.floor(Math.sqrt(Number(m))));
+    while (r * r > m) r--;
+    while ((r + 1n) * (r + 1n) <= m) r++;
+    return r * r === m ? r : undefined;
+  };
+  if (f.s < 0n) return undefined;
+  const a = root(f.n);
+  const b = root(f.d);
+  return a === undefined || b === undefined ? undefined : frac(a, b);
+}
+
+function termText(c: Fraction, base: Fraction, first: boolean): string {
+  const neg = c.compare(0) < 0;
+  const mag = c.abs();
+  const pow = base.equals(1) ? '' : `${base.compare(0) < 0 || !base.equals(base.floor()) ? `(${fracText(base)})` : fracText(base)}^n`;
+  const num = mag.equals(1) && pow ? '' : fracText(mag);
+  const body = num && pow ? `${num}·${pow}` : num || pow;
+  return first ? `${neg ? '-' : ''}${body}` : `${neg ? '-' : '+'} ${body}`;
+}
+
+/**
+ * d(n) = α·d(n−1) + β·d(n−2), fitted on the first four sizes and checked on the rest; written
+ * A·r^n + B·s^n when the characteristic roots are distinct rationals (2^n − 1, 3^n − 2^n, …).
+ */
+function recurrenceFit(ns: readonly number[], ds: readonly Fraction[]): Fit | undefined {
+  const consecutive = ns.every((n, i) => i === 0 || n === ns[i - 1]! + 1);
+  if (!consecutive || ds.length < 5) return undefined;
+  const [d0, d1, d2, d3] = ds as [Fraction, Fraction, Fraction, Fraction];
+  // d2 = α d1 + β d0, d3 = α d2 + β d1
+  const det = d1.mul(d1).sub(d2.mul(d0));
+  if (det.equals(0)) return undefined;
+  const alpha = d2.mul(d1).sub(d3.mul(d0)).div(det);
+  const beta = d1.mul(d3).sub(d2.mul(d2)).div(det);
+  for (let i = 4; i < ds.length; i++) if (!alpha.mul(ds[i - 1]!).add(beta.mul(ds[i - 2]!)).equals(ds[i]!)) return undefined;
+  if (beta.equals(0)) return undefined; // a constant ratio: ratioFit
+  const n0 = ns[0]!;
+  const disc = ratSqrt(alpha.mul(alpha).add(beta.mul(4)));
+  let text = `d(n) = ${polyText([frac(0), alpha]).replace('n', 'd(n-1)')} ${beta.compare(0) < 0 ? '-' : '+'} ${beta.abs().equals(1) ? '' : `${fracText(beta.abs())}·`}d(n-2), d(${n0}) = ${fracText(d0)}, d(${n0 + 1}) = ${fracText(d1)}`;
+  if (disc && !disc.equals(0)) {
+    const r = alpha.add(disc).div(2);
+    const s = alpha.sub(disc).div(2);
+    // d(n) = A r^n + B s^n from d(n0), d(n0+1)
+    const rn = r.pow(n0);
+    const sn = s.pow(n0);
+    const B = d1.sub(d0.mul(r)).div(sn.mul(s.sub(r)));
+    const A = d0.sub(B.mul(sn)).div(rn);
+    const terms = [[A, r], [B, s]].filter(([c]) => !c!.equals(0)) as [Fraction, Fraction][];
+    terms.sort((x, y) => y[1].compare(x[1]));
+    text = terms.map(([c, b], i) => termText(c, b, i === 0)).join(' ');
+  }
+  return { text, fitted: 4, checked: ds.length - 4, cost: 2.5 };
+}
+
 /** The places of a line in slices along n: all of them (no k), or each fixed k and each fixed n − k. */
 function slices(data: readonly ModuleData[]): { label: string; data: ModuleData[] }[] {
   const hasK = data.some((d) => d.k !== undefined);
@@ -116,7 +175,7 @@ export function dimensionFindings(data: readonly ModuleData[]): SweepFinding[] {
     if (s.data.length < 3) continue;
     const ns = s.data.map((d) => d.n);
     const ds = s.data.map((d) => frac(d.dimension));
-    const fits = [polynomialFit(ns, ds), ratioFit(ns, ds)].filter((f): f is Fit => f !== undefined);
+    const fits = [polynomialFit(ns, ds), ratioFit(ns, ds), recurrenceFit(ns, ds)].filter((f): f is Fit => f !== undefined);
     fits.sort((a, b) => b.checked - a.checked || a.cost - b.cost);
     const best = fits[0];
     if (!best) continue;

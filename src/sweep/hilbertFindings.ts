@@ -12,7 +12,7 @@ import { findRecurrences } from '../match/recurrence.js';
 import { finding, placesText, type SweepFinding } from './findings.js';
 import type { ModuleData } from './moduleData.js';
 
-const EXACT = 'exact equality of every coefficient (each module confirmed by two primes)';
+const EXACT = 'exact equality of every coefficient, each module confirmed by two primes';
 
 interface Grading {
   readonly name: string;
@@ -36,7 +36,7 @@ function productFinding(data: readonly ModuleData[], g: Grading): SweepFinding |
     if (formula) return finding('product', `Hilbert series ${g.name} = ${formula.text}`, `${EXACT}; one formula in n${data.some((d) => d.k !== undefined) ? ' and k' : ''} fitted and checked on ${placesText(places)}`, places);
   }
   const each = data.map((d, i) => `${data.length > 1 ? `n=${d.n}${d.k !== undefined ? `,k=${d.k}` : ''}: ` : ''}${qProductText(products[i]!)}`);
-  return finding('product', `Hilbert series ${g.name} = ${each.join('; ')}`, `${EXACT} (exact cyclotomic factorisation)`, places);
+  return finding('product', `Hilbert series ${g.name} = ${each.join('; ')}`, `exact cyclotomic factorisation of every Hilbert series, each module confirmed by two primes`, places);
 }
 
 interface Named {
@@ -91,7 +91,7 @@ function namedFinding(data: readonly ModuleData[], g: Grading): SweepFinding | u
         if (!ok || products === data.length) continue;
         const places = data.map((d) => ({ n: d.n, ...(d.k !== undefined ? { k: d.k } : {}) }));
         const body = named.text(map.N, map.K);
-        return finding('q-analog', `Hilbert series ${g.name} = ${reversed ? `rev_q(${body})` : body}`, `${EXACT} with the q-analog (q-Stirling numbers by their recurrence) on ${placesText(places)}`, places);
+        return finding('q-analog', `Hilbert series ${g.name} = ${reversed ? `rev_q(${body})` : body}`, `${EXACT}, against the q-analog (q-Stirling numbers by their recurrence), on ${placesText(places)}`, places);
       }
     }
   }
@@ -112,8 +112,8 @@ export function hilbertFindings(data: readonly ModuleData[]): SweepFinding[] {
   if (data.length === 0) return [];
   const out: SweepFinding[] = [];
   const gs = gradings(data);
-  const product = gs.map((g) => productFinding(data, g)).find(Boolean);
-  if (product) out.push(product);
+  const products = gs.map((g) => productFinding(data, g)).filter((f): f is SweepFinding => f !== undefined);
+  if (products.length) out.push(products.length === 1 ? products[0]! : { ...products[0]!, claim: products.map((p) => p.claim).join('; ') });
   else {
     const named = gs.map((g) => namedFinding(data, g)).find(Boolean);
     if (named) out.push(named);
