@@ -45,7 +45,9 @@ export interface SweepAnalysis {
 }
 
 /** −1 when a ranks above b: heaviest findings first, kind by kind; then more places; then plan order. */
-export function compareRows(a: Pick<SweepRow, 'findings' | 'places' | 'id'>, b: Pick<SweepRow, 'findings' | 'places' | 'id'>): number {
+type Rankable = Pick<SweepRow, 'findings' | 'id'> & { readonly places: readonly unknown[] };
+
+export function compareRows(a: Rankable, b: Rankable): number {
   const wa = [...new Set(a.findings.map((f) => FINDING_WEIGHT[f.kind]))].sort((x, y) => y - x);
   const wb = [...new Set(b.findings.map((f) => FINDING_WEIGHT[f.kind]))].sort((x, y) => y - x);
   for (let i = 0; i < Math.max(wa.length, wb.length); i++) {

@@ -1,6 +1,6 @@
 /**
  * What a sweep reports about a seed, most remarkable first: a closed Frobenius expression,
- * a product formula in q-integers, a named q-analog, a statistic with the same distribution,
+ * a product of q-integers (then a quotient of such products, as a q-binomial), a named q-analog, a statistic with the same distribution,
  * a recurrence, a dimension formula in n, Schur positivity that the module structure does not
  * give, the ω half-turn symmetry, another seed with the same series, a symmetric or unimodal
  * table. Every finding says what was compared and on which places.
@@ -8,13 +8,14 @@
 import { rangeText } from '../series/target.js';
 import type { Place } from './plan.js';
 
-export const FINDING_KINDS = ['expression', 'product', 'q-analog', 'statistic', 'recurrence', 'dimension', 'schur-unimodal', 'omega-symmetry', 'isomorphism', 'symmetric', 'unimodal'] as const;
+export const FINDING_KINDS = ['expression', 'product', 'quotient', 'q-analog', 'statistic', 'recurrence', 'dimension', 'schur-unimodal', 'omega-symmetry', 'isomorphism', 'symmetric', 'unimodal'] as const;
 export type FindingKind = (typeof FINDING_KINDS)[number];
 
 /** The order of the ranking: a seed's findings are compared kind by kind from the heaviest. */
 export const FINDING_WEIGHT: Readonly<Record<FindingKind, number>> = {
   expression: 100,
   product: 90,
+  quotient: 88,
   'q-analog': 85,
   statistic: 80,
   recurrence: 70,

@@ -1,5 +1,6 @@
 /**
- * Findings on a seed's Hilbert series over its places: a product of q-integers (one formula
+ * Findings on a seed's Hilbert series over its places: a product of q-integers, or a quotient
+ * of such products (one formula
  * in n and k when there are several places, by src/match's cyclotomic recognition), else a
  * named q-analog ([K]_q!·Stir_q(N,K), Stir_q(N,K), [N choose K]_q, possibly q-reversed, with
  * N, K simple in n and k), and a recurrence with q-integer coefficients.
@@ -7,10 +8,18 @@
 import type { Poly } from '../core/poly.js';
 import { qBinomial, qOrderedStirling, qStirling2 } from '../core/qanalogs.js';
 import { recogniseFamily } from '../match/familyFormula.js';
-import { asQProduct, qProductText } from '../match/qProduct.js';
+import { asQProduct, productText, qProductText, type QProduct } from '../match/qProduct.js';
 import { findRecurrences } from '../match/recurrence.js';
-import { finding, placesText, type SweepFinding } from './findings.js';
+import { finding, FINDING_WEIGHT, placesText, type SweepFinding } from './findings.js';
 import type { ModuleData } from './moduleData.js';
+
+/** A genuine product reads as one: q-integers, not factorials with a denominator. */
+function productTextOf(p: QProduct): string {
+  const genuine = [...p.integers.values()].every((e) => e > 0);
+  if (!genuine || [...p.factorials.values()].every((e) => e > 0)) return qProductText(p);
+  const prefix = [...(p.content !== 1n ? [String(p.content)] : []), ...(p.qPower > 0 ? [p.qPower === 1 ? 'q' : `q^${p.qPower}`] : [])];
+  return [...prefix, productText(p.integers, (m) => `[${m}]_q`)].join(' · ');
+}
 
 const EXACT = 'exact equality of every coefficient, each module confirmed by two primes';
 
@@ -31,12 +40,14 @@ function productFinding(data: readonly ModuleData[], g: Grading): SweepFinding |
   // a constant (or c·q^s) is no formula: at least one q-integer factor somewhere
   if (products.some((p) => !p) || products.every((p) => p!.integers.size === 0)) return undefined;
   const places = data.map((d) => ({ n: d.n, ...(d.k !== undefined ? { k: d.k } : {}) }));
+  // a genuine product Π [m]_q^{c_m}, c_m ≥ 0, at every place; else a quotient such as [n choose k]_q
+  const kind = products.every((p) => [...p!.integers.values()].every((e) => e > 0)) ? 'product' : 'quotient';
   if (data.length >= 2) {
     const formula = recogniseFamily(data.map((d) => ({ n: d.n, ...(d.k !== undefined ? { k: d.k } : {}), poly: g.of(d) })));
-    if (formula) return finding('product', `Hilbert series ${g.name} = ${formula.text}`, `${EXACT}; one formula in n${data.some((d) => d.k !== undefined) ? ' and k' : ''} fitted and checked on ${placesText(places)}`, places);
+    if (formula) return finding(kind, `Hilbert series ${g.name} = ${formula.text}`, `${EXACT}; one formula in n${data.some((d) => d.k !== undefined) ? ' and k' : ''} fitted and checked on ${placesText(places)}`, places);
   }
-  const each = data.map((d, i) => `${data.length > 1 ? `n=${d.n}${d.k !== undefined ? `,k=${d.k}` : ''}: ` : ''}${qProductText(products[i]!)}`);
-  return finding('product', `Hilbert series ${g.name} = ${each.join('; ')}`, `exact cyclotomic factorisation of every Hilbert series, each module confirmed by two primes`, places);
+  const each = data.map((d, i) => `${data.length > 1 ? `n=${d.n}${d.k !== undefined ? `,k=${d.k}` : ''}: ` : ''}${productTextOf(products[i]!)}`);
+  return finding(kind, `Hilbert series ${g.name} = ${each.join('; ')}`, `exact cyclotomic factorisation of every Hilbert series, each module confirmed by two primes`, places);
 }
 
 interface Named {
@@ -113,6 +124,8 @@ export function hilbertFindings(data: readonly ModuleData[]): SweepFinding[] {
   const out: SweepFinding[] = [];
   const gs = gradings(data);
   const products = gs.map((g) => productFinding(data, g)).filter((f): f is SweepFinding => f !== undefined);
+  // both gradings in one finding, of the stronger kind (a product before a quotient)
+  products.sort((a, b) => FINDING_WEIGHT[b.kind] - FINDING_WEIGHT[a.kind]);
   if (products.length) out.push(products.length === 1 ? products[0]! : { ...products[0]!, claim: products.map((p) => p.claim).join('; ') });
   else {
     const named = gs.map((g) => namedFinding(data, g)).find(Boolean);

@@ -10,6 +10,7 @@ import { rangeText } from '../series/target.js';
 export const KIND_LABEL: Readonly<Record<FindingKind, string>> = {
   expression: 'expression',
   product: 'q-product',
+  quotient: 'q-quotient',
   'q-analog': 'q-analog',
   statistic: 'statistic',
   recurrence: 'recurrence',
