@@ -1,14 +1,18 @@
 /**
- * Dimension formulas in n, fitted on the first sizes computed and checked on the next ones:
+ * Dimension formulas in n, fitted on the first sizes computed and checked on (at least two of)
+ * the next ones:
  * a polynomial in n (of the least degree that the first points fix), c·r^n, a product
- * d(n) = (αn+β)·d(n−1) (n!, (n+1)!/2, …), or a linear recurrence of order two with constant
- * coefficients (A·r^n + B·s^n when its roots are rational). Exact rationals; a formula is reported only when
+ * d(n) = (αn+β)·d(n−1) (n!, (n+1)!/2, …), A·r^n + B, or a linear recurrence of order two with
+ * constant coefficients (A·r^n + B·s^n when its roots are rational). Exact rationals; a formula is reported only when
  * at least one computed size beyond those it was fitted on agrees.
  */
 import { frac, type Fraction } from '../core/rational.js';
 import { finding, type SweepFinding } from './findings.js';
 import type { ModuleData } from './moduleData.js';
 import type { Place } from './plan.js';
+
+/** Sizes beyond those that fix a formula that must agree with it: one agreeing size proves little. */
+const MIN_CHECKS = 2;
 
 interface Fit {
   readonly text: string;
@@ -55,7 +59,7 @@ function polyText(coeffs: readonly Fraction[]): string {
 
 function polynomialFit(ns: readonly number[], ds: readonly Fraction[]): Fit | undefined {
   // the least degree ≥ 1 whose interpolant on the first points agrees with every later one
-  for (let deg = 1; deg + 2 <= ns.length; deg++) {
+  for (let deg = 1; deg + 1 + MIN_CHECKS <= ns.length; deg++) {
     const coeffs = interpolate(ns.slice(0, deg + 1), ds.slice(0, deg + 1));
     const value = (n: number) => coeffs.reduce((s, c, j) => s.add(c.mul(frac(BigInt(n) ** BigInt(j)))), frac(0));
     if (ns.slice(deg + 1).every((n, i) => value(n).equals(ds[deg + 1 + i]!))) {
@@ -121,9 +125,24 @@ function termText(c: Fraction, base: Fraction, first: boolean): string {
   return first ? `${neg ? '-' : ''}${body}` : `${neg ? '-' : '+'} ${body}`;
 }
 
+/** d(n) = α·d(n−1) + β with α ≠ 0, 1, fitted on the first three sizes: A·α^n + B (2^n − 1, …). */
+function affineFit(ns: readonly number[], ds: readonly Fraction[]): Fit | undefined {
+  const consecutive = ns.every((n, i) => i === 0 || n === ns[i - 1]! + 1);
+  if (!consecutive || ds.length < 4) return undefined;
+  const [d0, d1, d2] = ds as [Fraction, Fraction, Fraction];
+  if (d1.equals(d0)) return undefined;
+  const alpha = d2.sub(d1).div(d1.sub(d0));
+  const beta = d1.sub(alpha.mul(d0));
+  if (alpha.equals(0) || alpha.equals(1) || beta.equals(0)) return undefined; // polynomial or c·r^n: the other fits
+  for (let i = 3; i < ds.length; i++) if (!alpha.mul(ds[i - 1]!).add(beta).equals(ds[i]!)) return undefined;
+  const B = beta.div(frac(1).sub(alpha));
+  const A = d0.sub(B).div(alpha.pow(ns[0]!));
+  return { text: `${termText(A, alpha, true)} ${termText(B, frac(1), false)}`, fitted: 3, checked: ds.length - 3, cost: 2 };
+}
+
 /**
  * d(n) = α·d(n−1) + β·d(n−2), fitted on the first four sizes and checked on the rest; written
- * A·r^n + B·s^n when the characteristic roots are distinct rationals (2^n − 1, 3^n − 2^n, …).
+ * A·r^n + B·s^n when the characteristic roots are distinct rationals (3^n − 2^n, …).
  */
 function recurrenceFit(ns: readonly number[], ds: readonly Fraction[]): Fit | undefined {
   const consecutive = ns.every((n, i) => i === 0 || n === ns[i - 1]! + 1);
@@ -175,7 +194,7 @@ export function dimensionFindings(data: readonly ModuleData[]): SweepFinding[] {
     if (s.data.length < 3) continue;
     const ns = s.data.map((d) => d.n);
     const ds = s.data.map((d) => frac(d.dimension));
-    const fits = [polynomialFit(ns, ds), ratioFit(ns, ds), recurrenceFit(ns, ds)].filter((f): f is Fit => f !== undefined);
+    const fits = [polynomialFit(ns, ds), ratioFit(ns, ds), affineFit(ns, ds), recurrenceFit(ns, ds)].filter((f): f is Fit => f !== undefined && f.checked >= MIN_CHECKS);
     fits.sort((a, b) => b.checked - a.checked || a.cost - b.cost);
     const best = fits[0];
     if (!best) continue;

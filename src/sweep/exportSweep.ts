@@ -17,8 +17,9 @@ function rowsOf(d: SweepDocument, limit: number): SweepRow[] {
   return d.rows.filter((r) => r.places.length > 0).slice(0, limit);
 }
 
+/** Text inside Markdown: the characters that would start emphasis, code or a table cell escaped. */
 function md(text: string): string {
-  return text.replace(/\|/g, '\\|').replace(/\n/g, ' ');
+  return text.replace(/[\\`*_|]/g, (c) => `\\${c}`).replace(/\n/g, ' ');
 }
 
 export function sweepMarkdown(d: SweepDocument, limit: number): string {

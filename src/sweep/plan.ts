@@ -103,8 +103,9 @@ function seedLines(spec: SweepSpec): { seed: string; template?: string; at: Seed
         at: places.map((p) => {
           const height = heightAt(h, p.k!);
           if (height === undefined) return { place: p, why: `height ${heightItemText(h)} is out of range at k = ${p.k}` };
-          // the default height k−1 is left implicit, so the request has the same key as `module` without --height
-          return { place: p, spec: { seed: 'superspace-vandermonde', n: p.n, k: p.k!, ...(height === p.k! - 1 ? {} : { height }) } };
+          // the default height k−1 is left implicit (and at k = n no position carries it), so the
+          // request has the key of `module` without --height
+          return { place: p, spec: { seed: 'superspace-vandermonde', n: p.n, k: p.k!, ...(height === p.k! - 1 || p.k === p.n ? {} : { height }) } };
         }),
       }));
     case 'staircase':

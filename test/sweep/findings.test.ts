@@ -27,8 +27,8 @@ describe('dimension formulas (common practice: closed forms checked on the sizes
   it('finds n!, 2^n − 1, 3^n − 2^n and a polynomial, each fitted on the first sizes and checked on the rest', () => {
     const cases: [number[], string, string][] = [
       [[1, 2, 6, 24, 120], 'n!', 'fitted on n = 1, 2, 3, checked on n = 4, 5'],
-      [[1, 3, 7, 15, 31], '2^n - 1', 'fitted on n = 1, 2, 3, 4, checked on n = 5'],
-      [[1, 5, 19, 65, 211], '3^n - 2^n', 'fitted on n = 1, 2, 3, 4, checked on n = 5'],
+      [[1, 3, 7, 15, 31], '2^n - 1', 'fitted on n = 1, 2, 3, checked on n = 4, 5'],
+      [[1, 5, 19, 65, 211, 665], '3^n - 2^n', 'fitted on n = 1, 2, 3, 4, checked on n = 5, 6'],
       [[1, 3, 6, 10, 15], '1/2·n^2 + 1/2·n', 'fitted on n = 1, 2, 3, checked on n = 4, 5'],
     ];
     for (const [ds, text, verified] of cases) {
@@ -38,8 +38,10 @@ describe('dimension formulas (common practice: closed forms checked on the sizes
     }
   });
 
-  it('reports nothing for (n+1)^(n−1) (no form of the menu) or a constant', () => {
+  it('reports nothing for (n+1)^(n−1) (no form of the menu), a constant, or a fit checked on one size only', () => {
     expect(dimensionFindings(dims([1, 3, 16, 125, 1296]))).toEqual([]);
+    expect(dimensionFindings(dims([1, 6, 36], 2))).toEqual([]);
+    expect(dimensionFindings(dims([1, 5, 19, 65, 211]))).toEqual([]);
     expect(dimensionFindings(dims([4, 4, 4, 4]))).toEqual([]);
   });
 });
