@@ -79,6 +79,7 @@ export async function computeModules(modules: readonly PlannedModule[], hooks: C
   };
   await Promise.all(Array.from({ length: Math.min(threads, small.length) }, lane));
   for (const m of large) {
+    if (hooks.signal?.aborted) throw new TaskCancelled();
     let outcome: ModuleOutcome;
     try {
       const c = await compute(withLimit(m.request, hooks.maxWork), hooks.signal ? { signal: hooks.signal } : {});
