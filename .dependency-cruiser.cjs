@@ -6,6 +6,7 @@
  *   src/requests (the request model over the engines)   src/store (the catalogue)
  *   src/cluster (sharded runs: over requests and store; only src/cli imports it)
  *   src/match (search over the store, targets from requests)
+ *   src/sweep (scans of seed families; beside src/match, below export; only the front ends import it)
  *   src/export
  *   front ends: src/ui, src/cli (only src/cli and bin/ import src/cli)
  * A module may import its own layer and the layers below; never a layer above, and no cycles.
@@ -25,6 +26,8 @@ module.exports = {
     { name: 'requests-below-store-match', severity: 'error', from: { path: '^src/requests/' }, to: { path: '^src/(store|match|export|cli|ui)/' } },
     { name: 'store-below-match', severity: 'error', from: { path: '^src/store/' }, to: { path: '^src/(requests|match|export|cli|ui)/' } },
     { name: 'match-below-export', severity: 'error', from: { path: '^src/match/' }, to: { path: '^src/(export|cli|ui)/' } },
+    { name: 'sweep-below-export', severity: 'error', from: { path: '^src/sweep/' }, to: { path: '^src/(export|cli|ui)/' } },
+    { name: 'only-front-ends-import-the-sweep', severity: 'error', from: { pathNot: '^(src/(sweep|cli|ui)/|bin/)' }, to: { path: '^src/sweep/' } },
     { name: 'export-below-front-ends', severity: 'error', from: { path: '^src/export/' }, to: { path: '^src/(cli|ui)/' } },
     { name: 'cluster-over-requests-and-store', severity: 'error', from: { path: '^src/cluster/' }, to: { path: '^src/(match|export|cli|ui)/' } },
     { name: 'only-the-cli-imports-the-cluster', severity: 'error', from: { pathNot: '^(src/cli/|src/cluster/)' }, to: { path: '^src/cluster/' } },

@@ -18,6 +18,7 @@ import { HelpScreen } from './screens/HelpScreen.js';
 import { ModulesScreen } from './screens/ModulesScreen.js';
 import { SearchScreen } from './screens/SearchScreen.js';
 import { StatisticsScreen } from './screens/StatisticsScreen.js';
+import { SweepScreen } from './screens/SweepScreen.js';
 import { SymfunScreen } from './screens/SymfunScreen.js';
 import { TourScreen } from './screens/TourScreen.js';
 import { addItem, EMPTY_SESSION, type NewItem, type Session } from './session.js';
@@ -40,6 +41,7 @@ const SCREEN_COMPONENTS: Readonly<Record<ScreenId, (p: ScreenProps) => ReactElem
   symfun: SymfunScreen,
   search: SearchScreen,
   export: ExportScreen,
+  sweep: SweepScreen,
   help: HelpScreen,
 };
 

@@ -1,6 +1,6 @@
 /** The screens of the app, in tab order, with their jump keys and help-line keys. */
 
-export type ScreenId = 'tour' | 'families' | 'statistics' | 'modules' | 'symfun' | 'search' | 'export' | 'help';
+export type ScreenId = 'tour' | 'families' | 'statistics' | 'modules' | 'symfun' | 'search' | 'export' | 'sweep' | 'help';
 
 export interface KeyHelp {
   readonly keys: string;
@@ -116,6 +116,23 @@ export const SCREENS: readonly ScreenInfo[] = [
     ],
   },
   {
+    id: 'sweep',
+    jump: '8',
+    tab: 'Sweep',
+    title: 'Sweep a family of seeds and rank what is remarkable',
+    keys: [
+      { keys: 'Enter', action: 'run the sweep' },
+      { keys: 'e', action: 'edit the sweep' },
+      { keys: 's', action: 'next example sweep' },
+      { keys: 'x', action: 'cancel' },
+      { keys: '↑/↓ PgUp/PgDn', action: 'select a seed' },
+      { keys: 'o', action: 'open its module (←/→ other places, Esc back)' },
+      { keys: 'g', action: 'search its Hilbert series' },
+      { keys: 'f', action: 'export format' },
+      { keys: 'w / W', action: 'write the table / overwrite' },
+    ],
+  },
+  {
     id: 'help',
     jump: '?',
     tab: 'Help',
@@ -126,7 +143,7 @@ export const SCREENS: readonly ScreenInfo[] = [
 
 export const GLOBAL_KEYS: readonly KeyHelp[] = [
   { keys: 'Tab / Shift+Tab', action: 'next / previous screen' },
-  { keys: '1–7', action: 'jump to a screen (when no field is being edited)' },
+  { keys: '1–8', action: 'jump to a screen (when no field is being edited)' },
   { keys: '?', action: 'this help' },
   { keys: 'Esc', action: 'leave the field being edited (Enter submits it; Ctrl+U clears it)' },
   { keys: 'q or Ctrl+C', action: 'quit (Ctrl+C also while editing)' },

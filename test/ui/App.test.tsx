@@ -35,7 +35,7 @@ describe('app shell', () => {
     await press(r, KEYS.tab);
     expect(frame(r)).toContain('[2Families]');
     await press(r, KEYS.shiftTab, KEYS.shiftTab);
-    expect(frame(r)).toContain('[7Export]');
+    expect(frame(r)).toContain('[8Sweep]');
   });
 
   it('uses the room of a larger terminal', async () => {

@@ -18,6 +18,7 @@ export const COMMAND_ENTRIES: readonly CommandEntry[] = [
   { name: 'module', load: async () => (await import('./module.js')).moduleCommand },
   { name: 'quotient', load: async () => (await import('./quotient.js')).quotientCommand },
   { name: 'search', load: async () => (await import('./search.js')).searchCommand },
+  { name: 'sweep', load: async () => (await import('./sweep.js')).sweepCommand },
   { name: 'catalogue', load: async () => (await import('./catalogue.js')).catalogueCommand },
   { name: 'cluster', load: async () => (await import('./cluster.js')).clusterCommand },
   { name: 'export', load: async () => (await import('./export.js')).exportCommand },
