@@ -31,10 +31,14 @@ export function ExportScreen(props: ScreenProps) {
   const [field, setField] = useEditField<'name' | 'open'>(props.active, props.setEditing);
   const [last, setLast] = useState<Written | undefined>(undefined);
   const scroll = useScroll();
-  // The newest result is selected once, then the selection stays on that result.
+  // Until the user picks a result here, the newest is selected while the screen is hidden;
+  // once shown (or picked), the selection stays on that result whatever arrives later.
+  const [picked, setPicked] = useState(false);
+  const newest = items[0]?.id;
   useEffect(() => {
-    if ((selId === undefined || !items.some((x) => x.id === selId)) && items[0]) setSelId(items[0].id);
-  }, [selId, items]);
+    const missing = selId === undefined || !items.some((x) => x.id === selId);
+    if (newest !== undefined && (missing || (!props.active && !picked))) setSelId(newest);
+  }, [selId, items, newest, props.active, picked]);
   const at = Math.max(0, items.findIndex((x) => x.id === selId));
   const item = items[at];
   const formats = item ? formatsFor(item) : [];
@@ -60,7 +64,7 @@ export function ExportScreen(props: ScreenProps) {
       if (key.upArrow || key.downArrow) {
         const next = items[Math.max(0, Math.min(items.length - 1, at + (key.upArrow ? -1 : 1)))];
         if (next) setSelId(next.id);
-        return;
+        return setPicked(true);
       }
       if (key.leftArrow || key.rightArrow) {
         if (formats.length === 0) return;

@@ -70,8 +70,10 @@ function FamiliesView(props: ScreenProps & { families: readonly Family<unknown>[
 
   const key = `${family.id} ${paramsToText(params)}`;
   if (stream.current.key !== key) stream.current = { key, seen: [], iterator: undefined, error: undefined };
+  let counted: number | undefined;
   try {
-    family.count(params);
+    const c = family.count(params);
+    counted = c <= BigInt(Number.MAX_SAFE_INTEGER) ? Number(c) : undefined;
   } catch (e) {
     stream.current.error ??= errorText(e, 'families');
   }
@@ -158,7 +160,7 @@ function FamiliesView(props: ScreenProps & { families: readonly Family<unknown>[
   take(stream.current, family, params, offset + room + 1);
   const objs = stream.current.seen;
   const ended = objs[objs.length - 1] === DONE;
-  const total = ended ? objs.length - 1 : Infinity;
+  const total = ended ? objs.length - 1 : (counted ?? Infinity);
   const off = Math.min(offset, Math.max(0, (ended ? total : objs.length) - 1));
   const undefinedWhy = new Map<string, string>();
   const rows: SLine[][] = [];
@@ -206,11 +208,11 @@ function FamiliesView(props: ScreenProps & { families: readonly Family<unknown>[
   const firstShown = off + 1;
   const lastShown = off + count;
   drawn.current = { page: Math.max(1, count), total };
-  const below = ended ? total - lastShown : undefined;
+  const below = Number.isFinite(total) ? total - lastShown : undefined;
   const body: SLine[] = [];
   if (stream.current.error) body.push(...wrapLine(line(`✗ ${stream.current.error}`, 'error'), w, 2));
   else {
-    body.push(line(`objects ${firstShown}–${lastShown}${ended ? ` of ${total}` : ''}${side > 0 ? `, shifted ${side} columns (<)` : ''}`, 'dim'));
+    body.push(line(`objects ${firstShown}–${lastShown}${Number.isFinite(total) ? ` of ${total}` : ''}${side > 0 ? `, shifted ${side} columns (<)` : ''}`, 'dim'));
     body.push(...notes);
     if (above > 0) body.push(line(`↑ ${above} object${above === 1 ? '' : 's'} above (↑/PgUp)`, 'dim'));
     body.push(...shown.map((l) => sliceLine(l, side, w)));
