@@ -40,6 +40,8 @@ export interface AppProps {
   readonly initialScreen?: ScreenId;
   /** A session file to open at start. */
   readonly sessionFile?: string;
+  /** The key queue to use (tests watch it to know when every key sent has been handled). */
+  readonly keyBus?: KeyBus;
 }
 
 const SCREEN_COMPONENTS: Readonly<Record<ScreenId, (p: ScreenProps) => ReactElement | null>> = {
@@ -82,7 +84,7 @@ function freshSessionPath(dir: string): string {
 export function App(props: AppProps) {
   const env = props.env ?? process.env;
   const theme = useMemo(() => makeTheme(env), [env]);
-  const bus = useMemo(() => new KeyBus(), []);
+  const bus = useMemo(() => props.keyBus ?? new KeyBus(), [props.keyBus]);
   return (
     <KeysContext.Provider value={bus}>
       <ThemeContext.Provider value={theme}>

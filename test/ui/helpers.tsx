@@ -5,6 +5,7 @@
 import { EventEmitter } from 'node:events';
 import { render } from 'ink';
 import { App, type AppProps } from '../../src/ui/App.js';
+import { KeyBus } from '../../src/ui/keys/keyBus.js';
 import { cellWidth } from '../../src/ui/text/cellWidth.js';
 
 export const KEYS = {
@@ -62,6 +63,8 @@ class TestStdin extends EventEmitter {
 
 export interface Rendered {
   readonly stdin: { write(s: string): void };
+  /** Keys sent but not yet handled and drawn. */
+  keysPending(): number;
   lastFrame(): string;
   /** Draw the same app (same state) in a terminal of another size. */
   resize(columns: number, rows: number): void;
@@ -72,7 +75,8 @@ export interface Rendered {
 export function renderApp(props: Partial<AppProps> = {}, columns = props.size?.columns ?? 80, rows = props.size?.rows ?? 24): Rendered {
   const stdout = new TestStdout(columns, rows);
   const stdin = new TestStdin();
-  const tree = (c: number, r: number) => <App env={{ NO_COLOR: '1' }} {...props} size={{ columns: c, rows: r }} />;
+  const bus = new KeyBus();
+  const tree = (c: number, r: number) => <App env={{ NO_COLOR: '1' }} {...props} size={{ columns: c, rows: r }} keyBus={bus} />;
   const instance = render(tree(columns, rows), {
     stdout: stdout as unknown as NodeJS.WriteStream,
     stderr: new TestStdout(columns, rows) as unknown as NodeJS.WriteStream,
@@ -88,6 +92,7 @@ export function renderApp(props: Partial<AppProps> = {}, columns = props.size?.c
   );
   return {
     stdin,
+    keysPending: () => bus.pending(),
     lastFrame: () => stdout.last,
     resize(c, r) {
       stdout.columns = c;
@@ -104,18 +109,22 @@ export function frame(r: Rendered): string {
   return r.lastFrame() ?? '';
 }
 
-/** Wait until the frame has not changed for a while (every queued key handled and drawn). */
-export async function idle(r: Rendered, quietMs = 150, timeoutMs = 10_000): Promise<string> {
+/**
+ * Wait until every key sent has been handled and the frame has stayed the same for a few
+ * looks in a row (counted in looks, not time: an engine running on this thread may hold the
+ * clock still between two looks).
+ */
+export async function idle(r: Rendered, quietLooks = 6, timeoutMs = 15_000): Promise<string> {
   const t0 = Date.now();
   let last = frame(r);
-  let since = Date.now();
+  let quiet = 0;
   while (Date.now() - t0 < timeoutMs) {
     await sleep(25);
     const f = frame(r);
-    if (f !== last) {
+    if (f !== last || r.keysPending() > 0) {
       last = f;
-      since = Date.now();
-    } else if (Date.now() - since >= quietMs) return f;
+      quiet = 0;
+    } else if (++quiet >= quietLooks) return f;
   }
   return last;
 }
@@ -124,7 +133,7 @@ export async function idle(r: Rendered, quietMs = 150, timeoutMs = 10_000): Prom
 export async function press(r: Rendered, ...keys: string[]): Promise<void> {
   for (const k of keys) {
     r.stdin.write(k);
-    await idle(r, 60);
+    await idle(r, 3);
   }
 }
 

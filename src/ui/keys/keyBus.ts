@@ -55,8 +55,9 @@ export class KeyBus {
     this.queue.length = 0;
   }
 
+  /** Keys queued or being handled (0 when every key sent so far has been handled and drawn). */
   pending(): number {
-    return this.queue.length;
+    return this.queue.length + (this.pumping ? 1 : 0);
   }
 
   private async pump(): Promise<void> {

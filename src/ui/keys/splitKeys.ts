@@ -80,13 +80,9 @@ function escapeAt(s: string, i: number): { length: number; key: KeyPress | undef
     return { length: j + 1 - i, key: sequenceKey(params, s[j]!) };
   }
   if (next === 'O' && i + 2 < s.length) return { length: 3, key: sequenceKey('', s[i + 2]!) };
-  if (next === '\u001b' && (s[i + 2] === '[' || s[i + 2] === 'O')) {
-    // ESC ESC [ A: Alt+arrow in some terminals; the arrow is what matters here.
-    const inner = escapeAt(s, i + 1);
-    return { length: inner.length + 1, key: inner.key };
-  }
-  // A lone ESC, or ESC followed by an ordinary key: Esc, then that key on its own (an Esc
-  // typed just before another key arrives like this on a slow link).
+  // A lone ESC, or ESC followed by an ordinary key or another ESC: Esc, then that key on its
+  // own (an Esc typed just before another key arrives like this on a slow link; the app has
+  // no Alt+key, which some terminals send the same way).
   return { length: 1, key: press('', { escape: true, meta: true }) };
 }
 
