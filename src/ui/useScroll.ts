@@ -1,7 +1,9 @@
 /**
  * Scrolling of a screen's text: the offset, and the keys that move it (PgUp/PgDn by a page,
  * Home/End to the ends; ↑/↓ by a line where the screen gives them no other use). The window
- * is computed at each draw (text/scrollWindow.ts); keys move from the offset last drawn.
+ * is computed at each draw (text/scrollWindow.ts); keys move from the offset last drawn. A
+ * selection (the focus) is brought into view when it moves; otherwise the user's scrolling
+ * stands, so the lines past a selection can be read too.
  */
 import { useRef, useState } from 'react';
 import type { KeyInfo } from './keys/splitKeys.js';
@@ -17,33 +19,36 @@ export interface Scroll {
 }
 
 export function useScroll(): Scroll {
-  const [offset, setOffset] = useState(0);
-  const drawn = useRef({ offset: 0, page: 1, max: 0 });
+  const [, redraw] = useState(0);
+  // The offset as last drawn (clamped to the text), the page size, and the last focus seen.
+  const state = useRef({ offset: 0, page: 1, max: 0, focus: '' });
+  const move = (to: number) => {
+    state.current.offset = Math.max(0, Math.min(state.current.max, to));
+    redraw((n) => n + 1);
+  };
   return {
     view(all, height, focus, keys) {
-      const w = scrollWindow(all, height, offset, focus, keys);
-      drawn.current = { offset: w.offset, page: Math.max(1, height - 2), max: Math.max(0, all.length - 1) };
+      const s = state.current;
+      const f = focus ? `${focus[0]},${focus[1]}` : '';
+      const moved = f !== s.focus;
+      const w = scrollWindow(all, height, s.offset, moved ? focus : undefined, keys);
+      state.current = { offset: w.offset, page: Math.max(1, height - 2), max: Math.max(0, all.length - 1), focus: f };
       return w;
     },
     handle(_input, key, arrows) {
-      const d = drawn.current;
-      let to: number | undefined;
-      if (key.pageDown) to = d.offset + d.page;
-      else if (key.pageUp) to = d.offset - d.page;
-      else if (key.home) to = 0;
-      else if (key.end) to = d.max;
-      else if (arrows && key.downArrow) to = d.offset + 1;
-      else if (arrows && key.upArrow) to = d.offset - 1;
-      if (to === undefined) return false;
-      const v = Math.max(0, Math.min(d.max, to));
-      // The next draw clamps it to the last page; remember that start for the next key.
-      drawn.current = { ...d, offset: v };
-      setOffset(v);
+      const s = state.current;
+      if (key.pageDown) move(s.offset + s.page);
+      else if (key.pageUp) move(s.offset - s.page);
+      else if (key.home) move(0);
+      else if (key.end) move(s.max);
+      else if (arrows && key.downArrow) move(s.offset + 1);
+      else if (arrows && key.upArrow) move(s.offset - 1);
+      else return false;
       return true;
     },
     reset() {
-      drawn.current = { ...drawn.current, offset: 0 };
-      setOffset(0);
+      move(0);
+      state.current.focus = '';
     },
   };
 }
