@@ -263,7 +263,9 @@ function Shell(props: AppProps & { readonly bus: KeyBus }) {
   // One line each for the tab bar and help line, the status lines, and one spare so the
   // frame never fills the terminal (a full frame makes ink clear the screen on every redraw).
   const bodyHeight = Math.max(6, rows - 3 - statusLines.length);
-  const common = { width, height: bodyHeight, session, sessionPath: sessionFile.path, addItem: add, setCurrent, setEditing, notify, go, saveSession: save, openSession: open, cwd, env };
+  // A file given at start that could not be read as a session is never offered for saving.
+  const savePath = sessionFile.ours || !existsSync(sessionFile.path) ? sessionFile.path : freshSessionPath(cwd);
+  const common = { width, height: bodyHeight, session, sessionPath: savePath, addItem: add, setCurrent, setEditing, notify, go, saveSession: save, openSession: open, cwd, env };
   return (
     <Box flexDirection="column" width={width}>
       <TabBar current={screen} width={width} />

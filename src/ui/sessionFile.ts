@@ -7,7 +7,7 @@
  * command's --json prints, or a saved search). Written atomically; checked with zod (and the
  * target and search checks of their own formats) when read, before anything is shown.
  */
-import { readFileSync, statSync } from 'node:fs';
+import { existsSync, readFileSync, statSync } from 'node:fs';
 import { z } from 'zod';
 import { InputError } from '../core/errors.js';
 import { parseWith } from '../core/schema.js';
@@ -62,9 +62,22 @@ export function sessionText(items: readonly SessionItem[], now = new Date()): st
 
 /** Write the session (an existing file only with `force`, given by `overwriteKey`); returns the bytes written. */
 export function saveSession(items: readonly SessionItem[], path: string, force: boolean, overwriteKey: string): number {
+  if (force && existsSync(path) && !isSessionFile(path)) {
+    throw new InputError(`${path} is not a session file of gradus; it is left alone`, 'session file');
+  }
   const text = sessionText(items);
   appWrite(path, text, force, overwriteKey);
   return Buffer.byteLength(text);
+}
+
+/** A file this program wrote as a session (only such a file is ever replaced). */
+function isSessionFile(path: string): boolean {
+  try {
+    if (statSync(path).size > MAX_SESSION_BYTES) return false;
+    return (JSON.parse(readFileSync(path, 'utf8')) as { format?: unknown }).format === SESSION_FORMAT;
+  } catch {
+    return false;
+  }
 }
 
 /** Read and check a session file; every item is checked before any is returned. */
