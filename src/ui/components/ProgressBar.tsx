@@ -15,6 +15,8 @@ export interface ProgressState {
   readonly elapsedMs: number;
   /** The engine's estimate of the whole run in seconds (wall clock), when it gave one. */
   readonly estimateSeconds?: number | undefined;
+  /** Time since that estimate arrived (the run it estimates starts then). */
+  readonly sinceEstimateMs?: number | undefined;
 }
 
 export function progressText(p: ProgressState): string {
@@ -25,7 +27,9 @@ export function progressText(p: ProgressState): string {
   parts.push(`${formatDuration(elapsed)} elapsed`);
   if (p.estimateSeconds !== undefined) {
     const est = p.estimateSeconds;
-    parts.push(elapsed <= est ? `estimate ~${formatDuration(est)} in all (~${formatDuration(Math.max(0, est - elapsed))} left)` : `over the estimate of ~${formatDuration(est)}`);
+    const since = (p.sinceEstimateMs ?? p.elapsedMs) / 1000;
+    // The engine's cost model counts processor time; a busy machine takes longer.
+    parts.push(since <= est ? `estimate ~${formatDuration(est)} in all (~${formatDuration(Math.max(0, est - since))} left)` : `over the estimate of ~${formatDuration(est)}`);
   } else if (p.total && p.done > 0 && p.elapsedMs > 0) {
     parts.push(`~${formatDuration(((p.total - p.done) * elapsed) / p.done)} left`);
   }

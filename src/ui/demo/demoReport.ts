@@ -48,7 +48,7 @@ export function stepReport(step: number, s: DemoState, withTable: boolean): Repo
     if (s.exported) {
       out.push({ text: `wrote ${s.exported.bytes} bytes of Markdown (the matches with definitions and sources, or what was tried) to`, tone: 'ok' });
       out.push({ text: `  ${s.exported.path}`, tone: 'ok' });
-      out.push({ text: 'The Export screen (7) writes any result of the session, in Markdown or JSON, where you choose.', tone: 'dim' });
+      out.push({ text: 'The Export screen (7) writes any result of the session where you choose (a search in Markdown, LaTeX or JSON), and saves the session (w).', tone: 'dim' });
     }
     else if (s.exportNote) out.push({ text: s.exportNote, tone: 'warn' });
   }

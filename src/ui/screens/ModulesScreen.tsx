@@ -144,7 +144,7 @@ export function ModulesScreen(props: ScreenProps) {
   if (!MODULE_ENGINE_AVAILABLE) status.push(...wrapLine(line('The module engine (src/modules) is not available in this build; nothing can be computed here.', 'warn'), w));
   else if (st.status === 'running' && mine) {
     const p = st.progress;
-    status.push(...progressLines({ label: p?.label ?? 'starting a worker', done: p?.done ?? 0, total: p?.total, elapsedMs: now - st.startedAt, estimateSeconds: p?.estimateSeconds }, w));
+    status.push(...progressLines({ label: p?.label ?? 'starting the engine in a worker thread', done: p?.done ?? 0, total: p?.total, elapsedMs: now - st.startedAt, estimateSeconds: p?.estimateSeconds, sinceEstimateMs: p?.estimatedAt !== undefined ? now - p.estimatedAt : undefined }, w));
   } else if (st.status === 'running') status.push(...wrapLine(line(`computing another request (${jobFor}); x cancels it`, 'dim'), w, 2));
   else if (st.status === 'error' && mine) status.push(...wrapLine(line(`✗ ${st.error}`, 'error'), w, 2));
   else if (st.status === 'cancelled' && mine) status.push(...wrapLine(line(`Cancelled after ${((st.finishedAt - st.startedAt) / 1000).toFixed(1)}s. Enter computes again, e edits the request.`, 'warn'), w, 2));

@@ -114,7 +114,7 @@ export function TourScreen(props: ScreenProps) {
     return wrapLine(line(`${mark} ${i + 1}. ${s.title}`, i < done ? 'ok' : i === done ? 'title' : 'dim'), w, 5);
   });
   const status: SLine[] = run
-    ? progressLines({ label: run.progress?.label ?? 'starting', done: run.progress?.done ?? 0, total: run.progress?.total, elapsedMs: now - run.startedAt, estimateSeconds: run.progress?.estimateSeconds }, w)
+    ? progressLines({ label: run.progress?.label ?? 'starting', done: run.progress?.done ?? 0, total: run.progress?.total, elapsedMs: now - run.startedAt, estimateSeconds: run.progress?.estimateSeconds, sinceEstimateMs: run.progress?.estimatedAt !== undefined ? now - run.progress.estimatedAt : undefined }, w)
     : error
       ? wrapLine(line(`✗ ${error}`, 'error'), w, 2)
       : wrapLine(
