@@ -1,8 +1,7 @@
 /** The search engine's saved-search document as the Search screen shows it. */
 import type { SearchDocument } from '../../match/searchDocument.js';
 import type { SearchOutcome } from './searchTypes.js';
-
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
+import { plural } from '../text/plural.js';
 
 export function triedText(d: SearchDocument): string {
   const t = d.tried;

@@ -13,6 +13,7 @@ import { errorText } from '../errorText.js';
 import { useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
 import { unsavedCount } from '../session.js';
+import { plural } from '../text/plural.js';
 import { line, wrapLine, type SLine } from '../text/styledLine.js';
 import { useEditField } from '../useEditField.js';
 import { useScroll } from '../useScroll.js';
@@ -105,7 +106,7 @@ export function ExportScreen(props: ScreenProps) {
         [
           { text: 'session ', style: 'dim' },
           { text: props.sessionPath },
-          { text: ` (${props.session.items.length} results, ${unsaved} not saved; w saves, o opens a session file)`, style: 'dim' },
+          { text: ` (${plural(props.session.items.length, 'result')}, ${unsaved} not saved; w saves, o opens a session file)`, style: 'dim' },
         ],
         w,
         8,

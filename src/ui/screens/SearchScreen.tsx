@@ -18,12 +18,11 @@ import { errorText } from '../errorText.js';
 import { useKeys, useTicker } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
 import { currentItem } from '../session.js';
+import { plural } from '../text/plural.js';
 import { line, wrapLine, wrapLines, type SLine } from '../text/styledLine.js';
 import { useEditField } from '../useEditField.js';
 import { useJob } from '../useJob.js';
 import { useScroll } from '../useScroll.js';
-
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
 export function SearchScreen(props: ScreenProps) {
   const [field, setField] = useEditField<'coeffs'>(props.active, props.setEditing);

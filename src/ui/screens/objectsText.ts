@@ -1,10 +1,10 @@
-/** "120 objects", "1 object", "? objects" (a count the family cannot give for these parameters). */
+/** "120 objects", "1 object", or "count unknown" when the family cannot count these parameters. */
 import type { Family, Params } from '../../enumerate/plugin.js';
+import { plural } from '../text/plural.js';
 
 export function objectsText(f: Family<unknown>, p: Params): string {
   try {
-    const c = f.count(p);
-    return `${c} object${c === 1n ? '' : 's'}`;
+    return plural(f.count(p), 'object');
   } catch {
     return 'count unknown';
   }
