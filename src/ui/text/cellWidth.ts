@@ -39,16 +39,3 @@ export function cells(s: string): { ch: string; w: number }[] {
   }
   return out;
 }
-
-/** The text cut to at most `width` cells, with … as the last cell when something was cut. */
-export function fitCells(s: string, width: number): string {
-  if (cellWidth(s) <= width) return s;
-  let out = '';
-  let w = 0;
-  for (const c of cells(s)) {
-    if (w + c.w > width - 1) break;
-    out += c.ch;
-    w += c.w;
-  }
-  return out + '…';
-}

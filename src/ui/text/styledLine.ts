@@ -3,7 +3,7 @@
  * knows how many lines its content takes and can scroll it with markers instead of losing it.
  */
 import type { StyleName } from '../theme.js';
-import { cells, cellWidth } from './cellWidth.js';
+import { cells } from './cellWidth.js';
 
 export interface Seg {
   readonly text: string;
@@ -12,14 +12,6 @@ export interface Seg {
 export type SLine = readonly Seg[];
 
 export const line = (text: string, style?: StyleName): SLine => [{ text, ...(style ? { style } : {}) }];
-
-export function lineText(l: SLine): string {
-  return l.map((s) => s.text).join('');
-}
-
-export function lineWidth(l: SLine): number {
-  return cellWidth(lineText(l));
-}
 
 interface Cell {
   readonly ch: string;
