@@ -1,5 +1,6 @@
 #!/usr/bin/env node
 // Starts gradus from its TypeScript sources (tsx compiles them on the fly).
+import { fileURLToPath } from 'node:url';
 import { register } from 'tsx/esm/api';
 
 // A reader that closes the pipe early (`gradus show | head`) ends the run quietly; output that
@@ -18,7 +19,8 @@ for (const stream of [process.stdout, process.stderr]) {
   });
 }
 
-register();
+// The project's tsconfig (JSX runtime and all), wherever gradus is started from.
+register({ tsconfig: fileURLToPath(new URL('../tsconfig.json', import.meta.url)) });
 const { main } = await import('../src/cli/main.ts');
 const code = await main(process.argv.slice(2));
 process.exitCode = code;

@@ -12,6 +12,7 @@ import { seriesAtOne, type Series } from '../series/series.js';
 import { targetFromJson } from '../series/targetFile.js';
 import type { Target } from '../series/target.js';
 import { VERSION } from '../version.js';
+import { publishedSource, withoutNotesCitations } from './publishedSource.js';
 
 export interface Definition {
   readonly id: string;
@@ -37,10 +38,11 @@ export interface ExportModel {
   readonly provenance: { readonly search: SearchDocument['provenance']; readonly exportedBy: string };
 }
 
-function lookup(kind: 'family' | 'statistic' | 'transform', id: string): Definition {
+/** The definition and published source of a family, statistic or transform, as exports print them. */
+export function definitionOf(kind: 'family' | 'statistic' | 'transform', id: string): Definition {
   try {
     const x = kind === 'family' ? familyById(id) : kind === 'statistic' ? statisticById(id) : transformById(id);
-    return { id, description: x.description, source: x.source };
+    return { id, description: withoutNotesCitations(x.description), source: publishedSource(x.source) };
   } catch {
     return { id, description: `(no ${kind} ${id} in this gradus ${VERSION})`, source: 'unknown' };
   }
@@ -50,11 +52,11 @@ export function exportModel(doc: SearchDocument, limit: number): ExportModel {
   const target = targetFromJson(doc.target, 'saved search target');
   const matches = doc.matches.slice(0, limit).map((m) => ({
     match: m,
-    family: lookup('family', m.family),
+    family: definitionOf('family', m.family),
     statistics: m.statistics.map((id) => {
       const i = id.indexOf(':');
-      if (i < 0) return lookup('statistic', id);
-      return { ...lookup('statistic', id.slice(i + 1)), id, via: lookup('transform', id.slice(0, i)) };
+      if (i < 0) return definitionOf('statistic', id);
+      return { ...definitionOf('statistic', id.slice(i + 1)), id, via: definitionOf('transform', id.slice(0, i)) };
     }),
   }));
   return {

@@ -29,3 +29,13 @@ export function latexText(s: string): string {
 export function latexId(id: string): string {
   return `\\mbox{\\texttt{${latexText(id)}}}`;
 }
+
+/**
+ * latexText that may break a line after , ; : / = and - (titles and targets such as
+ * "n=3:1,2,2,1;n=4:…" have no spaces, and would run past the margin).
+ */
+export function latexTextBreakable(s: string): string {
+  let out = '';
+  for (const ch of s) out += latexText(ch) + (',;:/=-'.includes(ch) ? '\\allowbreak{}' : '');
+  return out;
+}

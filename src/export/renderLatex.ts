@@ -1,9 +1,13 @@
-/** An export as a LaTeX fragment that compiles inside any article (no package needed). */
+/**
+ * An export as a LaTeX fragment that compiles inside any article (no package needed). Long text
+ * may break after punctuation; each value is a paragraph of its own, so a long series breaks
+ * across lines and a long list of values across pages.
+ */
 import type { SearchMatch } from '../match/search.js';
 import { byPartitionKey, type Series } from '../series/series.js';
 import type { ExportModel } from './exportModel.js';
 import { flagsText } from './flagsText.js';
-import { latexId, latexText } from './latexText.js';
+import { latexId, latexText, latexTextBreakable } from './latexText.js';
 
 function statLatex(id: string): string {
   const i = id.indexOf(':');
@@ -30,43 +34,57 @@ export function matchLatex(m: SearchMatch): string {
 export function seriesLatex(s: Series): string {
   if (s.kind === 'q' || s.kind === 'qt') return s.poly.toLatex();
   if (s.kind === 'schur') {
-    return [...s.terms].sort(byPartitionKey).map(([l, c]) => `${c.termCount === 1 && c.toLatex() === '1' ? '' : `(${c.toLatex()})\\,`}s_{${l || '\\emptyset'}}`).join(' + ') || '0';
+    return [...s.terms].sort(byPartitionKey).map(([l, c]) => `${c.termCount === 1 && c.toLatex() === '1' ? '' : `(${c.toLatex()})\\,`}s_{${l ? `(${l})` : '\\emptyset'}}`).join(' + ') || '0';
   }
   return [...s.terms].map(([e, c]) => `${c}\\,x^{(${e})}`).join(' + ');
+}
+
+/** A long integer may break between groups of three digits. */
+function breakDigits(d: string): string {
+  if (d.length <= 9) return d;
+  const groups: string[] = [];
+  for (let i = d.length; i > 0; i -= 3) groups.unshift(d.slice(Math.max(0, i - 3), i));
+  return groups.join('\\allowbreak{}');
 }
 
 export function renderLatex(m: ExportModel): string {
   const L: string[] = [];
   L.push('% gradus search export: a LaTeX fragment needing no package (\\input it inside a document)');
-  L.push(`\\section*{Search result: \\texttt{${latexText(m.title)}}}`);
-  L.push(`Target range: ${latexText(m.range)}.`, '');
+  // Ragged right: identifiers and series have few places to break, and a justified line
+  // would rather run past the margin than leave a gap.
+  L.push('\\begingroup\\raggedright');
+  L.push(`\\section*{\\raggedright Search result: ${latexTextBreakable(m.title)}}`);
+  L.push(`Target range: ${latexTextBreakable(m.range)}.`, '');
   const r = m.recognition;
   L.push('\\subsection*{Formula}', '\\begin{itemize}');
-  if (r.formula) L.push(`\\item $f$ = \\texttt{${latexText(r.formula)}} (verified on ${latexText(m.range)})`);
-  for (const x of r.recurrences) L.push(`\\item recurrence: \\texttt{${latexText(x.text)}}${x.name ? ` (${latexText(x.name)})` : ''}, checked on ${x.checked} entries`);
+  if (r.formula) L.push(`\\item $f$ = \\texttt{${latexTextBreakable(r.formula)}} (verified on ${latexTextBreakable(m.range)})`);
+  for (const x of r.recurrences) L.push(`\\item recurrence: \\texttt{${latexTextBreakable(x.text)}}${x.name ? ` (${latexText(x.name)})` : ''}, checked on ${x.checked} entries`);
   L.push(`\\item ${flagsText(r)}`, '\\end{itemize}', '');
   L.push(`\\subsection*{Matches (${m.matches.length} of ${m.totalMatches}, simplest first)}`);
   if (m.matches.length === 0) {
     const t = m.tried;
-    L.push(`No match. Tried ${t.candidates} candidates (${t.sameCount} with the same count at $q=1$) over the families ${latexText(t.families.join(', '))}, with the variants ${latexText(t.variants.join(', '))}.`, '');
+    L.push(`No match. Tried ${t.candidates} candidates (${t.sameCount} with the same count at $q=1$) over the families ${latexTextBreakable(t.families.join(', '))}, with the variants ${latexTextBreakable(t.variants.join(', '))}.`, '');
   } else {
     L.push('\\begin{enumerate}');
     for (const x of m.matches) {
       L.push(`\\item $${matchLatex(x.match)}$`, '\\begin{itemize}');
-      L.push(`\\item verified: ${latexText(x.match.verified)}${x.match.complete ? '' : ' (some entries not checked)'}; parameters ${latexText(x.match.mapping)}; variant ${latexText(x.match.variant)}`);
-      L.push(`\\item family \\texttt{${latexText(x.family.id)}}: ${latexText(x.family.description)} (source: ${latexText(x.family.source)})`);
+      L.push(`\\item verified: ${latexTextBreakable(x.match.verified)}${x.match.complete ? '' : ' (some entries not checked)'}; parameters ${latexTextBreakable(x.match.mapping)}; variant ${latexTextBreakable(x.match.variant)}`);
+      L.push(`\\item family \\texttt{${latexTextBreakable(x.family.id)}}: ${latexText(x.family.description)} (source: ${latexText(x.family.source)})`);
       for (const s of x.statistics) {
-        L.push(`\\item statistic \\texttt{${latexText(s.id)}}: ${latexText(s.description)} (source: ${latexText(s.source)})${s.via ? `, read after \\texttt{${latexText(s.via.id)}}: ${latexText(s.via.description)} (source: ${latexText(s.via.source)})` : ''}`);
+        L.push(`\\item statistic \\texttt{${latexTextBreakable(s.id)}}: ${latexText(s.description)} (source: ${latexText(s.source)})${s.via ? `, read after \\texttt{${latexTextBreakable(s.via.id)}}: ${latexText(s.via.description)} (source: ${latexText(s.via.source)})` : ''}`);
       }
       L.push('\\end{itemize}');
     }
     L.push('\\end{enumerate}');
   }
   L.push('', '\\subsection*{Values}');
-  const hasK = m.table.some((e) => e.k !== undefined);
-  L.push(`\\begin{tabular}{${hasK ? 'rr' : 'r'}p{0.62\\linewidth}r}`, `$n$ & ${hasK ? '$k$ & ' : ''}series & at $1$ \\\\ \\hline`);
-  for (const e of m.table) L.push(`${e.n} & ${hasK ? `${e.k ?? ''} & ` : ''}$${seriesLatex(e.series)}$ & ${e.count} \\\\`);
-  L.push('\\end{tabular}', '');
-  L.push('\\subsection*{Provenance}', `Search: ${latexText(m.provenance.search.method)}; ${latexText(m.provenance.search.time)}; gradus ${latexText(m.provenance.search.version)}. Exported by ${latexText(m.provenance.exportedBy)}.`, '');
+  // One paragraph per entry, hanging after its label: a long series breaks across lines
+  // (after + and -) and a long list across pages, which no table row can do.
+  for (const e of m.table) {
+    const label = `$n=${e.n}${e.k === undefined ? '' : `,\\ k=${e.k}`}$:`;
+    L.push(`\\par\\noindent\\hangindent=2em\\hangafter=1 ${label} $${seriesLatex(e.series)}$\\quad (value at $1$: ${breakDigits(e.count.toString())})\\par`);
+  }
+  L.push('');
+  L.push('\\subsection*{Provenance}', `Search: ${latexText(m.provenance.search.method)}; ${latexText(m.provenance.search.time)}; gradus ${latexText(m.provenance.search.version)}. Exported by ${latexText(m.provenance.exportedBy)}.`, '\\par\\endgroup', '');
   return L.join('\n');
 }

@@ -1,7 +1,7 @@
 /**
  * Results of the data requests a search runs are kept in the catalogue under their canonical
  * request key, so a repeated search (from the command line or the app, with options in any
- * order) does not recompute them. Cheap requests (dist, show, qseries) are not kept.
+ * order) does not recompute them. Cheap requests (dist, show, qanalog) are not kept.
  */
 import type { Provenance } from '../core/provenance.js';
 import type { DataCommand } from '../requests/index.js';

@@ -28,7 +28,8 @@ export function resultToJson(r: ModuleResult): Record<string, unknown> {
 
 const VARS = ['q', 't', 'u'];
 
-function tableLines(table: Nested, axes: readonly string[]): string[] {
+/** The Hilbert table as text lines (one, two or three axes). */
+export function tableLines(table: Nested, axes: readonly string[]): string[] {
   if (axes.length === 1) {
     const row = table as number[];
     const w = Math.max(...row.map((v) => String(v).length), String(row.length - 1).length + 2);
@@ -36,7 +37,9 @@ function tableLines(table: Nested, axes: readonly string[]): string[] {
   }
   if (axes.length === 2) {
     const rows = table as number[][];
-    const w = Math.max(4, ...rows.flat().map((v) => String(v).length + 1));
+    // Wide enough for every value and every column label ("y=10"), with a space before each.
+    const labelW = Math.max(0, ...(rows[0] ?? []).map((_, j) => `${axes[1]}=${j}`.length + 1));
+    const w = Math.max(4, labelW, ...rows.flat().map((v) => String(v).length + 1));
     const head = `  ${''.padEnd(6)}${(rows[0] ?? []).map((_, j) => `${axes[1]}=${j}`.padStart(w)).join('')}`;
     return [head, ...rows.map((row, i) => `  ${`${axes[0]}=${i}`.padEnd(6)}${row.map((v) => String(v).padStart(w)).join('')}`)];
   }

@@ -1,9 +1,11 @@
 // The one worker entry of gradus: register the TypeScript loader in this thread, then run the
 // task named in each message (an export of an engine module) with a throttled progress port.
 // Plain .mjs so that workers start the same way from the command line and under vitest.
+import { fileURLToPath } from 'node:url';
 import { register } from 'tsx/esm/api';
 
-register();
+// The project's tsconfig, whatever the working folder of the program that started the pool.
+register({ tsconfig: fileURLToPath(new URL('../../tsconfig.json', import.meta.url)) });
 
 const modules = new Map();
 

@@ -1,5 +1,5 @@
 /**
- * The request model: every data command (dist, show, module, quotient, sym, qseries) as a
+ * The request model: every data command (dist, show, module, quotient, sym, qanalog) as a
  * typed request with one option table, a canonical key and one engine call. The command
  * line parses and prints; the search, the app and cluster shards call `compute` directly.
  */
@@ -10,7 +10,7 @@ import { distKind } from './dist-request.js';
 import { moduleKind } from './module-request.js';
 import { parseArgs, type ParsedArgs } from './options.js';
 import { quotientKind } from './quotient-request.js';
-import { qseriesKind } from './qseries-request.js';
+import { qanalogKind } from './qanalog-request.js';
 import { DATA_COMMANDS, type CanonicalArgs, type ComputeContext, type DataCommand, type RequestKind } from './request-kind.js';
 import { showKind } from './show-request.js';
 import { symKind } from './sym-request.js';
@@ -20,7 +20,7 @@ export { DATA_COMMANDS } from './request-kind.js';
 export type { DistRequestOf } from './dist-request.js';
 export type { ModuleRequest } from './module-request.js';
 export type { QuotientRequest } from './quotient-request.js';
-export type { QSeriesRequest } from './qseries-request.js';
+export type { QAnalogRequest } from './qanalog-request.js';
 export type { ShowRequest } from './show-request.js';
 export type { SymRequest } from './sym-request.js';
 
@@ -32,7 +32,7 @@ export const REQUEST_KINDS: Readonly<Record<DataCommand, AnyKind>> = {
   module: moduleKind as unknown as AnyKind,
   quotient: quotientKind as unknown as AnyKind,
   sym: symKind as unknown as AnyKind,
-  qseries: qseriesKind as unknown as AnyKind,
+  qanalog: qanalogKind as unknown as AnyKind,
 };
 
 /** A typed request of any data kind. */

@@ -42,7 +42,7 @@ export const MODULE_OPTIONS: readonly OptionSpec[] = [
   { name: 'frobenius', type: 'flag', description: 'also the Schur expansion of every cell' },
   { name: 'prime', type: 'int', description: 'first prime (below 2^26); a second prime always confirms', placeholder: 'P', min: 2, max: 2 ** 26 - 1 },
   { name: 'method', type: 'string', description: `route: ${MODULE_METHODS.join(', ')} (auto: young for derivative operators, iterated otherwise; exact: over Q, small cases)`, placeholder: 'M' },
-  { name: 'max-work', type: 'string', description: `refuse estimated work above W units (default ${DEFAULT_MAX_WORK.toExponential(0)}, about ten minutes)`, placeholder: 'W' },
+  { name: 'max-work', type: 'string', description: `refuse estimated work above W units (default ${DEFAULT_MAX_WORK.toExponential(1).replace('e+', 'e')}, about ten minutes)`, placeholder: 'W' },
   { name: 'resume', type: 'string', description: 'checkpoint file: finished work is appended to it, and a rerun of the same request reads it back instead of recomputing', placeholder: 'FILE' },
 ];
 

@@ -1,12 +1,12 @@
 /**
- * The shape of a data request kind (dist, show, module, quotient, sym, qseries): its one
+ * The shape of a data request kind (dist, show, module, quotient, sym, qanalog): its one
  * option table, the check that turns parsed options into a typed request, the canonical
  * form of a request (which also names it as a cache key), the engine call and its JSON
  * document. The command line, the search and the app all go through these.
  */
 import type { OptionSpec, ParsedArgs, PositionalSpec } from './options.js';
 
-export const DATA_COMMANDS = ['dist', 'show', 'module', 'quotient', 'sym', 'qseries'] as const;
+export const DATA_COMMANDS = ['dist', 'show', 'module', 'quotient', 'sym', 'qanalog'] as const;
 export type DataCommand = (typeof DATA_COMMANDS)[number];
 
 export interface ComputeContext {

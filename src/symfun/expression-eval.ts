@@ -42,7 +42,7 @@ export const EXPRESSION_FUNCTIONS: readonly FunctionDoc[] = [
   { name: 'subs', signature: 'subs(F, t=0)', description: 'set q and/or t to integers (subs(F, q=1, t=1))' },
   { name: 'swap', signature: 'swap(F)', description: 'exchange q and t' },
   { name: 'pleth', signature: 'pleth(F, 1-q)', description: 'plethysm F[X·A] by a q,t-polynomial A with integer coefficients' },
-  { name: 'inner', signature: 'inner(F, G)', description: 'Hall scalar product ⟨F, G⟩ (a scalar)' },
+  { name: 'hall', signature: 'hall(F, G)', description: 'Hall scalar product ⟨F, G⟩, ⟨s_λ, s_μ⟩ = δ (a scalar)' },
   { name: 'hilbert', signature: 'hilbert(F)', description: 'Hilbert series ⟨F, p_1^n⟩ (a scalar)' },
   { name: 'star', signature: 'star(F, G)', description: '*-scalar product, ⟨H̃_λ, H̃_μ⟩_* = δ w_μ (a scalar)' },
 ];
@@ -221,8 +221,8 @@ function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions):
       if (!alpha || !alpha.isIntegral()) fail(b!.col, 'the alphabet must be a polynomial in q, t with integer coefficients, as 1-q');
       return plethysmTimes(f, alpha!.num);
     }
-    case 'inner': {
-      const [a, b] = exprArgs(node, 2, 'inner(F, G)');
+    case 'hall': {
+      const [a, b] = exprArgs(node, 2, 'hall(F, G)');
       return SymFun.scalar(ev(a!).hallInner(ev(b!)));
     }
     case 'star': {

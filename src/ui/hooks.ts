@@ -1,6 +1,7 @@
 /** Small shared hooks. */
-import { useInput, type Key } from 'ink';
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useContext, useEffect, useRef, useState } from 'react';
+import type { KeyHandler, KeyEntry } from './keys/keyBus.js';
+import { KeysContext } from './keys/KeysContext.js';
 
 /** Re-render every `ms` while `on` (a clock for elapsed times and estimates). */
 export function useTicker(on: boolean, ms = 250): number {
@@ -13,29 +14,24 @@ export function useTicker(on: boolean, ms = 250): number {
   return now;
 }
 
-let keyErrorListener: (e: unknown) => void = () => {};
-
-/** Where errors thrown by key handlers go (the app shows them on its status line). */
-export function setKeyErrorListener(f: (e: unknown) => void): void {
-  keyErrorListener = f;
+export interface KeyOptions {
+  /** The shell's own keys: handled before any screen's, and may take the key (return true). */
+  readonly global?: boolean;
+  /** A text field: while active, pasted text reaches it whole. */
+  readonly text?: boolean;
 }
 
 /**
- * useInput whose handler and active flag are always those of the latest render. ink
- * re-subscribes a changed handler (or active flag) only after React's effects run, so a
- * key arriving just after a redraw would otherwise meet the previous render's state.
+ * Keys for a component, through the app's one key queue (keys/keyBus.ts): the handler and
+ * active flag of the latest render are used, and each key is handled only once the previous
+ * one has been drawn, so keys sent together act as keys typed one by one.
  */
-export function useKeys(handler: (input: string, key: Key) => void, isActive: boolean): void {
-  const latest = useRef({ handler, isActive });
-  latest.current = { handler, isActive };
-  const stable = useCallback((input: string, key: Key) => {
-    if (!latest.current.isActive) return;
-    try {
-      latest.current.handler(input, key);
-    } catch (e) {
-      // A key handler that throws (an engine called synchronously) must not end the app.
-      keyErrorListener(e);
-    }
-  }, []);
-  useInput(stable);
+export function useKeys(handler: KeyHandler, isActive: boolean, options: KeyOptions = {}): void {
+  const bus = useContext(KeysContext);
+  bus.renders++;
+  const entry = useRef<KeyEntry | undefined>(undefined);
+  entry.current ??= { handler, active: isActive, global: options.global ?? false, text: options.text ?? false };
+  entry.current.handler = handler;
+  entry.current.active = isActive;
+  useEffect(() => bus.register(entry.current!), [bus]);
 }

@@ -1,14 +1,14 @@
 /**
  * Runs the app in the terminal: switches to the alternate screen (so the shell's text is
  * back after quitting), keeps console output from breaking the frame, and resolves when
- * the user quits (q or Ctrl+C).
+ * the user quits (q or Ctrl+C, confirmed when results are not saved).
  */
 import { render } from 'ink';
 import { App } from './App.js';
 import { errorText } from './errorText.js';
 import type { ScreenId } from './screens.js';
 
-export async function runApp(options: { readonly initialScreen?: ScreenId; readonly cwd: string; readonly env: Readonly<Record<string, string | undefined>> }): Promise<void> {
+export async function runApp(options: { readonly initialScreen?: ScreenId; readonly cwd: string; readonly env: Readonly<Record<string, string | undefined>>; readonly sessionFile?: string }): Promise<void> {
   const out = process.stdout;
   const alt = Boolean(out.isTTY);
   // React reports errors caught by a screen's boundary on console.error with a stack;
@@ -25,8 +25,9 @@ export async function runApp(options: { readonly initialScreen?: ScreenId; reado
   process.on('uncaughtException', fatal);
   process.on('unhandledRejection', fatal);
   try {
-    const instance = render(<App env={options.env} cwd={options.cwd} initialScreen={options.initialScreen} />, {
-      exitOnCtrlC: true,
+    // Ctrl+C is the app's own key: it asks before discarding results that are not saved.
+    const instance = render(<App env={options.env} cwd={options.cwd} initialScreen={options.initialScreen} sessionFile={options.sessionFile} />, {
+      exitOnCtrlC: false,
       patchConsole: true,
     });
     await instance.waitUntilExit();

@@ -11,20 +11,26 @@ export interface ScreenInfo {
   readonly id: ScreenId;
   readonly jump: string;
   readonly tab: string;
+  /** The tab's name in a narrow window. */
+  readonly short: string;
   readonly title: string;
   readonly keys: readonly KeyHelp[];
 }
+
+const SCROLL: KeyHelp = { keys: 'PgUp/PgDn', action: 'scroll' };
 
 export const SCREENS: readonly ScreenInfo[] = [
   {
     id: 'tour',
     jump: '1',
     tab: 'Tour',
+    short: 'Tour',
     title: 'Demo session: a seed of our own, its module, a search, an export',
     keys: [
       { keys: 'Enter', action: 'run the next step' },
       { keys: 'x', action: 'cancel' },
       { keys: '←/→', action: 'show another step' },
+      { keys: '↑/↓ PgUp/PgDn', action: 'scroll' },
       { keys: 'r', action: 'start over' },
     ],
   },
@@ -32,10 +38,12 @@ export const SCREENS: readonly ScreenInfo[] = [
     id: 'families',
     jump: '2',
     tab: 'Families',
+    short: 'Fam',
     title: 'Families of objects with statistics',
     keys: [
       { keys: '←/→', action: 'family' },
       { keys: '↑/↓ PgUp/PgDn', action: 'scroll' },
+      { keys: '</>', action: 'scroll sideways' },
       { keys: 'p', action: 'edit parameters' },
       { keys: 'a', action: 'add statistic' },
       { keys: 's', action: 'change last statistic' },
@@ -46,6 +54,7 @@ export const SCREENS: readonly ScreenInfo[] = [
     id: 'statistics',
     jump: '3',
     tab: 'Statistics',
+    short: 'Stat',
     title: 'Distribution of a statistic, or the joint table of two',
     keys: [
       { keys: '←/→', action: 'family' },
@@ -53,7 +62,8 @@ export const SCREENS: readonly ScreenInfo[] = [
       { keys: 'j', action: 'second statistic (joint table)' },
       { keys: '+/-', action: 'size n' },
       { keys: 'p', action: 'edit parameters' },
-      { keys: '[/]', action: 'scroll the chart' },
+      SCROLL,
+      { keys: '</>', action: 'table columns' },
       { keys: 'g', action: 'send to search' },
       { keys: 'x', action: 'cancel a long count' },
     ],
@@ -62,6 +72,7 @@ export const SCREENS: readonly ScreenInfo[] = [
     id: 'modules',
     jump: '4',
     tab: 'Modules',
+    short: 'Mod',
     title: 'Closure of a seed under operators: Hilbert and Frobenius series',
     keys: [
       { keys: 'e', action: 'edit request' },
@@ -70,6 +81,7 @@ export const SCREENS: readonly ScreenInfo[] = [
       { keys: '+/-', action: 'n' },
       { keys: 'x', action: 'cancel' },
       { keys: 'arrows', action: 'select cell' },
+      SCROLL,
       { keys: 'g', action: 'search the selected row' },
       { keys: 'G', action: 'search the whole table (q,t)' },
     ],
@@ -78,13 +90,14 @@ export const SCREENS: readonly ScreenInfo[] = [
     id: 'symfun',
     jump: '5',
     tab: 'SymFun',
+    short: 'Sym',
     title: 'Symmetric functions: evaluate an expression',
     keys: [
       { keys: 'e', action: 'edit expression' },
       { keys: 'Enter', action: 'evaluate' },
       { keys: '+/-', action: 'size {n}' },
+      { keys: '↑/↓ PgUp/PgDn', action: 'scroll' },
       { keys: 'x', action: 'cancel' },
-      { keys: '↑/↓', action: 'scroll' },
       { keys: 'g', action: 'send to search' },
     ],
   },
@@ -92,13 +105,15 @@ export const SCREENS: readonly ScreenInfo[] = [
     id: 'search',
     jump: '6',
     tab: 'Search',
+    short: 'Srch',
     title: 'Search the catalogue for a series',
     keys: [
+      { keys: 'Enter', action: 'search' },
       { keys: '[/]', action: 'choose the series' },
       { keys: 'e', action: 'type coefficients' },
-      { keys: 'Enter', action: 'search' },
-      { keys: 'x', action: 'cancel' },
       { keys: '↑/↓', action: 'browse candidates' },
+      SCROLL,
+      { keys: 'x', action: 'cancel' },
       { keys: 'b', action: 'build the catalogue' },
     ],
   },
@@ -106,19 +121,24 @@ export const SCREENS: readonly ScreenInfo[] = [
     id: 'export',
     jump: '7',
     tab: 'Export',
-    title: 'Write a result to a file',
+    short: 'Exp',
+    title: 'Write a result to a file; save or open the session',
     keys: [
       { keys: '↑/↓', action: 'result' },
       { keys: '←/→', action: 'format' },
-      { keys: 'e', action: 'edit file name' },
       { keys: 'Enter', action: 'write' },
+      { keys: 'e', action: 'edit file name' },
       { keys: 'f', action: 'overwrite an existing file' },
+      { keys: 'w', action: 'save the session' },
+      { keys: 'o', action: 'open a session file' },
+      SCROLL,
     ],
   },
   {
     id: 'sweep',
     jump: '8',
     tab: 'Sweep',
+    short: 'Swp',
     title: 'Sweep a family of seeds and rank what is remarkable',
     keys: [
       { keys: 'Enter', action: 'run the sweep' },
@@ -136,23 +156,27 @@ export const SCREENS: readonly ScreenInfo[] = [
     id: 'help',
     jump: '?',
     tab: 'Help',
+    short: 'Help',
     title: 'Every key of every screen',
-    keys: [{ keys: '↑/↓', action: 'scroll' }],
+    keys: [
+      { keys: '↑/↓ PgUp/PgDn', action: 'scroll' },
+      { keys: 'Esc or ?', action: 'back' },
+    ],
   },
 ];
 
 export const GLOBAL_KEYS: readonly KeyHelp[] = [
   { keys: 'Tab / Shift+Tab', action: 'next / previous screen' },
   { keys: '1–8', action: 'jump to a screen (when no field is being edited)' },
-  { keys: '?', action: 'this help' },
-  { keys: 'Esc', action: 'leave the field being edited (Enter submits it; Ctrl+U clears it)' },
-  { keys: 'q or Ctrl+C', action: 'quit (Ctrl+C also while editing)' },
+  { keys: '?', action: 'this help; ? or Esc goes back' },
+  { keys: 'Esc', action: 'leave the field being edited, keeping what it held before (Enter submits it; Ctrl+U clears it)' },
+  { keys: 'q or Ctrl+C', action: 'quit; asks first when results of the session are not saved (Ctrl+C also while editing)' },
 ];
 
 /** The help line while a text field is being edited. */
 export const EDIT_KEYS: readonly KeyHelp[] = [
   { keys: 'Enter', action: 'submit' },
-  { keys: 'Esc', action: 'leave' },
+  { keys: 'Esc', action: 'cancel' },
   { keys: '←/→ Home/End', action: 'move' },
   { keys: 'Ctrl+U', action: 'clear' },
 ];

@@ -1,6 +1,6 @@
 /**
- * Which text field of a screen is being edited (or none). Tells the shell, so global keys
- * stay out of the way while typing, and drops the field when the screen is left.
+ * Which text field of a screen is being edited (or none). Tells the shell (for the help
+ * line), and drops the field when the screen is left.
  */
 import { useCallback, useEffect, useState } from 'react';
 
@@ -12,9 +12,15 @@ export function useEditField<F extends string>(
   useEffect(() => {
     if (!active) setField(undefined);
   }, [active]);
+  const set = useCallback(
+    (f: F | undefined) => {
+      setField(f);
+      setEditing(f !== undefined);
+    },
+    [setEditing],
+  );
   useEffect(() => {
     if (active) setEditing(field !== undefined);
   }, [active, field, setEditing]);
-  const set = useCallback((f: F | undefined) => setField(f), []);
   return [field, set];
 }

@@ -3,7 +3,7 @@
  * new job cancels the old one; leaving the app cancels whatever still runs.
  */
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { errorText } from './errorText.js';
+import { appWords, errorText, type Place } from './errorText.js';
 import { JobCancelled, JobError, type Job, type JobProgress } from './engines/workerJob.js';
 
 export type JobStatus = 'idle' | 'running' | 'done' | 'error' | 'cancelled';
@@ -19,12 +19,13 @@ export interface JobState<T> {
 
 const IDLE: JobState<never> = { status: 'idle', progress: undefined, startedAt: 0, finishedAt: 0, result: undefined, error: undefined };
 
-export function jobErrorText(e: unknown): string {
-  if (e instanceof JobError) return e.user ? e.message : `internal error (a bug in gradus, please report it): ${e.message}`;
-  return errorText(e);
+export function jobErrorText(e: unknown, place?: Place): string {
+  if (e instanceof JobError) return e.user ? appWords(e.message, place) : `internal error (a bug in gradus, please report it): ${e.message}`;
+  return errorText(e, place);
 }
 
-export function useJob<T>() {
+/** `place` words the errors for the screen that shows them. */
+export function useJob<T>(place?: Place) {
   const [state, setState] = useState<JobState<T>>(IDLE);
   const current = useRef<Job<T> | undefined>(undefined);
 
@@ -42,7 +43,7 @@ export function useJob<T>() {
     try {
       job = start((p) => setState((s) => (s.status === 'running' && current.current === job ? { ...s, progress: p } : s)));
     } catch (e) {
-      setState({ ...IDLE, status: 'error', error: jobErrorText(e), startedAt, finishedAt: Date.now() });
+      setState({ ...IDLE, status: 'error', error: jobErrorText(e, place), startedAt, finishedAt: Date.now() });
       return;
     }
     current.current = job;
@@ -58,14 +59,19 @@ export function useJob<T>() {
         if (current.current !== job) return;
         current.current = undefined;
         const cancelled = e instanceof JobCancelled;
-        setState({ ...IDLE, status: cancelled ? 'cancelled' : 'error', error: cancelled ? undefined : jobErrorText(e), startedAt, finishedAt: Date.now() });
+        setState({ ...IDLE, status: cancelled ? 'cancelled' : 'error', error: cancelled ? undefined : jobErrorText(e, place), startedAt, finishedAt: Date.now() });
       },
     );
-  }, []);
+  }, [place]);
 
   const cancel = useCallback(() => {
     current.current?.cancel();
   }, []);
 
-  return { state, run, cancel };
+  /** Forget the result or error (the input it belonged to has changed); a running job goes on. */
+  const clear = useCallback(() => {
+    setState((s) => (s.status === 'running' ? s : IDLE));
+  }, []);
+
+  return { state, run, cancel, clear };
 }

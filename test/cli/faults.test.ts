@@ -154,7 +154,7 @@ describe('input that is too big, malformed or out of range', () => {
     expect(r.stderr).not.toContain('\u001b');
   });
   it('an option given twice is refused instead of the last one silently winning', () => {
-    fails(runCli(['qseries', 'integer', '--n', '3', '--n', '4']), /--n is given twice/);
+    fails(runCli(['qanalog', 'integer', '--n', '3', '--n', '4']), /--n is given twice/);
   });
 });
 
@@ -180,7 +180,7 @@ describe('outputs: refused before the work, never over a folder or a user file',
   it('stdout on a full device: one line on stderr, exit 2, no stack trace', () => {
     const fd = openSync('/dev/full', 'w');
     try {
-      const r = runCli(['qseries', 'factorial', '--n', '40'], { stdout: fd });
+      const r = runCli(['qanalog', 'factorial', '--n', '40'], { stdout: fd });
       expect(r.code).toBe(2);
       expect(r.stderr).toMatch(/cannot write the output \(the disk is full\)/);
       expect(r.stderr).not.toMatch(/\n\s+at /);
@@ -190,7 +190,7 @@ describe('outputs: refused before the work, never over a folder or a user file',
   });
   it('--from takes data requests only: a catalogue command is refused and the catalogue untouched', () => {
     const before = readFileSync(cat);
-    fails(runCli(['search', '--n-range', '1..2', '--from', 'catalogue rebuild --n-max {n}', '--catalogue', cat]), /--from takes a data command \(dist, show, module, quotient, sym, qseries\), got "catalogue"/);
+    fails(runCli(['search', '--n-range', '1..2', '--from', 'catalogue rebuild --n-max {n}', '--catalogue', cat]), /--from takes a data command \(dist, show, module, quotient, sym, qanalog\), got "catalogue"/);
     expect(readFileSync(cat).equals(before)).toBe(true);
   });
 });

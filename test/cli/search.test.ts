@@ -101,7 +101,7 @@ describe('gradus search (acceptance)', () => {
     expect(perm).toContain('major-index');
   });
   it('q-binomials (src/core/qanalogs.ts) as a slice: subsets with k ones weighted by inversions of the 0/1 word (common practice)', { timeout: 60_000 }, () => {
-    const r = search(['--n-range', '1..6', '--from', 'qseries binomial --n {n} --k {k}']);
+    const r = search(['--n-range', '1..6', '--from', 'qanalog binomial --n {n} --k {k}']);
     expect(r.code, r.stderr).toBe(0);
     const m = r.doc.matches.find((x) => x.combine === 'slice' && x.family === 'subsets' && x.transform === '');
     expect(m?.statistics).toEqual(['binary-inversions', 'ones']);
@@ -124,7 +124,7 @@ describe('gradus search (acceptance)', () => {
   });
   it('bad input: two target sources, a bad range, a missing catalogue', { timeout: 30_000 }, () => {
     expect(runCli(['search', '--coeffs', 'n=1:1', '--target-file', 'x.json', '--catalogue', cat]).code).toBe(2);
-    const r = runCli(['search', '--n-range', '5..2', '--from', 'qseries integer --n {n}', '--catalogue', cat]);
+    const r = runCli(['search', '--n-range', '5..2', '--from', 'qanalog integer --n {n}', '--catalogue', cat]);
     expect(r.code).toBe(2);
     expect(r.stderr).toContain('--n-range');
     const m = runCli(['search', '--coeffs', 'n=1:1', '--catalogue', join(dir, 'none.sqlite')]);

@@ -51,10 +51,10 @@ describe('catalogue', () => {
     const prov = makeProvenance({ request: 'module --seed vandermonde --n 3 --ops x', method: 'test', seconds: 0 });
     cache.put('module --seed vandermonde --n 3 --ops x', 'module', { hilbertSeries: [1, 2], provenance: prov }, 3, undefined);
     cache.put('sym e(2)', 'sym', { terms: { '1,1': [[1]] }, provenance: prov }, 2, undefined);
-    cache.put('qseries integer --n 1', 'qseries', { series: [1], provenance: prov }, 1, undefined);
+    cache.put('qanalog integer --n 1', 'qanalog', { series: [1], provenance: prov }, 1, undefined);
     expect(cache.get('module --seed vandermonde --n 3 --ops x')).toEqual({ hilbertSeries: [1, 2], provenance: prov });
     expect(cache.get('sym e(2)')).toMatchObject({ terms: { '1,1': [[1]] } });
-    expect(cache.get('qseries integer --n 1')).toBeUndefined();
+    expect(cache.get('qanalog integer --n 1')).toBeUndefined();
     expect(cache.get('module --seed vandermonde --n 4 --ops x')).toBeUndefined();
     const p = c.db.prepare('SELECT provenance FROM results WHERE kind = ?').get('module') as { provenance: string };
     expect(JSON.parse(p.provenance).version).toMatch(/^\d+\.\d+/);

@@ -33,7 +33,7 @@ describe('expression language', () => {
     expect(evaluateExpression('e(2) + e(1)').degree).toEqual([1, 2]);
     expect(ev('pleth(p(2), 1-q)').equals(ev('(1-q^2)*p(2)'))).toBe(true);
     expect(ev('hilbert(h(1)^3)').equals(ev('6'))).toBe(true);
-    expect(ev('inner(H(2,1), s(3))').equals(ev('1'))).toBe(true);
+    expect(ev('hall(H(2,1), s(3))').equals(ev('1'))).toBe(true);
     expect(ev('star(H(2), H(1,1))').isZero()).toBe(true); // *-orthogonality (checked in macdonald.test.ts)
   });
   it('text output reads back to the same function in every basis', () => {

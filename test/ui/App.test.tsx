@@ -60,21 +60,33 @@ describe('app shell', () => {
     r = renderApp({ initialScreen: 'symfun' });
     await press(r, 'e');
     let f = frame(r);
-    expect(f).toContain('Enter submit  Esc leave');
+    expect(f).toContain('Enter submit  Esc cancel');
     await press(r, '2');
     f = frame(r);
     expect(f).toContain('[5SymFun]');
     expect(f).toContain('sym>nabla(e({n}))2');
+    // Esc leaves the field and keeps the expression it held before.
     await press(r, KEYS.escape);
-    expect(frame(r)).toContain('e edit expression');
+    f = frame(r);
+    expect(f).toContain('e edit expression');
+    expect(f).toContain('sym nabla(e({n}))\n');
   });
 
-  it('q quits', async () => {
+  it('? opens the help and ? or Esc goes back to the screen it came from', async () => {
+    r = renderApp({ initialScreen: 'modules' });
+    await press(r, '?');
+    expect(frame(r)).toContain('[?Help]');
+    await press(r, '?');
+    expect(frame(r)).toContain('[4Modules]');
+    await press(r, '3', '?');
+    expect(frame(r)).toContain('Everywhere');
+    await press(r, KEYS.escape);
+    expect(frame(r)).toContain('[3Statistics]');
+  });
+
+  it('q quits at once when no result would be lost', async () => {
     r = renderApp();
     await press(r, 'q');
-    // After exit ink stops rendering; typing more changes nothing.
-    const before = frame(r);
-    await press(r, '2');
-    expect(frame(r)).toBe(before);
+    expect(r.exited()).toBe(true);
   });
 });

@@ -1,9 +1,11 @@
 /**
- * The real program in a pseudo-terminal (util-linux `script`): it starts, draws, takes
- * keys, and quits cleanly with exit code 0 and no stack trace.
+ * The real program in a pseudo-terminal (util-linux `script`): a whole session driven with
+ * keys sent several at a time, as a fast typist, a paste or a slow link sends them; it quits
+ * cleanly with exit code 0 and no stack trace. Without a terminal it prints the demo as text.
  */
 import { spawn, spawnSync } from 'node:child_process';
-import { rmSync } from 'node:fs';
+import { readdirSync, readFileSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCli } from '../helpers/cli.js';
 import { tinyCatalogue } from './tinyCatalogue.js';
@@ -21,12 +23,12 @@ function withoutCiVariables(env: NodeJS.ProcessEnv): NodeJS.ProcessEnv {
   return rest;
 }
 
-function runInPty(keys: readonly { after: string | RegExp; send: string }[], timeoutMs = 30_000): Promise<{ code: number | null; out: string }> {
+function runInPty(keys: readonly { after: string | RegExp; send: string }[], cwd: string, timeoutMs = 90_000): Promise<{ code: number | null; out: string }> {
   return new Promise((resolve, reject) => {
-    const child = spawn('script', ['-qfec', 'stty cols 80 rows 24; node bin/gradus.mjs', '/dev/null'], {
-      cwd: ROOT,
+    const child = spawn('script', ['-qfec', `stty cols 80 rows 24; node ${ROOT}bin/gradus.mjs`, '/dev/null'], {
+      cwd,
       // A user's terminal: ink draws nothing until exit when it believes it runs under CI.
-      env: { ...withoutCiVariables(process.env), NO_COLOR: '', GRADUS_CATALOGUE: cat.path },
+      env: { ...withoutCiVariables(process.env), NO_COLOR: '1', GRADUS_CATALOGUE: cat.path },
       stdio: ['pipe', 'pipe', 'pipe'],
     });
     let out = '';
@@ -35,9 +37,9 @@ function runInPty(keys: readonly { after: string | RegExp; send: string }[], tim
     let waiting = false;
     const timer = setTimeout(() => {
       child.kill('SIGKILL');
-      reject(new Error(`timed out at step ${step}; output so far:\n${out.slice(-2000)}`));
+      reject(new Error(`timed out at step ${step}; output so far:\n${out.slice(-3000)}`));
     }, timeoutMs);
-    // Each key is sent once its cue appears in output drawn after the previous key.
+    // Each burst is sent, in one write, once its cue appears in output drawn after the previous one.
     const advance = () => {
       if (waiting || step >= keys.length) return;
       const k = keys[step]!;
@@ -46,12 +48,12 @@ function runInPty(keys: readonly { after: string | RegExp; send: string }[], tim
       if (hit < 0) return;
       waiting = true;
       step++;
-      // A short pause lets the app finish the redraw before the key arrives.
       setTimeout(() => {
         seenUpTo = out.length;
         waiting = false;
         child.stdin.write(k.send);
-      }, 150);
+        advance();
+      }, 100);
     };
     child.stdout.on('data', (d: Buffer) => {
       out += d.toString('utf8');
@@ -69,21 +71,33 @@ function runInPty(keys: readonly { after: string | RegExp; send: string }[], tim
 }
 
 describe.skipIf(!hasScript)('gradus in a pseudo-terminal', () => {
-  it('starts on the tour, computes its first step in a worker, moves through screens, and quits on Ctrl+C with exit code 0', async () => {
-    const { code, out } = await runInPty([
-      { after: 'Enter runs step 1', send: '\r' },
-      { after: 'dimensions: n=2: 6, n=3: 24, n=4: 120', send: '2' },
-      { after: 'family', send: '\t' },
-      { after: 'statistic', send: '?' },
-      { after: 'Everywhere', send: '\u0003' }, // Ctrl+C (q is tested in App.test.tsx)
-    ]);
-    expect(code).toBe(0);
-    expect(out).toContain('gradus');
-    expect(out).toContain('Everywhere');
-    expect(out).toContain('dimensions: n=2: 6, n=3: 24, n=4: 120');
+  it('a whole session with keys sent in bursts: compute a module for two sizes, search it, export it, quit after confirming', async () => {
+    const { code, out } = await runInPty(
+      [
+        // Modules screen, next example seed (Vandermonde, n = 4), n − 1, compute: one write.
+        { after: 'Enter runs step 1', send: '4s-\r' },
+        // Vandermonde n = 3 has dimension 3! = 6 (common practice: the Vandermonde's
+        // derivatives span a copy of the regular representation); then n = 4 likewise 4! = 24.
+        { after: 'dimension 6 ', send: '+\r' },
+        // Its Hilbert series over n = 3, 4 to the search, and search: one write.
+        { after: 'dimension 24 ', send: 'g\r' },
+        // [n]_q! is the inversion generating function (common practice): the tiny catalogue
+        // holds inversions and major index on permutations. Export screen, write Markdown.
+        { after: 'candidates in', send: '7\r' },
+        { after: '✓ wrote', send: '\u0003' }, // Ctrl+C: results are not saved, so it asks
+        { after: 'Quit?', send: '\u0003' }, // a second Ctrl+C quits
+      ],
+      cat.dir,
+    );
+    expect(code, out.slice(-2000)).toBe(0);
+    expect(out).toContain('formula: [n]_q!');
+    expect(out).toContain('inversions on permutations');
+    const written = readdirSync(cat.dir).filter((f) => f.endsWith('.md'));
+    expect(written.length, out.slice(-3000)).toBe(1);
+    expect(readFileSync(join(cat.dir, written[0]!), 'utf8')).toContain('inversions');
     expect(out).not.toMatch(/\n\s+at .+\(.*:\d+:\d+\)/); // no stack trace
     expect(out).not.toMatch(/Error:/);
-  }, 40_000);
+  }, 120_000);
 });
 
 describe('gradus without a terminal', () => {

@@ -6,16 +6,10 @@
 import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { render } from 'ink-testing-library';
 import { afterAll, expect, it } from 'vitest';
 import { stopPool } from '../../src/pool/pool.js';
 import { Catalogue } from '../../src/store/catalogue.js';
-import type { ScreenProps } from '../../src/ui/ScreenProps.js';
-import { SweepScreen } from '../../src/ui/screens/SweepScreen.js';
-import { EMPTY_SESSION } from '../../src/ui/session.js';
-import { makeTheme } from '../../src/ui/theme.js';
-import { ThemeContext } from '../../src/ui/ThemeContext.js';
-import { fits, frame, KEYS, press, waitForFrame } from './helpers.js';
+import { fits, frame, KEYS, press, renderApp, unwrapped, waitForFrame } from './helpers.js';
 
 afterAll(() => stopPool());
 
@@ -24,30 +18,11 @@ it('runs a sweep, ranks its seeds, opens a module, exports the table, and keeps 
   const cat = join(dir, 'catalogue.sqlite');
   Catalogue.open(cat).close();
   const env = { NO_COLOR: '1', GRADUS_CATALOGUE: cat };
-  const notes: string[] = [];
-  const added: string[] = [];
-  const props: ScreenProps = {
-    width: 80,
-    height: 20,
-    active: true,
-    session: EMPTY_SESSION,
-    addItem: (item) => (added.push(item.title), added.length),
-    setCurrent: () => {},
-    setEditing: () => {},
-    notify: (t) => void notes.push(t),
-    go: () => {},
-    cwd: dir,
-    env,
-  };
-  const r = render(
-    <ThemeContext.Provider value={makeTheme(env)}>
-      <SweepScreen {...props} />
-    </ThemeContext.Provider>,
-  );
+  const r = renderApp({ env, cwd: dir, initialScreen: 'sweep' }, 80, 24);
   await press(r, 'e');
   await press(r, '\u0015', '--family heights --height 1,k-1 --n 1..4 --ops x', KEYS.enter);
   const f = await waitForFrame(r, (x) => x.includes('seeds listed'), 60_000);
-  expect(fits(f, 80, 20), f).toBe(true);
+  expect(fits(f, 80, 24), f).toBe(true);
   expect(f).toMatch(/▶ {2}1\. δ_\{n,k\} with height k-1 \[x\] n = 1\.\.4, all k = 1\.\.n — q-analog/);
   expect(f).toContain('· Hilbert series by x-degree = [k]_q!·Stir_q(n,k)');
   await press(r, KEYS.down);
@@ -57,13 +32,12 @@ it('runs a sweep, ranks its seeds, opens a module, exports the table, and keeps 
   await press(r, KEYS.left);
   expect(frame(r)).toMatch(/at n = 4, k = 4 \(10 of 10\): dimension 24/);
   expect(frame(r)).toContain('gradus module --seed superspace-vandermonde --n 4 --k 4 --ops x --frobenius');
-  expect(added).toHaveLength(2);
   await press(r, KEYS.escape, 'w');
-  const written = notes.at(-1)!.replace(/^written /, '');
+  const written = join(dir, /written (\S+)/.exec(unwrapped(frame(r)))![1]!.split('/').at(-1)!);
   expect(readFileSync(written, 'utf8')).toContain('[k]\\_q!');
   expect(written.endsWith('.md')).toBe(true);
   await press(r, 'w');
-  expect(notes.at(-1)).toMatch(/exists; W overwrites it/);
+  expect(unwrapped(frame(r))).toMatch(/exists; W overwrites it/);
   await press(r, 'f', 'w');
   expect(existsSync(written.replace(/\.md$/, '.tex'))).toBe(true);
   // the modules are in the user's catalogue under their command-line keys

@@ -11,9 +11,10 @@ import { strOpt, type CommandSpec } from '../command.js';
 export const appCommand: CommandSpec = {
   name: 'app',
   summary: 'the terminal app (the default when no command is given); text demo when not in a terminal',
-  usage: 'app [--screen NAME] [--text]',
+  usage: 'app [--screen NAME] [--session FILE] [--text]',
   options: [
     { name: 'screen', type: 'string', description: `screen to open on: ${SCREENS.map((s) => s.id).join(', ')}`, placeholder: 'NAME' },
+    { name: 'session', type: 'string', description: 'a session file to open (and to save to: w on the Export screen, or on quitting)', placeholder: 'FILE' },
     { name: 'text', type: 'flag', description: 'print the demo session as text instead of opening the app' },
   ],
   producesData: false,
@@ -30,6 +31,7 @@ export const appCommand: CommandSpec = {
     }
     // Loaded only here: ink and React stay out of every other command's start-up.
     const { runApp } = await import('../../ui/runApp.js');
-    await runApp({ initialScreen: name as ScreenId | undefined, cwd: io.cwd, env: io.env });
+    const session = strOpt(args, 'session');
+    await runApp({ initialScreen: name as ScreenId | undefined, cwd: io.cwd, env: io.env, ...(session !== undefined ? { sessionFile: session } : {}) });
   },
 };

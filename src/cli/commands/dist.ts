@@ -22,7 +22,7 @@ export function coefficientText(p: Poly, two: boolean): string[] {
 function printText(d: Distribution, out: (s: string) => void): void {
   const two = d.statistics.length === 2;
   const names = two ? `q^${d.statistics[0]} t^${d.statistics[1]}` : `q^${d.statistics[0]}`;
-  out(`Σ ${names} over ${d.family} (${paramsText(d.params)})${d.transform ? ` after ${d.transform}` : ''}: ${d.count} objects`);
+  out(`Σ ${names} over ${d.family} (${paramsText(d.params)})${d.transform ? ` after ${d.transform}` : ''}: ${d.count} object${d.count === 1n ? '' : 's'}`);
   out(d.series.toString());
   for (const line of coefficientText(d.series, two)) out(line);
   if (d.frobenius) {

@@ -79,7 +79,7 @@ export const searchCommand: CommandSpec = {
     'The catalogue (gradus catalogue build) is searched for the target and its variants (q-reversed, ω,',
     'q and t swapped); each match says the range it was verified on. Every search is kept in the catalogue',
     'with an id that gradus export accepts (as search:ID). Example:',
-    '  gradus search --n-range 1..6 --from "qseries ordered-stirling --n {n} --k {k}"',
+    '  gradus search --n-range 1..6 --from "qanalog ordered-stirling --n {n} --k {k}"',
   ].join('\n'),
   async run(args: ParsedArgs, io) {
     const range = parseRange(strOpt(args, 'n-range'));

@@ -15,7 +15,7 @@ export const showCommand = dataCommand(showKind, {
   print(r, result, io) {
     const rows = result.objects;
     const how = r.sample !== undefined ? `${rows.length} drawn at random (seed ${r.sample})` : `showing ${BigInt(rows.length) === result.count ? 'all' : `the first ${rows.length}`}`;
-    io.out(`${result.family} ${describeParams(result.params)}: ${result.count} objects; ${how}`);
+    io.out(`${result.family} ${describeParams(result.params)}: ${result.count} object${result.count === 1n ? '' : 's'}; ${how}`);
     const multiLine = rows.some((x) => x.text.includes('\n'));
     const width = Math.max(0, ...rows.map((x) => x.text.length));
     for (const row of rows) {

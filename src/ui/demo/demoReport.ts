@@ -1,6 +1,7 @@
 /** What each demo step found, as lines of text (the Tour screen and the text demo share them). */
 import { entryKey } from '../../series/target.js';
 import { seriesText } from '../engines/seriesText.js';
+import { plural } from '../text/plural.js';
 import { tableOf } from '../engines/moduleTypes.js';
 import type { DemoState } from './demoSession.js';
 import { DEMO_SHOWN_N, demoSeedText } from './demoSeed.js';
@@ -31,7 +32,7 @@ export function stepReport(step: number, s: DemoState, withTable: boolean): Repo
     if (s.catalogue) out.push({ text: `catalogue: ${s.catalogue.note}`, tone: 'dim' });
     for (const x of s.searches ?? []) {
       const what = x.targetLabel.split(' of ')[0];
-      out.push({ text: `${x.candidates.length ? '✓' : '·'} ${what}: ${x.candidates.length ? `${x.candidates.length} candidate(s)` : 'no match'}`, tone: x.candidates.length ? 'ok' : 'dim' });
+      out.push({ text: `${x.candidates.length ? '✓' : '·'} ${what}: ${x.candidates.length ? plural(x.candidates.length, 'candidate') : 'no match'}`, tone: x.candidates.length ? 'ok' : 'dim' });
     }
     out.push({ text: `In detail — ${s.search.targetLabel.split(' of ')[0]}:` });
     for (const r of s.search.recognition) out.push({ text: r, tone: 'accent' });
@@ -39,7 +40,7 @@ export function stepReport(step: number, s: DemoState, withTable: boolean): Repo
     if (c.length === 0) {
       out.push({ text: 'no match: no distribution in the catalogue equals this series or its variants.', tone: 'warn' });
     } else {
-      out.push({ text: `${c.length} candidate(s), simplest first:`, tone: 'ok' });
+      out.push({ text: `${plural(c.length, 'candidate')}, simplest first:`, tone: 'ok' });
       c.slice(0, 3).forEach((x, i) => out.push({ text: `  ${i + 1}. ${x.title} — verified ${x.range}` }));
     }
     out.push({ text: `tried: ${s.search.tried}`, tone: 'dim' });
@@ -48,7 +49,7 @@ export function stepReport(step: number, s: DemoState, withTable: boolean): Repo
     if (s.exported) {
       out.push({ text: `wrote ${s.exported.bytes} bytes of Markdown (the matches with definitions and sources, or what was tried) to`, tone: 'ok' });
       out.push({ text: `  ${s.exported.path}`, tone: 'ok' });
-      out.push({ text: 'The Export screen (7) writes any result of the session, in Markdown or JSON, where you choose.', tone: 'dim' });
+      out.push({ text: 'The Export screen (7) writes any result of the session where you choose (a search in Markdown, LaTeX or JSON), and saves the session (w).', tone: 'dim' });
     }
     else if (s.exportNote) out.push({ text: s.exportNote, tone: 'warn' });
   }

@@ -3,15 +3,14 @@
  * through the same model and renderers as `gradus export`, written atomically; a module or
  * expression result as the JSON document its own command prints with --json.
  */
-import { existsSync } from 'node:fs';
 import { InputError } from '../../core/errors.js';
 import { toJsonText } from '../../core/json-text.js';
-import { atomicWrite } from '../../export/atomicWrite.js';
 import { exportModel } from '../../export/exportModel.js';
 import { renderJson } from '../../export/renderJson.js';
 import { renderLatex } from '../../export/renderLatex.js';
 import { renderMarkdown } from '../../export/renderMarkdown.js';
 import { checkSearchDocument } from '../../match/searchDocument.js';
+import { appWrite } from '../appWrite.js';
 import type { SessionItem } from '../session.js';
 
 export const EXPORT_ENGINE_AVAILABLE = true;
@@ -55,8 +54,7 @@ export function exportItem(item: SessionItem, format: ExportFormat, path: string
     if (format !== 'json') throw new InputError(`a ${item.origin} result is exported as JSON (its command's --json document); ${format} is for search results`, 'format');
     text = toJsonText(d.doc) + '\n';
   }
-  if (existsSync(path) && !force) throw new InputError(`${path} exists; not overwritten (f overwrites it)`, 'out');
-  atomicWrite(path, text, force);
+  appWrite(path, text, force, 'f');
   return { path, bytes: Buffer.byteLength(text) };
 }
 

@@ -7,6 +7,8 @@ import type { SearchDocument } from '../../match/searchDocument.js';
 import type { DistRequest } from '../../enumerate/request.js';
 import type { ModuleRequest } from '../../requests/module-request.js';
 import type { SymRequest } from '../../requests/sym-request.js';
+import { availableParallelism } from 'node:os';
+import { ESTIMATE_MARK } from './progressMark.js';
 
 export type ProgressFn = (label: string, done: number, total?: number) => void;
 export type JobTask = (input: unknown, progress: ProgressFn) => unknown | Promise<unknown>;
@@ -50,10 +52,11 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
   // The request model's module request, computed as `gradus module` computes it (the result is
   // plain data); with the user's catalogue, a document kept there under the same key is reused.
   module: async (input, progress) => {
-    const [{ compute, requestKey }, { catalogueResultCache }, { Catalogue }] = await Promise.all([
+    const [{ compute, requestKey }, { catalogueResultCache }, { Catalogue }, { PARALLEL_THRESHOLD_SECONDS }] = await Promise.all([
       import('../../requests/index.js'),
       import('../../match/resultCache.js'),
       import('../../store/catalogue.js'),
+      import('../../modules/compute-module.js'),
     ]);
     const { request, catalogue } = input as { request: ModuleRequest; catalogue?: string };
     const cat = catalogue !== undefined ? Catalogue.open(catalogue, { existing: true }) : undefined;
@@ -61,9 +64,17 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
       const cache = cat ? catalogueResultCache(cat) : undefined;
       const kept = cache?.get(requestKey(request)) as Record<string, unknown> | undefined;
       if (kept) return { json: kept };
+      // The engine's estimate (processor seconds; parallel runs share them over the threads)
+      // goes along with every later progress message, since the subgroup tasks differ widely
+      // in cost and their count alone says little about the time left.
+      let estimate = '';
+      const threads = Math.max(1, Math.min(2, availableParallelism()));
       const c = await compute<import('../../modules/module-result.js').ModuleResult>(request, {
-        progress: (label, done, total) => progress(label, done, total),
-        onEstimate: (units, seconds) => progress(`estimated ${units.toExponential(1)} units, ~${Math.ceil(seconds)}s of processor time`, 0),
+        progress: (label, done, total) => progress(`${label}${estimate}`, done, total),
+        onEstimate: (_units, seconds) => {
+          estimate = `${ESTIMATE_MARK}${seconds >= PARALLEL_THRESHOLD_SECONDS ? seconds / threads : seconds}`;
+          progress(`preparing the seed and its matrices${estimate}`, 0);
+        },
       });
       cache?.put(c.key, 'module', c.document, request.spec.n, request.spec.k);
       return { json: c.document };

@@ -3,7 +3,10 @@
  * search` makes (catalogue look-up, formula recognition, saved-search document), run in a
  * worker. Building the catalogue, when there is none, is a worker job too.
  */
+import { existsSync } from 'node:fs';
 import type { SearchDocument } from '../../match/searchDocument.js';
+import { Catalogue } from '../../store/catalogue.js';
+import { errorText } from '../errorText.js';
 import type { Target } from '../../series/target.js';
 import { targetToJson } from '../../series/targetFile.js';
 import type { SearchOutcome } from './searchTypes.js';
@@ -24,6 +27,32 @@ export function startSearch(target: Target, cataloguePath: string, onProgress: (
 export function startSearches(targets: readonly Target[], cataloguePath: string, onProgress: (p: JobProgress) => void): Job<SearchOutcome[]> {
   const job = startJob<{ doc: SearchDocument; id: number | undefined; ms: number }[]>('search-many', { targets: targets.map(targetToJson), catalogue: cataloguePath }, onProgress);
   return { result: job.result.then((rs) => rs.map((r) => searchOutcome(r.doc, r.id, r.ms))), cancel: job.cancel };
+}
+
+export interface CatalogueState {
+  /** Largest n held (undefined: no catalogue yet). */
+  readonly maxN: number | undefined;
+  /** The n up to which b builds (resuming an unfinished build, never smaller than what is held). */
+  readonly buildTo: number;
+  readonly unfinished: boolean;
+  readonly error?: string;
+}
+
+/** What the catalogue holds, read without creating it. */
+export function catalogueState(path: string): CatalogueState {
+  if (!existsSync(path)) return { maxN: undefined, buildTo: APP_CATALOGUE_N_MAX, unfinished: false };
+  try {
+    const cat = Catalogue.open(path, { existing: true });
+    try {
+      const maxN = cat.maxN();
+      const unfinished = cat.unfinishedNote() !== undefined;
+      return { maxN: maxN >= 0 ? maxN : undefined, buildTo: Math.max(APP_CATALOGUE_N_MAX, maxN), unfinished };
+    } finally {
+      cat.close();
+    }
+  } catch (e) {
+    return { maxN: undefined, buildTo: APP_CATALOGUE_N_MAX, unfinished: false, error: errorText(e, 'catalogue') };
+  }
 }
 
 export interface BuildSummary {

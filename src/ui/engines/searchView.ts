@@ -1,13 +1,14 @@
 /** The search engine's saved-search document as the Search screen shows it. */
 import type { SearchDocument } from '../../match/searchDocument.js';
 import type { SearchOutcome } from './searchTypes.js';
+import { plural } from '../text/plural.js';
 
 export function triedText(d: SearchDocument): string {
   const t = d.tried;
   const at = t.anchor ? `n = ${t.anchor.n}${t.anchor.k === undefined ? '' : `, k = ${t.anchor.k}`}` : 'no size in the catalogue';
   return (
-    `${t.candidates} candidates at ${at} (whole distributions: ${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there${t.combines.includes('slice') ? '; slices checked apart' : ''}) ` +
-    `over ${t.families.length} families and ${t.statistics.length} statistics, forms ${t.combines.join('/')}, ` +
+    `${plural(t.candidates, 'candidate')} at ${at} (whole distributions: ${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there${t.combines.includes('slice') ? '; slices checked apart' : ''}) ` +
+    `over ${plural(t.families.length, 'family', 'families')} and ${plural(t.statistics.length, 'statistic')}, forms ${t.combines.join('/')}, ` +
     `variants ${t.variants.join(', ')}; catalogue n ≤ ${t.catalogueMaxN}`
   );
 }

@@ -5,11 +5,24 @@
  */
 import { isUserError } from '../../core/errors.js';
 import { runTask, TaskCancelled } from '../../pool/pool.js';
+import { ESTIMATE_MARK } from './progressMark.js';
 
 export interface JobProgress {
   readonly label: string;
   readonly done: number;
   readonly total: number | undefined;
+  /** The engine's estimate of the whole run (wall-clock seconds), when it gave one. */
+  readonly estimateSeconds?: number;
+  /** When that estimate arrived (Date.now()): the work it estimates starts there, after the worker's start-up. */
+  readonly estimatedAt?: number;
+}
+
+
+function progressOf(label: string, done: number, total: number | undefined, estimatedAt: () => number): JobProgress {
+  const i = label.indexOf(ESTIMATE_MARK);
+  if (i < 0) return { label, done, total };
+  const est = Number(label.slice(i + 1));
+  return { label: label.slice(0, i), done, total, ...(Number.isFinite(est) ? { estimateSeconds: est, estimatedAt: estimatedAt() } : {}) };
 }
 
 export interface Job<T> {
@@ -54,7 +67,9 @@ function asJobError(e: unknown): Error {
 const TASKS = new URL('./jobTasks.ts', import.meta.url);
 
 export function startJob<T>(task: string, input: unknown, onProgress: (p: JobProgress) => void): Job<T> {
-  const progress = (label: string, done: number, total?: number): void => onProgress({ label, done, total });
+  let firstEstimate: number | undefined;
+  const estimatedAt = () => (firstEstimate ??= Date.now());
+  const progress = (label: string, done: number, total?: number): void => onProgress(progressOf(label, done, total, estimatedAt));
   if (inProcess) {
     const result = import('./jobTasks.js').then(({ runJobTask }) => runJobTask({ task, input }, progress) as Promise<T>);
     return { result: result.catch((e: unknown) => Promise.reject(asJobError(e))), cancel() {} };

@@ -1,51 +1,26 @@
-/** Every key of every screen, scrollable. */
-import { Box, Text } from 'ink';
-import { useState } from 'react';
-import { GLOBAL_KEYS, SCREENS } from '../screens.js';
+/** Every key of every screen, wrapped to the window and scrollable. */
 import { useKeys } from '../hooks.js';
+import { Lines } from '../components/Lines.js';
+import { GLOBAL_KEYS, SCREENS, type KeyHelp } from '../screens.js';
 import type { ScreenProps } from '../ScreenProps.js';
-import { useTheme } from '../ThemeContext.js';
+import { line, wrapLine, type SLine } from '../text/styledLine.js';
+import { useScroll } from '../useScroll.js';
 
-export function helpLines(): { text: string; key?: string; heading?: boolean }[] {
-  const lines: { text: string; key?: string; heading?: boolean }[] = [{ text: 'Everywhere', heading: true }];
-  for (const k of GLOBAL_KEYS) lines.push({ key: k.keys, text: k.action });
+export function helpLines(width: number): SLine[] {
+  const keyW = Math.min(18, Math.max(...[...GLOBAL_KEYS, ...SCREENS.flatMap((s) => s.keys)].map((k) => [...k.keys].length)) + 2);
+  const entry = (k: KeyHelp): SLine[] => wrapLine([{ text: '  ' }, { text: k.keys.padEnd(keyW), style: 'key' }, { text: k.action }], width, keyW + 2);
+  const out: SLine[] = [line('Everywhere', 'title'), ...GLOBAL_KEYS.flatMap(entry)];
   for (const s of SCREENS) {
     if (s.id === 'help') continue;
-    lines.push({ text: `${s.jump} ${s.tab} — ${s.title}`, heading: true });
-    for (const k of s.keys) lines.push({ key: k.keys, text: k.action });
+    out.push(...wrapLine(line(`${s.jump} ${s.tab} — ${s.title}`, 'title'), width, 2));
+    out.push(...s.keys.flatMap(entry));
   }
-  return lines;
+  return out;
 }
 
 export function HelpScreen(props: ScreenProps) {
-  const theme = useTheme();
-  const [offset, setOffset] = useState(0);
-  const lines = helpLines();
-  const room = props.height;
-  const maxOff = Math.max(0, lines.length - room);
-  useKeys(
-    (_input, key) => {
-      if (key.downArrow || key.pageDown) setOffset((o) => Math.min(maxOff, o + (key.pageDown ? room : 1)));
-      if (key.upArrow || key.pageUp) setOffset((o) => Math.max(0, o - (key.pageUp ? room : 1)));
-    },
-    props.active,
-  );
-  const keyW = Math.max(...lines.map((l) => l.key?.length ?? 0)) + 2;
-  return (
-    <Box flexDirection="column">
-      {lines.slice(offset, offset + room).map((l, i) =>
-        l.heading ? (
-          <Text key={i} wrap="truncate" {...theme.style('title')}>
-            {l.text}
-          </Text>
-        ) : (
-          <Text key={i} wrap="truncate">
-            {'  '}
-            <Text {...theme.style('key')}>{(l.key ?? '').padEnd(keyW)}</Text>
-            {l.text}
-          </Text>
-        ),
-      )}
-    </Box>
-  );
+  const scroll = useScroll();
+  useKeys((input, key) => void scroll.handle(input, key, true), props.active);
+  const win = scroll.view(helpLines(props.width), props.height, undefined, ['↑/PgUp', '↓/PgDn']);
+  return <Lines lines={win.lines} />;
 }

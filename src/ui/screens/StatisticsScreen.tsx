@@ -1,28 +1,32 @@
 /**
  * Statistics: for a family and size, the distribution of one statistic as a bar chart, or
- * the joint distribution of two as a shaded table; flags, definitions and sources.
+ * the joint distribution of two as a shaded table (scrolling down and sideways, with
+ * markers); flags, definitions and sources.
  */
-import { Box, Text } from 'ink';
-import { useEffect, useMemo, useState } from 'react';
+import { Box } from 'ink';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import type { Poly } from '../../core/poly.js';
 import type { Family, Params, Statistic } from '../../enumerate/plugin.js';
 import { qtSeries } from '../../series/series.js';
 import { isPalindromic, isUnimodal } from '../../series/seriesOps.js';
 import { makeTarget } from '../../series/target.js';
-import { BarChart } from '../components/BarChart.js';
+import { barLines } from '../components/BarChart.js';
 import { LineInput } from '../components/LineInput.js';
-import { ShadedGrid } from '../components/ShadedGrid.js';
+import { Lines } from '../components/Lines.js';
+import { progressLines } from '../components/ProgressBar.js';
+import { gridLines } from '../components/ShadedGrid.js';
 import { Unavailable } from '../components/Unavailable.js';
 import { defaultParams, loadCatalog, statisticsOf } from '../engines/catalog.js';
 import { DISTRIBUTION_ENGINE_AVAILABLE, startDistribution, type DistView } from '../engines/distribution.js';
-import { ProgressBar } from '../components/ProgressBar.js';
-import { useTicker, useKeys } from '../hooks.js';
-import { useJob } from '../useJob.js';
 import { bumpSize, paramsToText, parseParamsText } from '../engines/paramsText.js';
 import { errorText } from '../errorText.js';
+import { useKeys, useTicker } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
-import { useTheme } from '../ThemeContext.js';
+import { line, wrapLine, type SLine } from '../text/styledLine.js';
 import { useEditField } from '../useEditField.js';
+import { useJob } from '../useJob.js';
+import { useScroll } from '../useScroll.js';
+import { objectsText } from './objectsText.js';
 
 export function StatisticsScreen(props: ScreenProps) {
   const catalog = useMemo(loadCatalog, []);
@@ -41,12 +45,11 @@ function flagText(p: Poly, joint: boolean): string {
 }
 
 function StatisticsView(props: ScreenProps & { families: readonly Family<unknown>[]; statsOf: (id: string) => readonly Statistic<unknown>[] }) {
-  const theme = useTheme();
   const [fi, setFi] = useState(() => Math.max(0, props.families.findIndex((f) => f.id === 'permutations')));
   const family = props.families[fi]!;
   const stats = props.statsOf(family.id);
   const [paramsBy, setParamsBy] = useState<Record<string, Params>>({});
-  const params = paramsBy[family.id] ?? defaultParams(family);
+  const params = paramsBy[family.id] ?? defaultParams(family, 5000n, stats);
   const [aBy, setABy] = useState<Record<string, number>>({});
   const [bBy, setBBy] = useState<Record<string, number>>({});
   const a = Math.min(aBy[family.id] ?? 0, stats.length - 1);
@@ -54,16 +57,18 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
   const s1 = stats[a]!;
   const s2 = b >= 0 ? stats[b] : undefined;
   const [field, setField] = useEditField<'params'>(props.active, props.setEditing);
-  const [draft, setDraft] = useState('');
-  const [offset, setOffset] = useState(0);
+  const [colOffset, setColOffset] = useState(0);
+  const shownCol = useRef(0); // the first column drawn last time (the offset clamped)
+  const scroll = useScroll();
 
-  const job = useJob<DistView>();
+  const job = useJob<DistView>('statistics');
   const now = useTicker(job.state.status === 'running');
   const runKey = `${family.id} ${paramsToText(params)} ${s1.id} ${s2?.id ?? ''}`;
-  // The key of the run whose result is shown: a result never shows under other choices.
+  // The key of the run whose result (or error) is shown: nothing shows under other choices.
   const [doneKey, setDoneKey] = useState('');
   useEffect(() => {
     let count: bigint;
+    setDoneKey(runKey);
     try {
       family.validate(params);
       count = family.count(params);
@@ -73,55 +78,67 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
       });
       return;
     }
-    setDoneKey('');
-    job.run(
-      (onProgress) => startDistribution({ family: family.id, params, statistics: s2 ? [s1.id, s2.id] : [s1.id] }, count, onProgress),
-      () => setDoneKey(runKey),
-    );
+    job.run((onProgress) => startDistribution({ family: family.id, params, statistics: s2 ? [s1.id, s2.id] : [s1.id] }, count, onProgress));
     // runKey names everything the run depends on.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [runKey]);
-  const result: { poly?: Poly; error?: string } = job.state.status === 'done' && doneKey === runKey ? { poly: job.state.result!.series } : job.state.status === 'error' ? { error: job.state.error! } : {};
+  const current = doneKey === runKey;
+  const poly = current && job.state.status === 'done' ? job.state.result!.series : undefined;
 
+  const changed = () => {
+    setColOffset(0);
+    scroll.reset();
+  };
   const setParams = (p: Params) => {
     setParamsBy({ ...paramsBy, [family.id]: p });
-    setOffset(0);
+    changed();
   };
 
   useKeys(
     (input, key) => {
       if (key.leftArrow || key.rightArrow) {
         setFi((fi + (key.leftArrow ? props.families.length - 1 : 1)) % props.families.length);
-        setOffset(0);
-      } else if (key.upArrow) setABy({ ...aBy, [family.id]: (a + stats.length - 1) % stats.length });
-      else if (key.downArrow) setABy({ ...aBy, [family.id]: (a + 1) % stats.length });
-      else if (input === 'j') {
+        return changed();
+      }
+      if (key.upArrow || key.downArrow) {
+        setABy({ ...aBy, [family.id]: (a + (key.upArrow ? stats.length - 1 : 1)) % stats.length });
+        return changed();
+      }
+      if (input === 'j') {
         // Next statistic other than the first one; past the last, back to none.
         let nb = b + 1;
         if (nb === a) nb++;
         setBBy({ ...bBy, [family.id]: nb >= stats.length ? -1 : nb });
+        return changed();
       }
-      else if (input === '+' || input === '=' || input === '-') {
+      if (input === '+' || input === '=' || input === '-') {
         try {
           const p = bumpSize(params, family.params, input === '-' ? -1 : 1);
+          if (p === params) return props.notify(`${family.id} has no size n to change (p edits its parameters)`, 'error');
           family.validate(p);
+          if (p['n'] === params['n']) return props.notify(`n is at the end of its range for ${family.id}`, 'error');
           setParams(p);
         } catch (e) {
-          props.notify(errorText(e), 'error');
+          props.notify(errorText(e, 'statistics'), 'error');
         }
-      } else if (input === 'p') {
-        setDraft(paramsToText(params));
-        setField('params');
-      } else if (input === 'g') {
-        if (!result.poly) return props.notify('no distribution to search', 'error');
+        return;
+      }
+      if (input === 'p') return setField('params');
+      if (input === 'g') {
+        if (!poly) return props.notify('no distribution to search yet', 'error');
         const title = `${s2 ? `${s1.id} × ${s2.id}` : s1.id} on ${family.id} ${paramsToText(params)}`;
         const n = typeof params['n'] === 'number' ? params['n'] : 0;
         const k = typeof params['k'] === 'number' ? params['k'] : undefined;
-        props.addItem({ title, origin: 'statistics', target: makeTarget(title, [{ n, ...(k !== undefined ? { k } : {}), series: qtSeries(result.poly) }]) });
-        props.go('search');
-      } else if (input === 'x') job.cancel();
-      else if (input === ']') setOffset((o) => o + 1);
-      else if (input === '[') setOffset((o) => Math.max(0, o - 1));
+        props.addItem({ title, origin: 'statistics', target: makeTarget(title, [{ n, ...(k !== undefined ? { k } : {}), series: qtSeries(poly) }]) });
+        return props.go('search');
+      }
+      if (input === 'x') {
+        if (job.state.status !== 'running') return props.notify('nothing is running');
+        return job.cancel();
+      }
+      if (input === '<' || input === ',') return setColOffset(Math.max(0, shownCol.current - 1));
+      if (input === '>' || input === '.') return setColOffset(shownCol.current + 1);
+      scroll.handle(input, key, false);
     },
     props.active && field === undefined,
   );
@@ -132,68 +149,62 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
       family.validate(p);
       setParams(p);
       setField(undefined);
+      props.notify(`${family.id}: ${paramsToText(p)}`);
     } catch (e) {
-      props.notify(errorText(e), 'error');
+      props.notify(errorText(e, 'statistics'), 'error');
     }
   };
 
-  const infoLines = [s1, ...(s2 ? [s2] : [])].map((s) => `${s.id}: ${s.description} — ${s.source}`);
-  const chartH = Math.max(3, props.height - 4 - infoLines.length);
-  const poly = result.poly;
+  const w = props.width;
+  const top: SLine[] = wrapLine(
+    [
+      { text: 'family ', style: 'dim' },
+      { text: `◀ ${family.id} ▶`, style: 'title' },
+      { text: ` ${paramsToText(params)} ` },
+      { text: `(${objectsText(family, params)})`, style: 'dim' },
+    ],
+    w,
+    7,
+  );
+  if (field !== 'params') {
+    top.push(
+      ...wrapLine(
+        [
+          { text: 'statistic ', style: 'dim' },
+          { text: s1.id, style: 'accent' },
+          { text: ` (${a + 1}/${stats.length}) `, style: 'dim' },
+          ...(s2
+            ? [{ text: '× ', style: 'dim' as const }, { text: s2.id, style: 'accent' as const }, { text: ` (q marks ${s1.id}, t marks ${s2.id})`, style: 'dim' as const }]
+            : [{ text: '(j adds a second statistic)', style: 'dim' as const }]),
+        ],
+        w,
+        10,
+      ),
+    );
+  }
+  const body: SLine[] = [];
+  const st = job.state;
+  if (!DISTRIBUTION_ENGINE_AVAILABLE) body.push(...wrapLine(line('The distribution engine (src/enumerate) is not available in this build; no distribution is shown.', 'warn'), w));
+  else if (!current || st.status === 'running') body.push(...progressLines({ label: 'objects', done: st.progress?.done ?? 0, total: st.progress?.total, elapsedMs: now - st.startedAt }, w));
+  else if (st.status === 'cancelled') body.push(...wrapLine(line('Cancelled. Change the statistic, family or size to compute again.', 'warn'), w, 2));
+  else if (st.status === 'error') body.push(...wrapLine(line(`✗ ${st.error}`, 'error'), w, 2));
+  else if (poly) {
+    body.push(line(flagText(poly, s2 !== undefined), 'ok'));
+    if (s2) {
+      const t = poly.toQTTable();
+      const grid = gridLines({ table: t.length ? transpose(t) : [[0n]], rowLabel: 't', colLabel: 'q', width: w, colOffset, sideKeys: '</>' });
+      shownCol.current = grid.colStart;
+      body.push(...grid.lines);
+    } else body.push(...barLines(poly.toQArray().map((c, i) => ({ label: `q^${i}`, value: c })), w));
+  }
+  for (const s of [s1, ...(s2 ? [s2] : [])]) body.push(...wrapLine([{ text: `${s.id}: `, style: 'accent' }, { text: `${s.description} — ${s.source}`, style: 'dim' }], w, 2));
+  const room = Math.max(3, props.height - top.length - (field === 'params' ? 1 : 0));
+  const win = scroll.view(body, room);
   return (
     <Box flexDirection="column">
-      <Text wrap="truncate">
-        <Text {...theme.style('dim')}>family </Text>
-        <Text {...theme.style('title')}>◀ {family.id} ▶</Text> {paramsToText(params)}
-        <Text {...theme.style('dim')}> ({String(safeCount(family, params))} objects)</Text>
-      </Text>
-      {field === 'params' ? (
-        <LineInput label="parameters" value={draft} active width={props.width} onChange={setDraft} onSubmit={submit} onLeave={() => setField(undefined)} />
-      ) : (
-        <Text wrap="truncate">
-          <Text {...theme.style('dim')}>statistic </Text>
-          <Text {...theme.style('accent')}>{s1.id}</Text>
-          <Text {...theme.style('dim')}> ({a + 1}/{stats.length}) </Text>
-          {s2 ? (
-            <Text>
-              <Text {...theme.style('dim')}>× </Text>
-              <Text {...theme.style('accent')}>{s2.id}</Text>
-              <Text {...theme.style('dim')}> (q marks {s1.id}, t marks {s2.id})</Text>
-            </Text>
-          ) : (
-            <Text {...theme.style('dim')}>(j adds a second statistic)</Text>
-          )}
-        </Text>
-      )}
-      {infoLines.map((l, i) => (
-        <Text key={i} wrap="truncate" {...theme.style('dim')}>
-          {l}
-        </Text>
-      ))}
-      {!DISTRIBUTION_ENGINE_AVAILABLE ? (
-        <Text wrap="wrap" {...theme.style('warn')}>
-          The distribution engine (src/enumerate) is not available in this build; no distribution is shown.
-        </Text>
-      ) : job.state.status === 'running' ? (
-        <ProgressBar state={{ label: 'objects', done: job.state.progress?.done ?? 0, total: job.state.progress?.total, elapsedMs: now - job.state.startedAt }} width={props.width} />
-      ) : job.state.status === 'cancelled' ? (
-        <Text {...theme.style('warn')}>Cancelled. Change the statistic, family or size to compute again.</Text>
-      ) : result.error ? (
-        <Text wrap="wrap" {...theme.style('error')}>
-          ✗ {result.error}
-        </Text>
-      ) : poly ? (
-        <>
-          <Text wrap="truncate" {...theme.style('ok')}>
-            {flagText(poly, s2 !== undefined)}
-          </Text>
-          {s2 ? (
-            <ShadedGrid table={poly.toQTTable().length ? transpose(poly.toQTTable()) : [[0n]]} rowLabel="t" colLabel="q" width={props.width} height={chartH} />
-          ) : (
-            <BarChart bars={poly.toQArray().map((c, i) => ({ label: `q^${i}`, value: c }))} width={props.width} height={chartH} offset={offset} />
-          )}
-        </>
-      ) : null}
+      <Lines lines={top} />
+      {field === 'params' ? <LineInput label="parameters" initial={paramsToText(params)} active width={w} onSubmit={submit} onCancel={() => setField(undefined)} /> : null}
+      <Lines lines={win.lines} />
     </Box>
   );
 }
@@ -201,12 +212,4 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
 function transpose(t: bigint[][]): bigint[][] {
   const cols = t[0]?.length ?? 0;
   return Array.from({ length: cols }, (_, j) => t.map((r) => r[j] ?? 0n));
-}
-
-function safeCount(f: Family<unknown>, p: Params): string {
-  try {
-    return f.count(p).toString();
-  } catch {
-    return '?';
-  }
 }

@@ -4,15 +4,16 @@
  * findings of the selected one with what was verified where; one of its modules opened as a
  * Hilbert table with its checks (and added to the session); the findings table exported.
  */
-import { Box, Text } from 'ink';
+import { Box } from 'ink';
 import { useState } from 'react';
 import { Poly } from '../../core/poly.js';
 import { qSeries } from '../../series/series.js';
 import { makeTarget } from '../../series/target.js';
 import { countsText, rowKindsText, rowPlacesText, SWEEP_EXPORT_FORMATS, type SweepRow } from '../../sweep/index.js';
 import { LineInput } from '../components/LineInput.js';
-import { ProgressBar } from '../components/ProgressBar.js';
-import { ShadedGrid } from '../components/ShadedGrid.js';
+import { Lines } from '../components/Lines.js';
+import { progressLines } from '../components/ProgressBar.js';
+import { gridLines } from '../components/ShadedGrid.js';
 import { existingCatalogue } from '../engines/existingCatalogue.js';
 import { moduleOutcome } from '../engines/moduleView.js';
 import { tableOf } from '../engines/moduleTypes.js';
@@ -20,12 +21,10 @@ import { checkSweepLine, DEFAULT_SWEEP, exportSweep, startSweep, SWEEP_PRESETS, 
 import { errorText } from '../errorText.js';
 import { useKeys, useTicker } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
-import { useTheme } from '../ThemeContext.js';
+import { line, wrapLine, type SLine } from '../text/styledLine.js';
 import { useEditField } from '../useEditField.js';
 import { useJob } from '../useJob.js';
-import { ModuleFindings } from './ModuleFindings.js';
-
-const FINDING_LINES = 5;
+import { useScroll } from '../useScroll.js';
 
 /** Σ dim q^{x-degree} of a module document, for a search target. */
 function byX(doc: Record<string, unknown>): Poly {
@@ -35,11 +34,10 @@ function byX(doc: Record<string, unknown>): Poly {
 }
 
 export function SweepScreen(props: ScreenProps) {
-  const theme = useTheme();
-  const [line, setLine] = useState(DEFAULT_SWEEP);
-  const [draft, setDraft] = useState(line);
+  const [sweepLine, setSweepLine] = useState(DEFAULT_SWEEP);
   const [field, setField] = useEditField<'sweep'>(props.active, props.setEditing);
   const job = useJob<SweepOutcome>();
+  const scroll = useScroll();
   const [sel, setSel] = useState(0);
   const [open, setOpen] = useState<{ row: number; place: number } | undefined>(undefined);
   const [format, setFormat] = useState(0);
@@ -102,11 +100,8 @@ export function SweepScreen(props: ScreenProps) {
         if (key.leftArrow || key.rightArrow) return openModule(open.place + (key.leftArrow ? -1 : 1));
         return;
       }
-      if (key.return) return start(line);
-      if (input === 'e') {
-        setDraft(line);
-        return setField('sweep');
-      }
+      if (key.return) return start(sweepLine);
+      if (input === 'e') return setField('sweep');
       if (input === 'x') {
         if (job.state.status === 'running') {
           job.cancel();
@@ -114,12 +109,12 @@ export function SweepScreen(props: ScreenProps) {
         }
         return;
       }
-      if (input === 's') return setLine(SWEEP_PRESETS[(SWEEP_PRESETS.indexOf(line) + 1) % SWEEP_PRESETS.length]!);
+      if (input === 's') return setSweepLine(SWEEP_PRESETS[(SWEEP_PRESETS.indexOf(sweepLine) + 1) % SWEEP_PRESETS.length]!);
       if (input === 'f') return setFormat((f) => (f + 1) % SWEEP_EXPORT_FORMATS.length);
       if (input === 'w' || input === 'W') return write(input === 'W');
       if (input === 'o') return openModule(0);
       if (input === 'g') return sendToSearch();
-      const page = Math.max(1, props.height - 4 - FINDING_LINES);
+      const page = Math.max(1, props.height - 4);
       if (key.upArrow) setSel((s) => Math.max(0, s - 1));
       if (key.downArrow) setSel((s) => Math.min(Math.max(0, rows.length - 1), s + 1));
       if (key.pageUp) setSel((s) => Math.max(0, s - page));
@@ -130,95 +125,61 @@ export function SweepScreen(props: ScreenProps) {
 
   const st = job.state;
   const w = props.width;
-  const status =
-    st.status === 'running' ? (
-      <ProgressBar state={{ label: `sweep ${st.progress?.label ?? 'planning'}`, done: st.progress?.done ?? 0, total: st.progress?.total, elapsedMs: now - st.startedAt }} width={w} />
-    ) : st.status === 'error' ? (
-      <Text wrap="truncate" {...theme.style('error')}>✗ {st.error}</Text>
-    ) : st.status === 'cancelled' ? (
-      <Text wrap="truncate" {...theme.style('warn')}>Cancelled: the modules finished so far are kept in the catalogue; Enter resumes the sweep.</Text>
-    ) : outcome ? (
-      <Text wrap="truncate" {...theme.style('ok')}>sweep:{outcome.doc.id} {countsText(outcome.doc)}</Text>
-    ) : (
-      <Text wrap="truncate" {...theme.style('dim')}>Enter runs this sweep; e edits it (the options of `gradus sweep run`); s shows another example.</Text>
-    );
+  const top: SLine[] = field === 'sweep' ? [] : wrapLine([{ text: 'sweep ', style: 'dim' }, { text: sweepLine }], w, 6);
+  const status: SLine[] = [];
+  if (st.status === 'running') {
+    const p = st.progress;
+    status.push(...progressLines({ label: `sweep ${p?.label ?? 'planning'}`, done: p?.done ?? 0, total: p?.total, elapsedMs: now - st.startedAt, estimateSeconds: p?.estimateSeconds, sinceEstimateMs: p?.estimatedAt !== undefined ? now - p.estimatedAt : undefined }, w));
+  } else if (st.status === 'error') status.push(...wrapLine(line(`✗ ${st.error}`, 'error'), w, 2));
+  else if (st.status === 'cancelled') status.push(...wrapLine(line('Cancelled: the modules finished so far are kept in the catalogue; Enter resumes the sweep.', 'warn'), w, 2));
+  else if (outcome) status.push(...wrapLine(line(`sweep:${outcome.doc.id} ${countsText(outcome.doc)}`, 'ok'), w, 2));
+  else status.push(...wrapLine(line('Enter runs this sweep; e edits it (the options of `gradus sweep run`); s shows another example.', 'dim'), w, 2));
 
-  const header = field === 'sweep' ? (
-    <LineInput
-      label="sweep"
-      value={draft}
-      active
-      width={w}
-      onChange={setDraft}
-      onSubmit={(v) => {
-        setLine(v);
-        setField(undefined);
-        start(v);
-      }}
-      onLeave={() => setField(undefined)}
-    />
-  ) : (
-    <Text wrap="truncate">
-      <Text {...theme.style('dim')}>sweep </Text>
-      {line}
-    </Text>
-  );
-
+  const body: SLine[] = [];
+  let focus: [number, number] | undefined;
   if (open && outcome && rows[open.row]) {
     const r = rows[open.row]!;
     const p = r.places[open.place]!;
     const view = moduleOutcome(outcome.modules[p.key] ?? {});
-    const table = tableOf(view);
-    return (
-      <Box flexDirection="column" width={w}>
-        {header}
-        <Text wrap="truncate" {...theme.style('accent')}>
-          {r.rank}. {r.seed} [{r.ops.join(',')}] at n = {p.n}
-          {p.k !== undefined ? `, k = ${p.k}` : ''} ({open.place + 1} of {r.places.length}): dimension {view.dimension}
-        </Text>
-        <Text wrap="truncate" {...theme.style('dim')}>gradus {p.key}</Text>
-        <ShadedGrid table={table} rowLabel={view.axes[1] ?? ''} colLabel={view.axes[0] ?? 'x'} width={w} height={Math.max(3, props.height - 4 - view.findings.length)} />
-        <ModuleFindings findings={view.findings} width={w} />
-      </Box>
-    );
+    body.push(...wrapLine(line(`${r.rank}. ${r.seed} [${r.ops.join(',')}] at n = ${p.n}${p.k !== undefined ? `, k = ${p.k}` : ''} (${open.place + 1} of ${r.places.length}): dimension ${view.dimension}`, 'accent'), w, 2));
+    body.push(...wrapLine(line(`gradus ${p.key}`, 'dim'), w, 2));
+    body.push(...gridLines({ table: tableOf(view), rowLabel: view.axes[1] ?? '', colLabel: view.axes[0] ?? 'x', width: w }).lines);
+    for (const f of view.findings) {
+      const mark = f.holds === true ? '✓ holds ' : f.holds === false ? '✗ fails ' : '· n/a   ';
+      body.push(...wrapLine([{ text: mark, style: f.holds === true ? 'ok' : f.holds === false ? 'warn' : 'dim' }, { text: f.label }, ...(f.detail ? [{ text: ` — ${f.detail}`, style: 'dim' as const }] : [])], w, 8));
+    }
+  } else if (rows.length > 0) {
+    body.push(...wrapLine(line(`rank · seed · operators · places · findings   (export: ${SWEEP_EXPORT_FORMATS[format]}, f changes it, w writes)`, 'dim'), w, 2));
+    rows.forEach((r, i) => {
+      const selected = i === Math.min(sel, rows.length - 1);
+      const at = body.length;
+      body.push(...wrapLine([{ text: `${selected ? '▶' : ' '}${String(r.rank).padStart(3)}. ${r.seed} [${r.ops.join(',')}] ${rowPlacesText(r)} — ${rowKindsText(r)}`, ...(selected ? { style: 'selected' as const } : {}) }], w, 6));
+      if (!selected) return;
+      for (const f of r.findings) body.push(...wrapLine([{ text: '      · ', style: 'value' }, { text: f.claim }, { text: ` — ${f.verified}`, style: 'dim' }], w, 8));
+      body.push(...wrapLine(line(`      o opens its module${r.places.length > 1 ? 's (←/→)' : ''}; g searches its Hilbert series; reproduce: ${r.reproduce[r.reproduce.length - 1]}`, 'dim'), w, 8));
+      focus = [at, body.length - 1];
+    });
   }
-
-  const listH = Math.max(2, props.height - 3 - FINDING_LINES);
-  const first = Math.max(0, Math.min(sel - Math.floor(listH / 2), rows.length - listH));
+  const room = Math.max(3, props.height - top.length - (field === 'sweep' ? 1 : 0) - status.length);
+  const win = scroll.view(body, room, focus);
   return (
     <Box flexDirection="column" width={w}>
-      {header}
-      {status}
-      <Text wrap="truncate" {...theme.style('dim')}>
-        {rows.length ? `rank · seed · operators · places · findings   (export: ${SWEEP_EXPORT_FORMATS[format]}, f changes it, w writes)` : ''}
-      </Text>
-      <Box flexDirection="column" height={listH} overflow="hidden">
-        {rows.slice(first, first + listH).map((r, i) => {
-          const selected = first + i === sel;
-          return (
-            <Text key={r.id} wrap="truncate" {...(selected ? theme.style('selected') : {})}>
-              {selected && !theme.color ? '▶' : ' '}
-              {String(r.rank).padStart(3)}. {r.seed} [{r.ops.join(',')}] {rowPlacesText(r)} — {rowKindsText(r)}
-            </Text>
-          );
-        })}
-      </Box>
-      <Box flexDirection="column" height={FINDING_LINES} overflow="hidden">
-        {row
-          ? [
-              ...row.findings.slice(0, FINDING_LINES - 1).map((f, i) => (
-                <Text key={i} wrap="truncate">
-                  <Text {...theme.style('value')}>· </Text>
-                  {f.claim}
-                  <Text {...theme.style('dim')}> — {f.verified}</Text>
-                </Text>
-              )),
-              <Text key="r" wrap="truncate" {...theme.style('dim')}>
-                o opens its module{row.places.length > 1 ? 's (←/→)' : ''}; g searches its Hilbert series; reproduce: {row.reproduce[row.reproduce.length - 1]}
-              </Text>,
-            ]
-          : null}
-      </Box>
+      <Lines lines={top} />
+      {field === 'sweep' ? (
+        <LineInput
+          label="sweep"
+          initial={sweepLine}
+          active
+          width={w}
+          onSubmit={(v) => {
+            setSweepLine(v);
+            setField(undefined);
+            start(v);
+          }}
+          onCancel={() => setField(undefined)}
+        />
+      ) : null}
+      <Lines lines={[...status, ...win.lines]} />
     </Box>
   );
 }

@@ -1,37 +1,52 @@
 /**
  * Symmetric functions: type an expression of the `gradus sym` language, see the result in
- * the Schur basis; a parse error is pointed at its column under the expression.
+ * the Schur basis one term per line (wrapped, scrolling with markers); a parse error is
+ * pointed at its column under the expression.
  */
-import { Box, Text } from 'ink';
+import { Box } from 'ink';
 import { useState } from 'react';
 import { seriesFromJson } from '../../series/seriesJson.js';
-import { makeTarget } from '../../series/target.js';
+import { makeTarget, type Target } from '../../series/target.js';
 import { LineInput } from '../components/LineInput.js';
+import { Lines } from '../components/Lines.js';
+import { existingCatalogue } from '../engines/existingCatalogue.js';
 import { atSize, errorColumn, hasSize, startSym, startSymTarget, SYMFUN_ENGINE_AVAILABLE, type SymOutcome } from '../engines/symfun.js';
-import type { Target } from '../../series/target.js';
 import { errorText } from '../errorText.js';
 import { useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
-import { useTheme } from '../ThemeContext.js';
+import { splitTerms } from '../text/splitTerms.js';
+import { line, wrapLine, wrapLines, type SLine } from '../text/styledLine.js';
 import { useEditField } from '../useEditField.js';
 import { useJob } from '../useJob.js';
-import { existingCatalogue } from '../engines/existingCatalogue.js';
+import { useScroll } from '../useScroll.js';
 
 export const DEFAULT_EXPRESSION = 'nabla(e({n}))';
+const FORMS = 'Forms: e(4) h(2,1) s(2,1) p(2,1) m(2,1) H(2,1) HL(2,1) nabla(F) delta(f,F) deltaprime(f,F) omega(F) subs(F,t=0) swap(F) pleth(F,1-q) hall(F,G) star(F,G) hilbert(F)';
+
+/** The expression with a caret under `col` (1-based): whole when it fits, else the part around it. */
+function caretLines(expr: string, col: number, width: number): SLine[] {
+  const room = width - 4;
+  const chars = [...expr];
+  const from = chars.length <= room ? 0 : Math.max(0, Math.min(col - 1 - Math.floor(room / 2), chars.length - room + 1));
+  const shown = (from > 0 ? '…' : '') + chars.slice(from, from + room - (from > 0 ? 1 : 0)).join('');
+  const at = col - 1 - from + (from > 0 ? 1 : 0);
+  return [
+    [{ text: 'at  ', style: 'dim' }, { text: shown }],
+    [{ text: ' '.repeat(4 + Math.max(0, at)) + '^', style: 'error' }],
+  ];
+}
 
 export function SymfunScreen(props: ScreenProps) {
-  const theme = useTheme();
   const [expr, setExpr] = useState(DEFAULT_EXPRESSION);
   const [field, setField] = useEditField<'expr'>(props.active, props.setEditing);
-  const [offset, setOffset] = useState(0);
-  const job = useJob<SymOutcome>();
-  const family = useJob<Target>();
-  const [evaluated, setEvaluated] = useState(expr);
+  const job = useJob<SymOutcome>('symfun');
+  const family = useJob<Target>('symfun');
   const [size, setSize] = useState(3);
+  const scroll = useScroll();
 
   const evaluate = (text: string) => {
-    setEvaluated(text);
-    setOffset(0);
+    scroll.reset();
+    family.clear();
     job.run(
       (onProgress) => startSym(hasSize(text) ? atSize(text, size) : text, onProgress),
       (r) => props.addItem({ title: `sym ${r.expression}`, origin: 'symfun', payload: r }),
@@ -58,7 +73,7 @@ export function SymfunScreen(props: ScreenProps) {
       props.addItem({ title, origin: 'symfun', target: makeTarget(title, [{ n: r.degree, series }]) });
       props.go('search');
     } catch (e) {
-      props.notify(errorText(e), 'error');
+      props.notify(errorText(e, 'symfun'), 'error');
     }
   };
 
@@ -67,83 +82,67 @@ export function SymfunScreen(props: ScreenProps) {
       if (key.return) return evaluate(expr);
       if (input === 'e') return setField('expr');
       if (input === 'g') return sendToSearch();
-      if (input === 'x' && (job.state.status === 'running' || family.state.status === 'running')) {
+      if (input === 'x') {
+        if (job.state.status !== 'running' && family.state.status !== 'running') return props.notify('nothing is running');
         family.cancel();
         return job.cancel();
       }
-      if ((input === '+' || input === '=' || input === '-') && hasSize(expr)) return setSize((n) => Math.min(8, Math.max(1, n + (input === '-' ? -1 : 1))));
-      if (key.downArrow) setOffset((o) => o + 1);
-      if (key.upArrow) setOffset((o) => Math.max(0, o - 1));
+      if (input === '+' || input === '=' || input === '-') {
+        if (!hasSize(expr)) return props.notify('+/- change {n}; this expression has no {n}', 'error');
+        const next = Math.min(8, Math.max(1, size + (input === '-' ? -1 : 1)));
+        if (next === size) return props.notify(`{n} goes from 1 to 8`, 'error');
+        // A result of another size no longer belongs here.
+        job.clear();
+        family.clear();
+        return setSize(next);
+      }
+      scroll.handle(input, key, true);
     },
     props.active && field === undefined,
   );
 
+  const w = props.width;
   const st = job.state;
+  const result = st.status === 'done' ? st.result : undefined;
   const col = st.status === 'error' && st.error ? errorColumn(st.error) : undefined;
-  const lines = st.result?.lines ?? [];
-  const room = Math.max(3, props.height - 5);
-  const off = Math.min(offset, Math.max(0, lines.length - room));
+  const top: SLine[] = [];
+  if (!SYMFUN_ENGINE_AVAILABLE) top.push(...wrapLine(line('The symmetric-function engine (src/symfun expressions) is not available in this build; nothing can be evaluated here.', 'warn'), w));
+  if (field !== 'expr') top.push(...wrapLine([{ text: 'sym ', style: 'dim' }, { text: expr }], w, 4));
+  const mid: SLine[] = [];
+  if (hasSize(expr)) mid.push(...wrapLine(line(`{n} = ${size} (+/- changes it; Enter evaluates at ${size}; g searches n = 1..${size})`, 'dim'), w, 2));
+  if (family.state.status === 'error') mid.push(...wrapLine(line(`✗ ${family.state.error}`, 'error'), w, 2));
+  else if (family.state.status === 'running') mid.push(line('building the target over n… (x cancels)', 'dim'));
+  if (st.status === 'running') mid.push(line('evaluating… (x cancels)', 'dim'));
+  else if (st.status === 'cancelled') mid.push(line('Cancelled. Enter evaluates again.', 'warn'));
+  else if (st.status === 'error') {
+    if (col !== undefined && !hasSize(expr)) mid.push(...caretLines(expr, col, w));
+    mid.push(...wrapLine(line(`✗ ${st.error}`, 'error'), w, 2));
+  } else if (result) {
+    const degree = result.degree !== undefined ? `, degree ${result.degree}` : '';
+    mid.push(...wrapLine(line(`${result.expression} in the Schur basis${degree} (${(result.elapsedMs / 1000).toFixed(2)}s; g sends it to the search):`, 'ok'), w, 2));
+  } else mid.push(...wrapLines([line('Enter evaluates; e edits.', 'dim'), line(FORMS, 'dim')], w, 2));
+  const terms = result ? result.lines.flatMap((l) => splitTerms(l)) : [];
+  const body = wrapLines(terms.map((t, i) => line(i === 0 || t.startsWith('+') || t.startsWith('-') ? `  ${t}` : t)), w, 6);
+  const room = Math.max(3, props.height - top.length - (field === 'expr' ? 1 : 0) - mid.length);
+  const win = scroll.view(body, room, undefined, ['↑/PgUp', '↓/PgDn']);
   return (
     <Box flexDirection="column">
-      {!SYMFUN_ENGINE_AVAILABLE ? (
-        <Text wrap="wrap" {...theme.style('warn')}>
-          The symmetric-function engine (src/symfun expressions) is not available in this build; nothing can be evaluated here.
-        </Text>
-      ) : null}
+      <Lines lines={top} />
       {field === 'expr' ? (
         <LineInput
           label="sym"
-          value={expr}
+          initial={expr}
           active
-          width={props.width}
-          onChange={setExpr}
+          width={w}
           onSubmit={(v) => {
             setField(undefined);
+            setExpr(v);
             evaluate(v);
           }}
-          onLeave={() => setField(undefined)}
+          onCancel={() => setField(undefined)}
         />
-      ) : (
-        <Text wrap="truncate">
-          <Text {...theme.style('dim')}>sym </Text>
-          {expr}
-        </Text>
-      )}
-      {hasSize(expr) ? (
-        <Text {...theme.style('dim')}>
-          {'{n}'} = {size} (+/- changes it; g searches n = 1..{size})
-        </Text>
       ) : null}
-      {family.state.status === 'error' ? (
-        <Text wrap="wrap" {...theme.style('error')}>
-          ✗ {family.state.error}
-        </Text>
-      ) : family.state.status === 'running' ? (
-        <Text {...theme.style('dim')}>building the target over n… (x cancels)</Text>
-      ) : null}
-      {col !== undefined && evaluated === expr && !hasSize(expr) ? (
-        <Text {...theme.style('error')}>{' '.repeat(Math.max(0, col - 1) + 4)}^</Text>
-      ) : null}
-      {st.status === 'running' ? (
-        <Text {...theme.style('dim')}>evaluating… (x cancels)</Text>
-      ) : st.status === 'error' ? (
-        <Text wrap="wrap" {...theme.style('error')}>
-          ✗ {st.error}
-        </Text>
-      ) : st.result ? (
-        <Text wrap="truncate" {...theme.style('ok')}>
-          = in the Schur basis{st.result.degree !== undefined ? `, degree ${st.result.degree}` : ''} ({(st.result.elapsedMs / 1000).toFixed(2)}s; g sends it to the search)
-        </Text>
-      ) : (
-        <Text {...theme.style('dim')}>Enter evaluates; e edits. Forms: e(4) h(2,1) s(2,1) p(2,1) H(2,1) nabla(F) delta(f,F) deltaprime(f,F) omega(F) subs(F,t=0)</Text>
-      )}
-      {lines.slice(off, off + room).map((l, i) => (
-        <Text key={i} wrap="truncate">
-          {'  '}
-          {l}
-        </Text>
-      ))}
-      {lines.length > room ? <Text {...theme.style('dim')}>lines {off + 1}–{Math.min(lines.length, off + room)} of {lines.length} (↑/↓)</Text> : null}
+      <Lines lines={[...mid, ...win.lines]} />
     </Box>
   );
 }

@@ -34,8 +34,12 @@ describe('drawing helpers', () => {
     );
   });
 
-  it('estimates the time left from the rate so far', () => {
-    expect(progressText({ label: 'x', done: 25, total: 100, elapsedMs: 10_000 })).toBe('25/100  25%  ~30s left');
-    expect(progressText({ label: 'x', done: 0, total: 100, elapsedMs: 10 })).toBe('0/100');
+  it('estimates the time left from the rate so far, or from the estimate the engine gave', () => {
+    expect(progressText({ label: 'x', done: 25, total: 100, elapsedMs: 10_000 })).toBe('25/100  25%  10s elapsed  ~30s left');
+    expect(progressText({ label: 'x', done: 0, total: 100, elapsedMs: 10 })).toBe('0/100  0%  0.0s elapsed');
+    // Eleven of twelve tasks done in 3 s says little when the last task is the big one:
+    // the engine's estimate of the whole run is shown instead of a rate.
+    expect(progressText({ label: 'x', done: 11, total: 12, elapsedMs: 3000, estimateSeconds: 18 })).toBe('11/12  92%  3.0s elapsed  estimate ~18s in all (~15s left)');
+    expect(progressText({ label: 'x', done: 11, total: 12, elapsedMs: 20_000, estimateSeconds: 18 })).toBe('11/12  92%  20s elapsed  over the estimate of ~18s');
   });
 });

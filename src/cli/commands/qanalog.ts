@@ -1,10 +1,10 @@
-/** `gradus qseries <name> --n N [--k K]`: the q-analogs of src/core/qanalogs. */
-import { QSERIES_KINDS, qseriesKind } from '../../requests/qseries-request.js';
+/** `gradus qanalog <name> --n N [--k K]`: the q-analogs of src/core/qanalogs. */
+import { QANALOG_KINDS, qanalogKind } from '../../requests/qanalog-request.js';
 import { dataCommand } from '../data-command.js';
 
-export const qseriesCommand = dataCommand(qseriesKind, {
+export const qanalogCommand = dataCommand(qanalogKind, {
   summary: 'q-integers, q-factorials, q-binomials, q-multinomials and q-Stirling numbers',
-  details: ['names:', ...QSERIES_KINDS.map((k) => `  ${k.name.padEnd(17)}${k.description}`)].join('\n'),
+  details: ['names:', ...QANALOG_KINDS.map((k) => `  ${k.name.padEnd(17)}${k.description}`)].join('\n'),
   print(_r, result, io) {
     io.out(`${result.title} = ${result.series.toString()}`);
     io.out(`coefficients (q^0 up): ${result.series.toQArray().join(' ')}`);

@@ -1,4 +1,4 @@
-/** `qseries`: the q-analogs of src/core/qanalogs as exact polynomials in q. */
+/** `qanalog`: the q-analogs of src/core/qanalogs as exact polynomials in q. */
 import { InputError } from '../core/errors.js';
 import { makeProvenance } from '../core/provenance.js';
 import type { Poly } from '../core/poly.js';
@@ -7,7 +7,7 @@ import { unknownNameMessage } from '../core/suggest.js';
 import { intListOpt, intOpt, type OptionSpec } from './options.js';
 import type { RequestKind } from './request-kind.js';
 
-interface QSeriesKind {
+interface QAnalogKind {
   readonly name: string;
   readonly description: string;
   readonly needsK: boolean;
@@ -17,7 +17,7 @@ interface QSeriesKind {
 
 const N_MAX = 200;
 
-export const QSERIES_KINDS: readonly QSeriesKind[] = [
+export const QANALOG_KINDS: readonly QAnalogKind[] = [
   { name: 'integer', description: '[n]_q = 1 + q + … + q^(n-1)', needsK: false, title: (n) => `[${n}]_q`, compute: (n) => qInteger(n) },
   { name: 'factorial', description: '[n]_q! = [1]_q [2]_q … [n]_q', needsK: false, title: (n) => `[${n}]_q!`, compute: (n) => qFactorial(n) },
   { name: 'binomial', description: 'Gaussian binomial [n choose k]_q', needsK: true, title: (n, k) => `[${n} choose ${k}]_q`, compute: (n, k) => qBinomial(n, k) },
@@ -38,23 +38,23 @@ export const QSERIES_KINDS: readonly QSeriesKind[] = [
   },
 ];
 
-export interface QSeriesRequest {
-  readonly kind: 'qseries';
+export interface QAnalogRequest {
+  readonly kind: 'qanalog';
   readonly name: string;
   readonly n: number;
   readonly k?: number;
   readonly parts?: readonly number[];
 }
 
-export interface QSeriesResult {
+export interface QAnalogResult {
   readonly title: string;
   readonly series: Poly;
 }
 
-export const qseriesKind: RequestKind<QSeriesRequest, QSeriesResult> = {
-  name: 'qseries',
-  usage: 'qseries <name> --n N [--k K] [--parts A,B,…] [--json]',
-  positionals: [{ name: 'name', description: QSERIES_KINDS.map((k) => k.name).join(', ') }],
+export const qanalogKind: RequestKind<QAnalogRequest, QAnalogResult> = {
+  name: 'qanalog',
+  usage: 'qanalog <name> --n N [--k K] [--parts A,B,…] [--json]',
+  positionals: [{ name: 'name', description: QANALOG_KINDS.map((k) => k.name).join(', ') }],
   options: [
     { name: 'n', type: 'int', description: 'size n', placeholder: 'N', min: 0, max: N_MAX },
     { name: 'k', type: 'int', description: 'second parameter k (binomial, stirling, ordered-stirling)', placeholder: 'K', min: 0, max: N_MAX },
@@ -62,29 +62,29 @@ export const qseriesKind: RequestKind<QSeriesRequest, QSeriesResult> = {
   ],
   fromArgs(args) {
     const name = args.positionals[0]!;
-    const kind = QSERIES_KINDS.find((k) => k.name === name);
-    if (!kind) throw new InputError(`qseries: ${unknownNameMessage('name', name, QSERIES_KINDS.map((k) => k.name))}`, 'name');
+    const kind = QANALOG_KINDS.find((k) => k.name === name);
+    if (!kind) throw new InputError(`qanalog: ${unknownNameMessage('name', name, QANALOG_KINDS.map((k) => k.name))}`, 'name');
     let n = intOpt(args, 'n');
     let parts: number[] | undefined;
     if (kind.name === 'multinomial') {
       parts = intListOpt(args, 'parts');
-      if (!parts) throw new InputError('qseries multinomial needs --parts A,B,… (non-negative integers)', 'parts');
+      if (!parts) throw new InputError('qanalog multinomial needs --parts A,B,… (non-negative integers)', 'parts');
       const sum = parts.reduce((a, b) => a + b, 0);
       if (sum > N_MAX) throw new InputError(`--parts must sum to at most ${N_MAX} (got ${sum})`, 'parts');
       if (n !== undefined && n !== sum) throw new InputError(`--n must equal the sum of --parts (${sum}), got ${n}`, 'n');
       n = sum;
-    } else if (intListOpt(args, 'parts') !== undefined) throw new InputError(`--parts goes with qseries multinomial, not ${name}`, 'parts');
-    if (n === undefined) throw new InputError(`qseries ${name} needs --n N (0..${N_MAX})`, 'n');
+    } else if (intListOpt(args, 'parts') !== undefined) throw new InputError(`--parts goes with qanalog multinomial, not ${name}`, 'parts');
+    if (n === undefined) throw new InputError(`qanalog ${name} needs --n N (0..${N_MAX})`, 'n');
     const k = intOpt(args, 'k');
-    if (kind.needsK && k === undefined) throw new InputError(`qseries ${name} needs --k K (0..${N_MAX})`, 'k');
-    if (!kind.needsK && k !== undefined) throw new InputError(`qseries ${name} takes no --k`, 'k');
-    return { kind: 'qseries', name, n, ...(k !== undefined ? { k } : {}), ...(parts ? { parts } : {}) };
+    if (kind.needsK && k === undefined) throw new InputError(`qanalog ${name} needs --k K (0..${N_MAX})`, 'k');
+    if (!kind.needsK && k !== undefined) throw new InputError(`qanalog ${name} takes no --k`, 'k');
+    return { kind: 'qanalog', name, n, ...(k !== undefined ? { k } : {}), ...(parts ? { parts } : {}) };
   },
   canonical(r) {
     return { positionals: [r.name], options: { n: r.parts ? undefined : r.n, k: r.k, parts: r.parts } };
   },
   async compute(r) {
-    const kind = QSERIES_KINDS.find((k) => k.name === r.name)!;
+    const kind = QANALOG_KINDS.find((k) => k.name === r.name)!;
     return { title: kind.title(r.n, r.k, r.parts), series: kind.compute(r.n, r.k ?? 0, r.parts ?? []) };
   },
   document(r, result, key) {
