@@ -10,7 +10,7 @@ import type { Arg, Node } from './expression-parser.js';
 import { HALL_LITTLEWOOD_MAX_N, modifiedHallLittlewood } from './hall-littlewood.js';
 import { MACDONALD_MAX_N, modifiedMacdonald } from './macdonald.js';
 import { delta, deltaPrime, deltaPrimeOfEn, nabla, starScalar } from './operators.js';
-import { plethysmTimes } from './plethysm.js';
+import { plethysmDividedCleared, plethysmTimes } from './plethysm.js';
 import { SymFun } from './symfun.js';
 import type { Basis } from './transitions.js';
 
@@ -42,6 +42,8 @@ export const EXPRESSION_FUNCTIONS: readonly FunctionDoc[] = [
   { name: 'subs', signature: 'subs(F, t=0)', description: 'set q and/or t to integers (subs(F, q=1, t=1))' },
   { name: 'swap', signature: 'swap(F)', description: 'exchange q and t' },
   { name: 'pleth', signature: 'pleth(F, 1-q)', description: 'plethysm F[X·A] by a q,t-polynomial A with integer coefficients' },
+  { name: 'revq', signature: 'revq(F)', description: 'q-reversal q^D F(1/q), D the largest q-degree of F' },
+  { name: 'plethdiv', signature: 'plethdiv(F, 1-q, 1-t)', description: '(q;q)_n (t;t)_n F[X/((1-q)(1-t))] (each alphabet 1-u, u a monomial; the factors (u;u)_n make it a polynomial)' },
   { name: 'inner', signature: 'inner(F, G)', description: 'Hall scalar product ⟨F, G⟩ (a scalar)' },
   { name: 'hilbert', signature: 'hilbert(F)', description: 'Hilbert series ⟨F, p_1^n⟩ (a scalar)' },
   { name: 'star', signature: 'star(F, G)', description: '*-scalar product, ⟨H̃_λ, H̃_μ⟩_* = δ w_μ (a scalar)' },
@@ -146,6 +148,15 @@ function reporter(label: string, opts: EvalOptions): ((done: number, total: numb
   return sink ? (done, total) => sink(label, done, total) : undefined;
 }
 
+/** The monomial u = q^a t^b of an alphabet 1 − u (u ≠ 1). */
+function oneMinusMonomial(f: SymFun, col: number): [number, number] {
+  const c = constantOf(f);
+  const u = c && c.isIntegral() ? Poly.one.sub(c.num) : undefined;
+  const terms = u ? [...u.terms()] : [];
+  if (terms.length !== 1 || terms[0]![2] !== 1n || terms[0]![0] + terms[0]![1] === 0) fail(col, 'the alphabet must be 1 - u for a monomial u in q, t, as 1-q or 1-q*t');
+  return [terms[0]![0], terms[0]![1]];
+}
+
 function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions): SymFun {
   const ev = (n: Node): SymFun => evaluateNode(n, opts);
   const name = node.name;
@@ -220,6 +231,15 @@ function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions):
       const alpha = constantOf(ev(b!));
       if (!alpha || !alpha.isIntegral()) fail(b!.col, 'the alphabet must be a polynomial in q, t with integer coefficients, as 1-q');
       return plethysmTimes(f, alpha!.num);
+    }
+    case 'revq': {
+      const [a] = exprArgs(node, 1, 'revq(F)');
+      return ev(a!).reverseQ();
+    }
+    case 'plethdiv': {
+      if (node.args.length < 2 || node.args.some((x) => x.kind !== 'expr')) fail(node.col, 'plethdiv takes a function and one or more alphabets 1-u: plethdiv(F, 1-q) or plethdiv(F, 1-q, 1-t)');
+      const [a, ...alphabets] = node.args.map((x) => (x as { expr: Node }).expr);
+      return plethysmDividedCleared(ev(a!), alphabets.map((b) => oneMinusMonomial(ev(b), b.col)));
     }
     case 'inner': {
       const [a, b] = exprArgs(node, 2, 'inner(F, G)');
