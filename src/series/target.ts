@@ -16,10 +16,15 @@ export interface Target {
   /** Where the values came from (a command line, a file, typed coefficients). */
   readonly label: string;
   readonly entries: readonly TargetEntry[];
+  /**
+   * A marked union read apart: each entry (n, k) is the coefficient of the marking variable's
+   * power named here (e.g. "θ^{n−k}") in a series over n.
+   */
+  readonly marked?: string;
 }
 
 /** Build a target; its kind is the widest of its entries' kinds (q inside q,t). */
-export function makeTarget(label: string, entries: readonly TargetEntry[]): Target {
+export function makeTarget(label: string, entries: readonly TargetEntry[], marked?: string): Target {
   if (entries.length === 0) throw new InputError('a target needs at least one entry (n, series)');
   const kinds = new Set(entries.map((e) => e.series.kind));
   let kind: SeriesKind;
@@ -35,7 +40,7 @@ export function makeTarget(label: string, entries: readonly TargetEntry[]): Targ
     seen.add(key);
   }
   const sorted = [...entries].sort((a, b) => a.n - b.n || (a.k ?? 0) - (b.k ?? 0));
-  return { kind, label, entries: sorted };
+  return { kind, label, entries: sorted, ...(marked ? { marked } : {}) };
 }
 
 export function entryKey(n: number, k?: number): string {

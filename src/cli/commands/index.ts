@@ -19,6 +19,7 @@ export const COMMAND_ENTRIES: readonly CommandEntry[] = [
   { name: 'quotient', load: async () => (await import('./quotient.js')).quotientCommand },
   { name: 'search', load: async () => (await import('./search.js')).searchCommand },
   { name: 'catalogue', load: async () => (await import('./catalogue.js')).catalogueCommand },
+  { name: 'expressions', load: async () => (await import('./expressions.js')).expressionsCommand },
   { name: 'export', load: async () => (await import('./export.js')).exportCommand },
   { name: 'qseries', load: async () => (await import('./qseries.js')).qseriesCommand },
   { name: 'app', load: async () => (await import('./app.js')).appCommand },

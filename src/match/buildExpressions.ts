@@ -1,0 +1,182 @@
+/**
+ * Building the expression library: every family (built in, and the user's stored ones) at every
+ * n up to --n-max that the catalogue does not hold yet, one pool task per place. A family's new
+ * units are written together in one transaction when all of its places are in; a family that
+ * fails at some place writes nothing and is reported with the place and the reason.
+ */
+import { setMaxListeners } from 'node:events';
+import { InputError, LimitError } from '../core/errors.js';
+import { makeProvenance } from '../core/provenance.js';
+import type { Progress } from '../core/progress.js';
+import { unknownNameMessage } from '../core/suggest.js';
+import { runTask, TaskCancelled } from '../pool/pool.js';
+import { seriesFromJson } from '../series/seriesJson.js';
+import type { Catalogue } from '../store/catalogue.js';
+import { expressionFamilies, writeExpressionUnits, type ExpressionFamily, type ExpressionUnit, type ExpressionValue } from '../store/expressionStore.js';
+import { BUILT_IN_EXPRESSIONS, placesOf, type Place } from './expressionFamilies.js';
+import { evaluateExpressionJob, type ExpressionJob, type ExpressionJobResult } from './expressionTask.js';
+
+const TASK = new URL('./expressionTask.ts', import.meta.url);
+
+/** The largest n of the library (the operators cost more than n! beyond). */
+export const EXPRESSION_N_MAX = 8;
+
+export interface ExpressionBuildOptions {
+  readonly nMax: number;
+  /** Only these family ids (built in or stored); default all. */
+  readonly families?: readonly string[];
+  readonly workers: number;
+  readonly progress: Progress;
+}
+
+export interface ExpressionBuildReport {
+  readonly families: number;
+  readonly units: number;
+  readonly skippedDone: number;
+  readonly values: number;
+  readonly seconds: number;
+}
+
+interface FamilyWork {
+  readonly family: ExpressionFamily;
+  readonly sizes: readonly number[];
+  readonly replaceAll: boolean;
+}
+
+/** Evaluate the places of some families at some sizes; per family, its units or its first failure. */
+async function evaluate(work: readonly FamilyWork[], workers: number, progress: Progress): Promise<Map<string, ExpressionUnit[] | Error>> {
+  const jobs: { job: ExpressionJob; w: FamilyWork }[] = [];
+  for (const w of work) for (const n of w.sizes) for (const place of placesOf(w.family, n)) jobs.push({ job: { family: w.family, place }, w });
+  // the largest sizes first, so the two threads finish together
+  jobs.sort((a, b) => b.job.place.n - a.job.place.n);
+  const results = new Map<string, Map<number, { place: Place; r: ExpressionJobResult }[]>>();
+  const failed = new Map<string, Error>();
+  const stops = new Map(work.map((w) => [w.family.id, new AbortController()] as const));
+  for (const c of stops.values()) setMaxListeners(0, c.signal);
+  let done = 0;
+  progress.start(`expression library (${jobs.length} places, ${workers} worker${workers === 1 ? '' : 's'})`, jobs.length);
+  const finish = (job: ExpressionJob, r: ExpressionJobResult) => {
+    const byN = results.get(job.family.id) ?? new Map<number, { place: Place; r: ExpressionJobResult }[]>();
+    byN.set(job.place.n, [...(byN.get(job.place.n) ?? []), { place: job.place, r }]);
+    results.set(job.family.id, byN);
+    progress.update(++done);
+  };
+  const failWith = (id: string, e: unknown) => {
+    if (e instanceof TaskCancelled) return;
+    if (!(e instanceof InputError || e instanceof LimitError)) throw e;
+    if (!failed.has(id)) failed.set(id, e);
+    stops.get(id)!.abort();
+  };
+  if (workers <= 1) {
+    for (const { job } of jobs) {
+      if (failed.has(job.family.id)) continue;
+      try {
+        finish(job, evaluateExpressionJob(job));
+      } catch (e) {
+        failWith(job.family.id, e);
+      }
+    }
+  } else {
+    await Promise.all(
+      jobs.map(async ({ job }) => {
+        try {
+          finish(job, await runTask<ExpressionJobResult>(TASK, 'evaluateExpressionJob', job, { threads: workers, signal: stops.get(job.family.id)!.signal }));
+        } catch (e) {
+          failWith(job.family.id, e);
+        }
+      }),
+    );
+  }
+  progress.finish();
+  const out = new Map<string, ExpressionUnit[] | Error>();
+  for (const w of work) {
+    const f = failed.get(w.family.id);
+    if (f) {
+      out.set(w.family.id, f);
+      continue;
+    }
+    const byN = results.get(w.family.id) ?? new Map();
+    out.set(w.family.id, w.sizes.map((n) => unitOf(w.family, n, byN.get(n) ?? [], workers)));
+  }
+  return out;
+}
+
+function unitOf(family: ExpressionFamily, n: number, places: readonly { place: Place; r: ExpressionJobResult }[], workers: number): ExpressionUnit {
+  const values: ExpressionValue[] = places.flatMap(({ place, r }) =>
+    r.values.map((v) => ({
+      family: family.id,
+      n,
+      ...(place.k === undefined ? {} : { k: place.k }),
+      ...(place.partition ? { partition: place.partition } : {}),
+      specialisation: v.specialisation,
+      projection: v.projection,
+      expression: v.expression,
+      series: seriesFromJson(v.series, 'expression value'),
+    })),
+  );
+  const seconds = places.reduce((s, p) => s + p.r.seconds, 0);
+  return {
+    n,
+    values,
+    seconds,
+    provenance: makeProvenance({
+      request: `expression library ${family.id} n=${n}: ${family.template}`,
+      method: `exact over Q[q,t] by the symmetric-function engine (gradus sym), each place evaluated once and its specialisations derived from it (${workers} worker${workers === 1 ? '' : 's'})`,
+      seconds,
+    }),
+  };
+}
+
+/** The families a build covers: the built-in ones and the user's stored ones (or those named). */
+function familiesToBuild(cat: Catalogue, only: readonly string[] | undefined): { family: ExpressionFamily; stored?: ExpressionFamily & { sizes: readonly number[] } }[] {
+  const stored = expressionFamilies(cat);
+  const all = [
+    ...BUILT_IN_EXPRESSIONS.map((family) => ({ family, stored: stored.find((s) => s.id === family.id) })),
+    ...stored.filter((s) => s.origin === 'user').map((s) => ({ family: s as ExpressionFamily, stored: s })),
+  ];
+  if (!only) return all;
+  for (const id of only) if (!all.some((x) => x.family.id === id)) throw new InputError(`--families: ${unknownNameMessage('expression family', id, all.map((x) => x.family.id))}`, 'families');
+  return all.filter((x) => only.includes(x.family.id));
+}
+
+export async function buildExpressionLibrary(cat: Catalogue, o: ExpressionBuildOptions): Promise<ExpressionBuildReport> {
+  const t0 = Date.now();
+  const work: FamilyWork[] = [];
+  let skippedDone = 0;
+  for (const { family, stored } of familiesToBuild(cat, o.families)) {
+    // a built-in family whose definition changed since it was stored is built again from n = 1
+    const replaceAll = stored !== undefined && stored.template !== family.template;
+    const have = new Set(replaceAll ? [] : stored?.sizes ?? []);
+    const sizes = Array.from({ length: o.nMax }, (_, i) => i + 1).filter((n) => !have.has(n));
+    skippedDone += o.nMax - sizes.length;
+    work.push({ family, sizes, replaceAll });
+  }
+  const results = await evaluate(work, o.workers, o.progress);
+  let units = 0;
+  let values = 0;
+  const failures: string[] = [];
+  for (const w of work) {
+    const r = results.get(w.family.id)!;
+    if (r instanceof Error) {
+      failures.push(r.message);
+      continue;
+    }
+    writeExpressionUnits(cat, w.family, r, w.replaceAll);
+    units += r.length;
+    values += r.reduce((s, u) => s + u.values.length, 0);
+  }
+  if (failures.length) throw new InputError(`${failures.join('; ')} — nothing of ${failures.length === 1 ? 'that family' : 'those families'} was stored (the other families were)`, 'template');
+  return { families: work.length, units, skippedDone, values, seconds: (Date.now() - t0) / 1000 };
+}
+
+/** A user family evaluated for n = 1..nMax and stored in one transaction, or nothing stored. */
+export async function addExpressionFamily(cat: Catalogue, family: ExpressionFamily, nMax: number, workers: number, progress: Progress): Promise<ExpressionBuildReport> {
+  const t0 = Date.now();
+  if (expressionFamilies(cat).some((f) => f.id === family.id)) throw new InputError(`an expression family ${family.id} is already in the catalogue; remove it first (gradus expressions remove ${family.id})`, 'name');
+  if (!cat.writable) throw new InputError(`cannot add an expression family: the catalogue ${cat.path} is read-only`, 'catalogue');
+  const sizes = Array.from({ length: nMax }, (_, i) => i + 1);
+  const r = (await evaluate([{ family, sizes, replaceAll: true }], workers, progress)).get(family.id)!;
+  if (r instanceof Error) throw r;
+  writeExpressionUnits(cat, family, r, true);
+  return { families: 1, units: r.length, skippedDone: 0, values: r.reduce((s, u) => s + u.values.length, 0), seconds: (Date.now() - t0) / 1000 };
+}
