@@ -7,7 +7,7 @@
  */
 import type { Partition } from '../core/partitions.js';
 import { substituteTemplate } from '../requests/template.js';
-import { seriesEquals } from '../series/series.js';
+import { seriesAtOne, seriesEquals } from '../series/series.js';
 import { rangeText, type TargetEntry } from '../series/target.js';
 import type { Catalogue } from '../store/catalogue.js';
 import { expressionAt, expressionFamilies, expressionSizes, expressionsByHash, placeKey, type ExpressionFamily, type ExpressionValue } from '../store/expressionStore.js';
@@ -74,10 +74,10 @@ export function chooseAnchor(entries: readonly TargetEntry[], maxN: number): Tar
   const held = entries.filter((e) => e.n <= maxN && !isZeroSeries(e.series));
   if (held.length === 0) return undefined;
   const n = Math.max(...held.map((e) => e.n));
-  const atN = held.filter((e) => e.n === n);
-  // k nearest n/2: the richest entries of the Delta family sit there
-  atN.sort((a, b) => Math.abs((a.k ?? 0) - n / 2) - Math.abs((b.k ?? 0) - n / 2));
-  return atN[0];
+  // the richest entry there (largest count at q = 1), then k nearest n/2
+  const atN = held.filter((e) => e.n === n).map((e) => ({ e, c: seriesAtOne(e.series) }));
+  atN.sort((a, b) => (b.c > a.c ? 1 : b.c < a.c ? -1 : 0) || Math.abs((a.e.k ?? 0) - n / 2) - Math.abs((b.e.k ?? 0) - n / 2));
+  return atN[0]?.e;
 }
 
 export function searchExpressions(cat: Catalogue, variants: readonly Variant[], anchorAt: (maxN: number) => TargetEntry | undefined): { matches: ExpressionMatch[]; families: number; maxN: number } {
@@ -87,8 +87,11 @@ export function searchExpressions(cat: Catalogue, variants: readonly Variant[], 
   const anchor0 = anchorAt(maxN);
   const out = new Map<string, ExpressionMatch>();
   if (!anchor0) return { matches: [], families: families.size, maxN };
+  const given = variants[0]?.target.entries ?? [];
   for (const variant of variants) {
     const entries = variant.target.entries;
+    // a variant equal to the target (a function symmetric in q and t) adds only a twisted copy of each match
+    if (variant.id !== 'as-given' && entries.every((e, i) => seriesEquals(e.series, given[i]!.series))) continue;
     const oneSize = new Set(entries.map((e) => e.n)).size === 1;
     const anchor = entries.find((e) => e.n === anchor0.n && e.k === anchor0.k);
     if (!anchor) continue;

@@ -58,11 +58,13 @@ export function rangeText(entries: readonly { n: number; k?: number }[]): string
   const contiguous = ns.every((n, i) => i === 0 || n === ns[i - 1]! + 1);
   const nText = contiguous && ns.length > 1 ? `n = ${ns[0]}..${ns[ns.length - 1]}` : `n = ${ns.join(', ')}`;
   if (!entries.some((e) => e.k !== undefined)) return nText;
-  const allK = ns.every((n) => {
-    const ks = new Set(entries.filter((e) => e.n === n).map((e) => e.k));
-    for (let k = 1; k <= n; k++) if (!ks.has(k)) return false;
-    return ks.size === n;
-  });
-  if (allK) return `${nText}, all k = 1..n`;
+  for (const from of [1, 0]) {
+    const allK = ns.every((n) => {
+      const ks = new Set(entries.filter((e) => e.n === n).map((e) => e.k));
+      for (let k = from; k <= n; k++) if (!ks.has(k)) return false;
+      return ks.size === n - from + 1;
+    });
+    if (allK) return `${nText}, all k = ${from}..n`;
+  }
   return entries.map((e) => `(${e.n},${e.k ?? '-'})`).join(' ');
 }
