@@ -47,8 +47,8 @@ interface FamilyWork {
 async function evaluate(work: readonly FamilyWork[], workers: number, progress: Progress): Promise<Map<string, ExpressionUnit[] | Error>> {
   const jobs: { job: ExpressionJob; w: FamilyWork }[] = [];
   for (const w of work) for (const n of w.sizes) for (const place of placesOf(w.family, n)) jobs.push({ job: { family: w.family, place }, w });
-  // the largest sizes first, so the two threads finish together
-  jobs.sort((a, b) => b.job.place.n - a.job.place.n);
+  // on threads the largest sizes first, so that they finish together; on one, the smallest first (a failure is then the first place that fails)
+  jobs.sort((a, b) => (workers > 1 ? b.job.place.n - a.job.place.n : a.job.place.n - b.job.place.n));
   const results = new Map<string, Map<number, { place: Place; r: ExpressionJobResult }[]>>();
   const failed = new Map<string, Error>();
   const stops = new Map(work.map((w) => [w.family.id, new AbortController()] as const));

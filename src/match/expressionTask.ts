@@ -35,9 +35,9 @@ function placeText(p: Place): string {
 }
 
 /** The Frobenius series of an integral homogeneous value (else a reason why it cannot be stored). */
-function asSeries(f: SymFun, n: number): Series | string {
+function asSeries(f: SymFun): Series | string {
   const degrees = f.degrees();
-  if (degrees.some((d) => d !== n)) return `the value is not homogeneous of degree ${n} (degrees ${degrees.join(', ')})`;
+  if (degrees.length > 1) return `the value is not homogeneous (degrees ${degrees.join(', ')})`;
   if (!f.isIntegral()) return 'the value has coefficients that are not integers';
   return schurSeries([...f.schurTerms()].map(([k, c]) => [k, c.toPoly()] as const));
 }
@@ -60,15 +60,16 @@ function fail(job: ExpressionJob, text: string, why: string, limit: boolean): ne
 export function evaluateExpressionJob(job: ExpressionJob): ExpressionJobResult {
   const t0 = Date.now();
   const { family, place } = job;
-  const text = instantiate(family.template, { n: place.n, ...(place.k === undefined ? {} : { k: place.k }), ...(place.partition ? { lambda: place.partition } : {}) }, 'template');
+  let text = family.template;
   let value: SymFun;
   try {
-    value = evaluateExpression(text, { maxDegree: Math.max(DEFAULT_MAX_DEGREE, place.n) }).value;
+    text = instantiate(family.template, { n: place.n, ...(place.k === undefined ? {} : { k: place.k }), ...(place.partition ? { lambda: place.partition } : {}) }, 'template');
+    value = evaluateExpression(text, { maxDegree: DEFAULT_MAX_DEGREE }).value;
   } catch (e) {
-    if (e instanceof InputError || e instanceof LimitError) fail(job, text, e.message, e instanceof LimitError);
+    if (e instanceof InputError || e instanceof LimitError) fail(job, text, e.message.replace(/^--template: /, ''), e instanceof LimitError);
     throw e;
   }
-  let base = asSeries(value, place.n);
+  let base = asSeries(value);
   if (typeof base === 'string') fail(job, text, base, false);
   let expression = text;
   if (family.sign === 'positive' && signOf(base) < 0n) {

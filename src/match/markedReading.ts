@@ -23,6 +23,8 @@ function polySlice(p: Poly, j: number): Poly {
 
 /** The slices of one series by its marking grading, or undefined when it has none. */
 function slicesOf(s: Series): { slices: (j: number) => Series; top: number } | undefined {
+  // an entry without t (n = 1, say) is its own slice j = 0
+  if (s.kind === 'q') return { slices: (j) => qtSeries(j === 0 ? s.poly : Poly.zero), top: 0 };
   if (s.kind === 'qt') return { slices: (j) => qtSeries(polySlice(s.poly, j)), top: s.poly.degT() };
   if (s.kind === 'schur') {
     const top = Math.max(0, ...[...s.terms.values()].map((c) => c.degT()));
