@@ -9,7 +9,7 @@ import { unknownNameMessage } from '../core/suggest.js';
 import type { Arg, Node } from './expression-parser.js';
 import { HALL_LITTLEWOOD_MAX_N, modifiedHallLittlewood } from './hall-littlewood.js';
 import { MACDONALD_MAX_N, modifiedMacdonald } from './macdonald.js';
-import { delta, deltaPrime, deltaPrimeOfEn, nabla, starScalar } from './operators.js';
+import { delta, deltaEigen, deltaPrime, deltaPrimeOfEn, enNumerators, nabla, nablaEigen, starScalar, sumInMacdonaldBasis } from './operators.js';
 import { plethysmDividedCleared, plethysmTimes } from './plethysm.js';
 import { SymFun } from './symfun.js';
 import type { Basis } from './transitions.js';
@@ -157,6 +157,14 @@ function oneMinusMonomial(f: SymFun, col: number): [number, number] {
   return [terms[0]![0], terms[0]![1]];
 }
 
+/** F = c·e_n (n ≥ 1): then the operators use the closed H̃-expansion of e_n. */
+function multipleOfEn(f: SymFun): { n: number; c: PolyQ } | undefined {
+  const d = f.degrees();
+  if (d.length !== 1 || d[0]! === 0) return undefined;
+  const c = f.coeff(new Array(d[0]!).fill(1));
+  return !c.isZero() && f.equals(SymFun.basisElement('e', [d[0]!]).scale(c)) ? { n: d[0]!, c } : undefined;
+}
+
 function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions): SymFun {
   const ev = (n: Node): SymFun => evaluateNode(n, opts);
   const name = node.name;
@@ -185,6 +193,8 @@ function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions):
       const [a] = exprArgs(node, 1, 'nabla(F)');
       const f = ev(a!);
       checkDegree(f, 'nabla', node.col, opts);
+      const en = multipleOfEn(f);
+      if (en) return sumInMacdonaldBasis(en.n, enNumerators(en.n), nablaEigen, reporter('nabla', opts)).scale(en.c);
       return nabla(f, reporter('nabla', opts));
     }
     case 'delta':
@@ -194,14 +204,10 @@ function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions):
       const f = ev(b!);
       checkDegree(f, name, node.col, opts);
       const onStep = reporter(name, opts);
-      if (name === 'delta') return delta(g, f, onStep);
       // e_n has a closed expansion in the H̃ basis: use it when F is a multiple of e_n
-      const d = f.degrees();
-      if (d.length === 1 && d[0]! > 0) {
-        const en = SymFun.basisElement('e', [d[0]!]);
-        const c = f.coeff(new Array(d[0]!).fill(1));
-        if (!c.isZero() && f.equals(en.scale(c))) return deltaPrimeOfEn(g, d[0]!, onStep).scale(c);
-      }
+      const en = multipleOfEn(f);
+      if (name === 'delta') return en ? sumInMacdonaldBasis(en.n, enNumerators(en.n), deltaEigen(g), onStep).scale(en.c) : delta(g, f, onStep);
+      if (en) return deltaPrimeOfEn(g, en.n, onStep).scale(en.c);
       return deltaPrime(g, f, onStep);
     }
     case 'omega': {

@@ -4,6 +4,7 @@ import { InputError } from '../../src/core/errors.js';
 import { Poly } from '../../src/core/poly.js';
 import { qFactorial } from '../../src/core/qanalogs.js';
 import { evaluateExpression } from '../../src/symfun/expression.js';
+import { delta, nabla } from '../../src/symfun/operators.js';
 import { SymFun } from '../../src/symfun/symfun.js';
 import { majFrobenius } from '../helpers/maj-frobenius.js';
 
@@ -38,5 +39,15 @@ describe('revq', () => {
     expect(ev('revq(nabla(e(2)))').equals(ev('q*s(2) + (1+q*t)*s(1,1)'))).toBe(true);
     for (const e of ['subs(deltaprime(e(1), e(4)), t=0)', 'H(3,1)', 'plethdiv(e(4), 1-q)']) expect(ev(`revq(revq(${e}))`).equals(ev(e)), e).toBe(true);
     expect(ev('revq(3)').coeff([]).toPoly().equals(Poly.constant(3))).toBe(true);
+  });
+});
+
+describe('the closed e_n route of nabla and delta', () => {
+  it('agrees with the generic H̃ expansion (⟨F, H̃_μ⟩_* summed back) for n ≤ 5', () => {
+    for (let n = 1; n <= 5; n++) {
+      const en = SymFun.basisElement('e', [n]);
+      expect(ev(`nabla(3*e(${n}))`).equals(nabla(en).scale(Poly.constant(3))), `nabla n=${n}`).toBe(true);
+      for (const g of ['e(2)', 'h(3)', 's(2,1)']) expect(ev(`delta(${g}, e(${n}))`).equals(delta(ev(g), en)), `delta ${g} n=${n}`).toBe(true);
+    }
   });
 });
