@@ -5,9 +5,9 @@
  * theorem or conjecture; a conjecture is compared here, never assumed. The catalogue holds only
  * what the cases need (valley-decorated Dyck paths and ordered set partitions, the Delta family).
  */
-import { mkdtempSync } from 'node:fs';
+import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { dirname, join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { instantiate } from '../../src/requests/template.js';
 import { schurSeries, seriesEquals } from '../../src/series/series.js';
@@ -58,11 +58,19 @@ describe('identifying modules (child processes)', () => {
     const s = d.matches.find((x) => x.family === 'valley-decorated-dyck-paths' && x.combine === 'slice' && x.complete);
     expect(s?.verified).toBe('n = 1..5, all k = 1..n');
   }, 180_000);
-  it('R_{n,k}, n ≤ 5, all k: rev_q ω of Δ′_{e_{k−1}} e_n at t = 0 (Haglund–Rhoades–Shimozono, Adv. Math. 329 (2018), the graded Frobenius series of R_{n,k})', () => {
-    const d = search('quotient --ideal generalized-coinvariant --n {n} --k {k} --frobenius', '1..5');
+  it('R_{n,k}, n ≤ 5, all k: rev_q ω of Δ′_{e_{k−1}} e_n at t = 0 (Haglund–Rhoades–Shimozono, Adv. Math. 329 (2018), the graded Frobenius series of R_{n,k}); the export states the source and the range', () => {
+    const saved = join(dirname(cat), 'rnk.json');
+    const d = search('quotient --ideal generalized-coinvariant --n {n} --k {k} --frobenius', '1..5', ['--save', saved]);
     const m = firstExpression(d);
     expect([m.expression, m.variant, m.verified]).toEqual(['revq(omega(subs(deltaprime(e({k}-1), e({n})), t=0)))', 'omega-q-reversed', 'n = 1..5, all k = 1..n']);
     expect(d.matches.some((x) => x.family === 'valley-decorated-dyck-paths' && x.combine === 'slice' && x.complete)).toBe(true);
+    const md = join(dirname(cat), 'rnk.md');
+    const ex = runCli(['export', saved, '--format', 'markdown', '--out', md, '--catalogue', cat]);
+    expect(ex.code, ex.stderr).toBe(0);
+    const text = readFileSync(md, 'utf8');
+    expect(text).toContain('1. `revq(omega(subs(deltaprime(e({k}-1), e({n})), t=0)))` — Δ′_{e_{k−1}} e_n');
+    expect(text).toContain('verified: n = 1..5, all k = 1..n; parameters n ↦ n, k ↦ k; specialisation t=0; variant omega-q-reversed');
+    expect(text).toMatch(/source: Haglund, Remmel, Wilson, "The Delta Conjecture", Trans\. Amer\. Math\. Soc\. 370 \(2018\)/);
   }, 180_000);
   it('δ_{n,k} under ∂x, ∂y and the polarizations, n ≤ 4, all k: Δ′_{e_{k−1}} e_n (conjectured in "Vandermondes in superspace"; Haiman\'s theorem at k = n) and valley-decorated Dyck paths by area and dinv — compared', () => {
     const d = search('module --seed superspace-vandermonde --ops x,y,polar1,polar2,polar3 --n {n} --k {k} --frobenius', '1..4');
