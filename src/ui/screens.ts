@@ -54,7 +54,7 @@ export const SCREENS: readonly ScreenInfo[] = [
       { keys: '+/-', action: 'size n' },
       { keys: 'p', action: 'edit parameters' },
       { keys: '[/]', action: 'scroll the chart' },
-      { keys: 'g', action: 'send to search' },
+      { keys: 'g', action: 'search n = 1..N (all k)' },
       { keys: 'x', action: 'cancel a long count' },
     ],
   },
@@ -85,7 +85,7 @@ export const SCREENS: readonly ScreenInfo[] = [
       { keys: '+/-', action: 'size {n}' },
       { keys: 'x', action: 'cancel' },
       { keys: '↑/↓', action: 'scroll' },
-      { keys: 'g', action: 'send to search' },
+      { keys: 'g', action: 'search n = 1..N (all k)' },
     ],
   },
   {
