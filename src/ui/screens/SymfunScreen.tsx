@@ -7,7 +7,7 @@ import { useState } from 'react';
 import { seriesFromJson } from '../../series/seriesJson.js';
 import { makeTarget } from '../../series/target.js';
 import { LineInput } from '../components/LineInput.js';
-import { atSize, errorColumn, hasSize, startSym, startSymTarget, SYMFUN_ENGINE_AVAILABLE, type SymOutcome } from '../engines/symfun.js';
+import { atSize, errorColumn, hasSize, middleK, startSym, startSymTarget, SYMFUN_ENGINE_AVAILABLE, type SymOutcome } from '../engines/symfun.js';
 import type { Target } from '../../series/target.js';
 import { errorText } from '../errorText.js';
 import { useKeys } from '../hooks.js';
@@ -40,11 +40,11 @@ export function SymfunScreen(props: ScreenProps) {
 
   const sendToSearch = () => {
     if (hasSize(expr)) {
-      props.notify(`evaluating ${expr} for n = 1..${size}…`);
+      props.notify(`evaluating ${expr} for n = 1..${size}${expr.includes('{k}') ? ', all k' : ''}…`);
       return family.run(
         (onProgress) => startSymTarget(expr, size, props.cwd, existingCatalogue(props.env, props.cwd), onProgress),
         (t) => {
-          props.addItem({ title: `sym ${expr}, n = 1..${size}`, origin: 'symfun', target: t });
+          props.addItem({ title: `sym ${expr}, n = 1..${size}${expr.includes('{k}') ? ', all k' : ''}`, origin: 'symfun', target: t });
           props.go('search');
         },
       );
@@ -111,7 +111,7 @@ export function SymfunScreen(props: ScreenProps) {
       )}
       {hasSize(expr) ? (
         <Text {...theme.style('dim')}>
-          {'{n}'} = {size} (+/- changes it; g searches n = 1..{size})
+          {'{n}'} = {size}{expr.includes('{k}') ? `, {k} = ${middleK(size)}` : ''} (+/- changes it; g searches n = 1..{size}{expr.includes('{k}') ? ', all k' : ''})
         </Text>
       ) : null}
       {family.state.status === 'error' ? (
