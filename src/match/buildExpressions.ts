@@ -180,3 +180,27 @@ export async function addExpressionFamily(cat: Catalogue, family: ExpressionFami
   writeExpressionUnits(cat, family, r, true);
   return { families: 1, units: r.length, skippedDone: 0, values: r.reduce((s, u) => s + u.values.length, 0), seconds: (Date.now() - t0) / 1000 };
 }
+
+/** The user's families of another catalogue (one being rebuilt), read if it opens; none otherwise. */
+export function userFamiliesOf(open: () => Catalogue): (ExpressionFamily & { readonly sizes: readonly number[] })[] {
+  try {
+    const old = open();
+    try {
+      return expressionFamilies(old).filter((f) => f.origin === 'user');
+    } finally {
+      old.close();
+    }
+  } catch {
+    return [];
+  }
+}
+
+/** Families added by the user, evaluated again into a fresh catalogue at their former sizes. */
+export async function restoreUserFamilies(cat: Catalogue, families: readonly (ExpressionFamily & { readonly sizes: readonly number[] })[], workers: number, progress: Progress): Promise<number> {
+  for (const f of families) {
+    const { sizes, ...family } = f;
+    const nMax = Math.max(0, ...sizes);
+    if (nMax > 0) await addExpressionFamily(cat, { ...family, origin: 'user' }, Math.min(nMax, EXPRESSION_N_MAX), workers, progress);
+  }
+  return families.length;
+}

@@ -28,10 +28,16 @@ export interface SliceIndex {
   readonly byHash: Map<string, { row: StoredRow; held: Held }[]>;
 }
 
-/** The slices at 0 of every stored Frobenius-level pair at size n, by hash (built once per search). */
-export function frobeniusSliceIndex(cat: Catalogue, n: number): SliceIndex {
+/**
+ * The slices at 0 of the stored Frobenius-level pairs at the anchor's size, by hash (built once
+ * per search); for an anchor with k, only the rows a parameter mapping can reach (k ± 1, n − k ± 1).
+ */
+export function frobeniusSliceIndex(cat: Catalogue, anchor: { n: number; k?: number }): SliceIndex {
+  const n = anchor.n;
+  const k = anchor.k;
+  const ks = k === undefined ? undefined : [...new Set([k - 1, k, k + 1, n - k - 1, n - k, n - k + 1])];
   const byHash = new Map<string, { row: StoredRow; held: Held }[]>();
-  for (const row of cat.schurPairRowsAt(n)) {
+  for (const row of cat.schurPairRowsAt(n, ks)) {
     for (const held of ['second', 'first'] as const) {
       const s = sliceAtZero(row.series, held);
       if (!s || isZeroSeries(s) || seriesEquals(s, row.series)) continue;

@@ -63,7 +63,7 @@ function searchOnce(cat: Catalogue, target: Target): SearchOutcome {
   const counts = anchor0 ? cat.candidateCounts(kinds, anchor0.n, seriesAtOne(anchor0.series)) : { groups: 0, sameCount: 0, families: [], statistics: [] };
   const matches = new Map<string, SearchMatch>();
   const exactGroups = new Set<string>();
-  const slices = anchor0 && target.kind === 'schur' ? frobeniusSliceIndex(cat, anchor0.n) : undefined;
+  const slices = anchor0 && target.kind === 'schur' ? frobeniusSliceIndex(cat, anchor0) : undefined;
   const keep = (m: SearchMatch) => {
     const key = [m.family, m.statistics.join(','), m.combine, m.transform, m.mapping].join('|');
     if (!matches.has(key)) matches.set(key, target.marked ? { ...m, marker: target.marked } : m);

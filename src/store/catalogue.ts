@@ -231,9 +231,10 @@ export class Catalogue {
     return this.read(() => (this.db.prepare("SELECT * FROM distributions WHERE combine = 'joint' AND n = ? AND k IS NULL").all(n) as RawRow[]).map((r) => decode(r, this.path)));
   }
 
-  /** Frobenius-level rows of pairs of statistics at size n (the search reads their slices at 0 apart). */
-  schurPairRowsAt(n: number): StoredRow[] {
-    return this.read(() => (this.db.prepare("SELECT * FROM distributions WHERE kind = 'schur' AND n = ? AND instr(statistics, ',') > 0").all(n) as RawRow[]).map((r) => decode(r, this.path)));
+  /** Frobenius-level rows of pairs of statistics at size n (with ks: only rows without k or with k among them). */
+  schurPairRowsAt(n: number, ks?: readonly number[]): StoredRow[] {
+    const byK = ks ? ` AND (k IS NULL OR k IN (${ks.map(() => '?').join(',') || 'NULL'}))` : '';
+    return this.read(() => (this.db.prepare(`SELECT * FROM distributions WHERE kind = 'schur' AND n = ? AND instr(statistics, ',') > 0${byK}`).all(n, ...(ks ?? [])) as RawRow[]).map((r) => decode(r, this.path)));
   }
 
   /** The row of one candidate at one place, if stored. */

@@ -37,7 +37,8 @@ export const MIGRATIONS: readonly string[] = [
    ALTER TABLE search_results ADD COLUMN hash TEXT NOT NULL DEFAULT '';`,
   // 4: the expression library: families of symmetric-function expressions (built in or added by
   // the user), one unit per (family, n); every value (a place, a specialisation, a projection)
-  // points at its series, each distinct series stored once under its hash
+  // points at its series, each distinct series stored once under its hash; and an index by size
+  // for the search's counts of candidates
   `CREATE TABLE expression_families (
      id TEXT PRIMARY KEY, template TEXT NOT NULL, indexing TEXT NOT NULL, k_min INTEGER NOT NULL,
      title TEXT NOT NULL, source TEXT NOT NULL, origin TEXT NOT NULL, sign TEXT NOT NULL, created TEXT NOT NULL);
@@ -49,7 +50,8 @@ export const MIGRATIONS: readonly string[] = [
      id INTEGER PRIMARY KEY, family TEXT NOT NULL, n INTEGER NOT NULL, k INTEGER, partition TEXT NOT NULL,
      place TEXT NOT NULL, specialisation TEXT NOT NULL, projection TEXT NOT NULL, expression TEXT NOT NULL,
      hash TEXT NOT NULL, UNIQUE (family, place, specialisation, projection));
-   CREATE INDEX expression_values_hash ON expression_values (hash);`,
+   CREATE INDEX expression_values_hash ON expression_values (hash);
+   CREATE INDEX distributions_size ON distributions (n, kind, at_one);`,
 ];
 
 export const SCHEMA_VERSION = MIGRATIONS.length;

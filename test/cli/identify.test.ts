@@ -113,6 +113,15 @@ describe('gradus expressions (child processes)', () => {
     const m = d.expressions.find((x) => x.family === 'my-delta')!;
     expect([m.expression, m.mapping, m.verified, m.source]).toEqual(['delta(e({n}-{k}), e({n}))', 'n ↦ n, k ↦ n-k+1', 'n = 2..4, all k = 1..n', 'our own scenario']);
     expect(runCli(['expressions', 'remove', 'my-delta', '--catalogue', cat]).code).toBe(0);
+    expect(JSON.parse(runCli(['expressions', 'list', '--catalogue', cat, '--json']).stdout).families.map((f: { id: string }) => f.id)).not.toContain('my-delta');
     expect(runCli(['expressions', 'remove', 'deltaprime-e', '--catalogue', cat]).stderr).toMatch(/built in/);
   }, 180_000);
+  it('a rebuilt catalogue keeps the families the user added (evaluated again at their sizes)', () => {
+    const other = join(dirname(cat), 'other.sqlite');
+    expect(runCli(['expressions', 'add', 'my-nabla', '--template', 'nabla(e({n}))', '--n-max', '3', '--workers', '1', '--catalogue', other]).code).toBe(0);
+    const r = runCli(['catalogue', 'rebuild', '--n-max', '1', '--workers', '1', '--catalogue', other]);
+    expect(r.code, r.stderr).toBe(0);
+    const list = JSON.parse(runCli(['expressions', 'list', '--catalogue', other, '--json']).stdout) as { families: { id: string; sizes: number[] }[] };
+    expect(list.families.find((f) => f.id === 'my-nabla')?.sizes).toEqual([1, 2, 3]);
+  }, 120_000);
 });

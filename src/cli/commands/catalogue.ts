@@ -6,13 +6,13 @@
 import { existsSync, renameSync, rmSync } from 'node:fs';
 import { InputError } from '../../core/errors.js';
 import { toJsonText } from '../../core/json-text.js';
-import { buildExpressionLibrary, type ExpressionBuildReport } from '../../match/buildExpressions.js';
+import { buildExpressionLibrary, restoreUserFamilies, userFamiliesOf, type ExpressionBuildReport } from '../../match/buildExpressions.js';
 import { buildCatalogue, type BuildOptions, type BuildReport } from '../../store/buildCatalogue.js';
 import { buildCatalogueParallel } from '../../store/buildParallel.js';
 import { Catalogue } from '../../store/catalogue.js';
 import { ForeignFileError, GRADUS_APPLICATION_ID, inspectCatalogueFile } from '../../store/catalogue-file.js';
 import { cataloguePath } from '../../store/cataloguePath.js';
-import { expressionCounts } from '../../store/expressionStore.js';
+import { expressionCounts, expressionFamilies } from '../../store/expressionStore.js';
 import { planUnits } from '../../store/planUnits.js';
 import { flagOpt, intOpt, listOpt, strOpt, type CommandIO, type CommandSpec, type ParsedArgs } from '../command.js';
 
@@ -87,10 +87,14 @@ async function rebuild(path: string, args: ParsedArgs, io: CommandIO): Promise<v
     }
   }
   const fresh = `${path}.rebuilding`;
+  // the expression families the user added are evaluated again into the new file
+  const userFamilies = present.kind === 'sqlite' ? userFamiliesOf(() => Catalogue.open(path, { existing: true })) : [];
   const cat = Catalogue.open(fresh);
   let report: BuildReport & { expressions?: ExpressionBuildReport };
   try {
     report = await runBuild(cat, o);
+    const kept = new Set(expressionFamilies(cat).map((f) => f.id));
+    await restoreUserFamilies(cat, userFamilies.filter((f) => !kept.has(f.id)), o.workers, o.progress);
   } finally {
     cat.close();
   }
