@@ -86,6 +86,7 @@ export const SCREENS: readonly ScreenInfo[] = [
       { keys: 'x', action: 'cancel' },
       { keys: '↑/↓', action: 'scroll' },
       { keys: 'g', action: 'search n = 1..N (all k)' },
+      { keys: 'a', action: 'keep as an expression family' },
     ],
   },
   {

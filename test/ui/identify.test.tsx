@@ -8,6 +8,7 @@ import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { silentProgress } from '../../src/core/progress.js';
 import { buildExpressionLibrary } from '../../src/match/buildExpressions.js';
 import { Catalogue } from '../../src/store/catalogue.js';
+import { expressionFamilies } from '../../src/store/expressionStore.js';
 import { fits, frame, KEYS, press, renderApp, waitForFrame, type Rendered } from './helpers.js';
 import { tinyCatalogue } from './tinyCatalogue.js';
 
@@ -64,5 +65,19 @@ describe('identification in the app', () => {
     expect(f).toContain('n = 1..3, all k');
     expect(f).toContain('n=2,k=1:');
     expect(f).toContain('… 4 more entries'); // 1 + 2 + 3 places
+  }, 40_000);
+
+  it('a keeps the expression as a family of the library, searched like the built-in ones', async () => {
+    r = renderApp({ initialScreen: 'symfun', env: { NO_COLOR: '1', GRADUS_CATALOGUE: cat.path }, cwd: cat.dir });
+    expect(frame(r)).toContain('sym nabla(e({n}))');
+    await press(r, 'a');
+    await press(r, '\u0015', 'my-nabla', KEYS.enter);
+    await waitForFrame(r, (x) => x.includes('kept my-nabla'), 30_000);
+    const c = Catalogue.open(cat.path, { existing: true });
+    try {
+      expect(expressionFamilies(c).find((f) => f.id === 'my-nabla')).toMatchObject({ origin: 'user', template: 'nabla(e({n}))', sizes: [1, 2, 3] });
+    } finally {
+      c.close();
+    }
   }, 40_000);
 });

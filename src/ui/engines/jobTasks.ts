@@ -158,6 +158,33 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
       cat?.close();
     }
   },
+  // The same engine call as `gradus expressions add`: every place evaluated, then stored in one transaction.
+  'expression-add': async (input, progress) => {
+    const [{ addExpressionFamily }, { userFamily }, { Catalogue }] = await Promise.all([
+      import('../../match/buildExpressions.js'),
+      import('../../match/expressionFamilies.js'),
+      import('../../store/catalogue.js'),
+    ]);
+    const { catalogue, name, template, nMax } = input as { catalogue: string; name: string; template: string; nMax: number };
+    const family = userFamily(name, template, 'added in the app', undefined);
+    const cat = Catalogue.open(catalogue);
+    try {
+      let label = 'expression family';
+      let total: number | undefined;
+      const r = await addExpressionFamily(cat, family, nMax, 1, {
+        start: (l, t) => {
+          label = l;
+          total = t;
+          progress(label, 0, total);
+        },
+        update: (done) => progress(label, done, total),
+        finish: () => {},
+      });
+      return { text: `kept ${name} in ${catalogue}: ${r.values} values for n = 1..${nMax}; the search now tries it` };
+    } finally {
+      cat.close();
+    }
+  },
   // Exercises the worker plumbing in tests: counts to input.n, reporting progress.
   count: async (input, progress) => {
     const { n, delayMs } = input as { n: number; delayMs: number };

@@ -59,3 +59,8 @@ export function startSymTarget(expression: string, nTo: number, cwd: string, cat
   const job = startJob<unknown>('from-template', { template: `sym "${expression}"`, nFrom: 1, nTo, cwd, ...(catalogue ? { catalogue } : {}) }, onProgress);
   return { result: job.result.then((j) => targetFromJson(j, 'sym target')), cancel: job.cancel };
 }
+
+/** Keep the expression as a family of the user's expression library (as `gradus expressions add`), for n = 1..nMax. */
+export function startAddFamily(name: string, template: string, nMax: number, catalogue: string, onProgress: (p: JobProgress) => void): Job<{ text: string }> {
+  return startJob<{ text: string }>('expression-add', { name, template, nMax, catalogue }, onProgress);
+}

@@ -7,7 +7,8 @@ import { useState } from 'react';
 import { seriesFromJson } from '../../series/seriesJson.js';
 import { makeTarget } from '../../series/target.js';
 import { LineInput } from '../components/LineInput.js';
-import { atSize, errorColumn, hasSize, middleK, startSym, startSymTarget, SYMFUN_ENGINE_AVAILABLE, type SymOutcome } from '../engines/symfun.js';
+import { atSize, errorColumn, hasSize, middleK, startAddFamily, startSym, startSymTarget, SYMFUN_ENGINE_AVAILABLE, type SymOutcome } from '../engines/symfun.js';
+import { cataloguePath } from '../../store/cataloguePath.js';
 import type { Target } from '../../series/target.js';
 import { errorText } from '../errorText.js';
 import { useKeys } from '../hooks.js';
@@ -22,7 +23,9 @@ export const DEFAULT_EXPRESSION = 'nabla(e({n}))';
 export function SymfunScreen(props: ScreenProps) {
   const theme = useTheme();
   const [expr, setExpr] = useState(DEFAULT_EXPRESSION);
-  const [field, setField] = useEditField<'expr'>(props.active, props.setEditing);
+  const [field, setField] = useEditField<'expr' | 'name'>(props.active, props.setEditing);
+  const [name, setName] = useState('my-family');
+  const add = useJob<{ text: string }>();
   const [offset, setOffset] = useState(0);
   const job = useJob<SymOutcome>();
   const family = useJob<Target>();
@@ -67,6 +70,10 @@ export function SymfunScreen(props: ScreenProps) {
       if (key.return) return evaluate(expr);
       if (input === 'e') return setField('expr');
       if (input === 'g') return sendToSearch();
+      if (input === 'a') {
+        if (!hasSize(expr) && !/\{(?:λ|lambda)\}/.test(expr)) return props.notify('only a family ({n}, {k} or {λ} in it) can be kept in the expression library', 'error');
+        return setField('name');
+      }
       if (input === 'x' && (job.state.status === 'running' || family.state.status === 'running')) {
         family.cancel();
         return job.cancel();
@@ -89,6 +96,30 @@ export function SymfunScreen(props: ScreenProps) {
         <Text wrap="wrap" {...theme.style('warn')}>
           The symmetric-function engine (src/symfun expressions) is not available in this build; nothing can be evaluated here.
         </Text>
+      ) : null}
+      {field === 'name' ? (
+        <LineInput
+          label="keep as family"
+          value={name}
+          active
+          width={props.width}
+          onChange={setName}
+          onSubmit={(v) => {
+            setField(undefined);
+            add.run(
+              (onProgress) => startAddFamily(v.trim(), expr, size, cataloguePath(undefined, props.env, props.cwd), onProgress),
+              (r) => props.notify(r.text),
+            );
+          }}
+          onLeave={() => setField(undefined)}
+        />
+      ) : null}
+      {add.state.status === 'error' ? (
+        <Text wrap="wrap" {...theme.style('error')}>
+          ✗ {add.state.error}
+        </Text>
+      ) : add.state.status === 'running' ? (
+        <Text {...theme.style('dim')}>evaluating the family for n = 1..{size}…</Text>
       ) : null}
       {field === 'expr' ? (
         <LineInput
