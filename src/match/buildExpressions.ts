@@ -4,7 +4,6 @@
  * units are written together in one transaction when all of its places are in; a family that
  * fails at some place writes nothing and is reported with the place and the reason.
  */
-import { setMaxListeners } from 'node:events';
 import { InputError, LimitError } from '../core/errors.js';
 import { makeProvenance } from '../core/provenance.js';
 import type { Progress } from '../core/progress.js';
@@ -43,16 +42,26 @@ interface FamilyWork {
   readonly replaceAll: boolean;
 }
 
-/** Evaluate the places of some families at some sizes; per family, its units or its first failure. */
-async function evaluate(work: readonly FamilyWork[], workers: number, progress: Progress): Promise<Map<string, ExpressionUnit[] | Error>> {
+/**
+ * Evaluate the places of some families at some sizes; each family is handed to `settled` (its
+ * units, or its first failure) as soon as its last place is in, so a long build keeps what it
+ * finished when it is stopped.
+ */
+async function evaluate(work: readonly FamilyWork[], workers: number, progress: Progress, settled: (w: FamilyWork, r: ExpressionUnit[] | Error) => void): Promise<void> {
   const jobs: { job: ExpressionJob; w: FamilyWork }[] = [];
   for (const w of work) for (const n of w.sizes) for (const place of placesOf(w.family, n)) jobs.push({ job: { family: w.family, place }, w });
   // on threads the largest sizes first, so that they finish together; on one, the smallest first (a failure is then the first place that fails)
   jobs.sort((a, b) => (workers > 1 ? b.job.place.n - a.job.place.n : a.job.place.n - b.job.place.n));
   const results = new Map<string, Map<number, { place: Place; r: ExpressionJobResult }[]>>();
   const failed = new Map<string, Error>();
-  const stops = new Map(work.map((w) => [w.family.id, new AbortController()] as const));
-  for (const c of stops.values()) setMaxListeners(0, c.signal);
+  const left = new Map<string, number>(work.map((w) => [w.family.id, 0]));
+  for (const { w } of jobs) left.set(w.family.id, left.get(w.family.id)! + 1);
+  const settle = (w: FamilyWork) => {
+    const f = failed.get(w.family.id);
+    const byN = results.get(w.family.id) ?? new Map<number, { place: Place; r: ExpressionJobResult }[]>();
+    settled(w, f ?? w.sizes.map((n) => unitOf(w.family, n, byN.get(n) ?? [], workers)));
+  };
+  for (const w of work) if (left.get(w.family.id) === 0) settle(w);
   let done = 0;
   progress.start(`expression library (${jobs.length} places, ${workers} worker${workers === 1 ? '' : 's'})`, jobs.length);
   const finish = (job: ExpressionJob, r: ExpressionJobResult) => {
@@ -61,44 +70,46 @@ async function evaluate(work: readonly FamilyWork[], workers: number, progress: 
     results.set(job.family.id, byN);
     progress.update(++done);
   };
-  const failWith = (id: string, e: unknown) => {
+  // every place is evaluated, so that the failure reported is the first place (smallest n, then k) that fails
+  const failedAt = new Map<string, Place>();
+  const failWith = (job: ExpressionJob, e: unknown) => {
     if (e instanceof TaskCancelled) return;
     if (!(e instanceof InputError || e instanceof LimitError)) throw e;
-    if (!failed.has(id)) failed.set(id, e);
-    stops.get(id)!.abort();
+    const id = job.family.id;
+    const prev = failedAt.get(id);
+    const p = job.place;
+    if (!prev || p.n < prev.n || (p.n === prev.n && (p.k ?? 0) < (prev.k ?? 0))) {
+      failed.set(id, e);
+      failedAt.set(id, p);
+    }
+  };
+  const after = (w: FamilyWork) => {
+    const l = left.get(w.family.id)! - 1;
+    left.set(w.family.id, l);
+    if (l === 0) settle(w);
   };
   if (workers <= 1) {
-    for (const { job } of jobs) {
-      if (failed.has(job.family.id)) continue;
+    for (const { job, w } of jobs) {
       try {
-        finish(job, evaluateExpressionJob(job));
+        if (!failed.has(job.family.id)) finish(job, evaluateExpressionJob(job));
       } catch (e) {
-        failWith(job.family.id, e);
+        failWith(job, e);
       }
+      after(w);
     }
   } else {
     await Promise.all(
-      jobs.map(async ({ job }) => {
+      jobs.map(async ({ job, w }) => {
         try {
-          finish(job, await runTask<ExpressionJobResult>(TASK, 'evaluateExpressionJob', job, { threads: workers, signal: stops.get(job.family.id)!.signal }));
+          finish(job, await runTask<ExpressionJobResult>(TASK, 'evaluateExpressionJob', job, { threads: workers }));
         } catch (e) {
-          failWith(job.family.id, e);
+          failWith(job, e);
         }
+        after(w);
       }),
     );
   }
   progress.finish();
-  const out = new Map<string, ExpressionUnit[] | Error>();
-  for (const w of work) {
-    const f = failed.get(w.family.id);
-    if (f) {
-      out.set(w.family.id, f);
-      continue;
-    }
-    const byN = results.get(w.family.id) ?? new Map();
-    out.set(w.family.id, w.sizes.map((n) => unitOf(w.family, n, byN.get(n) ?? [], workers)));
-  }
-  return out;
 }
 
 function unitOf(family: ExpressionFamily, n: number, places: readonly { place: Place; r: ExpressionJobResult }[], workers: number): ExpressionUnit {
@@ -151,20 +162,18 @@ export async function buildExpressionLibrary(cat: Catalogue, o: ExpressionBuildO
     skippedDone += o.nMax - sizes.length;
     work.push({ family, sizes, replaceAll });
   }
-  const results = await evaluate(work, o.workers, o.progress);
   let units = 0;
   let values = 0;
   const failures: string[] = [];
-  for (const w of work) {
-    const r = results.get(w.family.id)!;
+  await evaluate(work, o.workers, o.progress, (w, r) => {
     if (r instanceof Error) {
       failures.push(r.message);
-      continue;
+      return;
     }
     writeExpressionUnits(cat, w.family, r, w.replaceAll);
     units += r.length;
     values += r.reduce((s, u) => s + u.values.length, 0);
-  }
+  });
   if (failures.length) throw new InputError(`${failures.join('; ')} — nothing of ${failures.length === 1 ? 'that family' : 'those families'} was stored (the other families were)`, 'template');
   return { families: work.length, units, skippedDone, values, seconds: (Date.now() - t0) / 1000 };
 }
@@ -175,7 +184,11 @@ export async function addExpressionFamily(cat: Catalogue, family: ExpressionFami
   if (expressionFamilies(cat).some((f) => f.id === family.id)) throw new InputError(`an expression family ${family.id} is already in the catalogue; remove it first (gradus expressions remove ${family.id})`, 'name');
   if (!cat.writable) throw new InputError(`cannot add an expression family: the catalogue ${cat.path} is read-only`, 'catalogue');
   const sizes = Array.from({ length: nMax }, (_, i) => i + 1);
-  const r = (await evaluate([{ family, sizes, replaceAll: true }], workers, progress)).get(family.id)!;
+  const box: { r: ExpressionUnit[] | Error } = { r: new Error('nothing evaluated') };
+  await evaluate([{ family, sizes, replaceAll: true }], workers, progress, (_w, x) => {
+    box.r = x;
+  });
+  const r = box.r;
   if (r instanceof Error) throw r;
   writeExpressionUnits(cat, family, r, true);
   return { families: 1, units: r.length, skippedDone: 0, values: r.reduce((s, u) => s + u.values.length, 0), seconds: (Date.now() - t0) / 1000 };

@@ -77,8 +77,11 @@ export const searchCommand: CommandSpec = {
   producesData: true,
   details: [
     'The catalogue (gradus catalogue build) is searched for the target and its variants (q-reversed, ω,',
-    'q and t swapped); each match says the range it was verified on. Every search is kept in the catalogue',
-    'with an id that gradus export accepts (as search:ID). Example:',
+    'q and t swapped): first its expression library (gradus expressions: which known symmetric function',
+    'it is, written so that gradus sym evaluates it again), then the statistics; each match says the range',
+    'it was verified on. A target over n with a second grading is also read as a marked union',
+    'Σ_k t^{n−k} F(n,k), and one with three gradings (x, y, θ) by its θ-degree. Every search is kept in the',
+    'catalogue with an id that gradus export accepts (as search:ID). Example:',
     '  gradus search --n-range 1..6 --from "qseries ordered-stirling --n {n} --k {k}"',
   ].join('\n'),
   async run(args: ParsedArgs, io) {
