@@ -103,3 +103,14 @@ describe('a family that fails', () => {
     await expect(addExpressionFamily(cat, userFamily('my-typo', 'nabla(ee({n}))', undefined, undefined), 2, 1, silentProgress)).rejects.toThrow(/my-typo fails at n = 1 .*unknown function "ee"/);
   });
 });
+
+describe('reading the library back', () => {
+  it('an edited series is caught by its hash, as a damaged catalogue with the command that rebuilds it', async () => {
+    const path = join(mkdtempSync(join(tmpdir(), 'gradus-expr-bad-')), 'c.sqlite');
+    const c = Catalogue.open(path);
+    await buildExpressionLibrary(c, { nMax: 3, families: ['pleth-h-q'], workers: 1, progress: silentProgress });
+    c.db.prepare("UPDATE expression_series SET series = replace(series, '[0,1,1]', '[0,1,2]') WHERE series LIKE '%[0,1,1]%'").run();
+    expect(() => expressionAt(c, 'pleth-h-q', placeKey(3), 'none', 'frobenius')).toThrow(/damaged .*gradus catalogue rebuild/);
+    c.close();
+  });
+});
