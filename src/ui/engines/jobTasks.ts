@@ -81,28 +81,31 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
     const { targets, catalogue } = input as { targets: unknown[]; catalogue: string };
     return searchMany(targets, catalogue, progress);
   },
-  // The same engine call as `gradus catalogue build`.
+  // The same engine calls as `gradus catalogue build`: the distributions, then the expression library.
   'catalogue-build': async (input, progress) => {
-    const [{ buildCatalogue }, { Catalogue }] = await Promise.all([import('../../store/buildCatalogue.js'), import('../../store/catalogue.js')]);
+    const [{ buildCatalogue }, { buildExpressionLibrary }, { Catalogue }] = await Promise.all([
+      import('../../store/buildCatalogue.js'),
+      import('../../match/buildExpressions.js'),
+      import('../../store/catalogue.js'),
+    ]);
     const { catalogue, nMax } = input as { catalogue: string; nMax: number };
     const cat = Catalogue.open(catalogue);
     try {
       let label = 'catalogue build';
       let total: number | undefined;
-      const r = buildCatalogue(cat, {
-        nMax,
-        maxObjects: 50_000_000n,
-        progress: {
-          start: (l, t) => {
-            label = l;
-            total = t;
-            progress(label, 0, total);
-          },
-          update: (done) => progress(label, done, total),
-          finish: () => {},
+      const onProgress = {
+        start: (l: string, t?: number) => {
+          label = l;
+          total = t;
+          progress(label, 0, total);
         },
-      });
-      return { text: `catalogue ${catalogue}: ${r.units} units built (${r.skippedDone} already there), ${r.rows} distributions in ${r.seconds.toFixed(1)}s` };
+        update: (done: number) => progress(label, done, total),
+        finish: () => {},
+      };
+      const r = buildCatalogue(cat, { nMax, maxObjects: 50_000_000n, progress: onProgress });
+      // in this worker thread, one place at a time
+      const e = await buildExpressionLibrary(cat, { nMax, workers: 1, progress: onProgress });
+      return { text: `catalogue ${catalogue}: ${r.units} units built (${r.skippedDone} already there), ${r.rows} distributions, ${e.values} expression values in ${(r.seconds + e.seconds).toFixed(1)}s` };
     } finally {
       cat.close();
     }
