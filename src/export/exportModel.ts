@@ -7,7 +7,7 @@ import { familyById } from '../../objects/index.js';
 import { transformById } from '../../objects/transforms/index.js';
 import { statisticById } from '../../statistics/index.js';
 import type { SearchDocument } from '../match/searchDocument.js';
-import type { SearchMatch } from '../match/search.js';
+import type { ExpressionMatch, SearchMatch } from '../match/search.js';
 import { seriesAtOne, type Series } from '../series/series.js';
 import { targetFromJson } from '../series/targetFile.js';
 import type { Target } from '../series/target.js';
@@ -32,6 +32,9 @@ export interface ExportModel {
   readonly recognition: SearchDocument['recognition'];
   readonly matches: readonly ExportMatch[];
   readonly totalMatches: number;
+  /** Families of the expression library equal to the target, each with its source and range. */
+  readonly expressions: readonly ExpressionMatch[];
+  readonly totalExpressions: number;
   readonly tried: SearchDocument['tried'];
   readonly target: Target;
   readonly table: readonly { n: number; k?: number; series: Series; count: bigint }[];
@@ -65,6 +68,8 @@ export function exportModel(doc: SearchDocument, limit: number): ExportModel {
     recognition: doc.recognition,
     matches,
     totalMatches: doc.matches.length,
+    expressions: (doc.expressions ?? []).slice(0, limit),
+    totalExpressions: (doc.expressions ?? []).length,
     tried: doc.tried,
     target,
     table: target.entries.map((e) => ({ n: e.n, ...(e.k === undefined ? {} : { k: e.k }), series: e.series, count: seriesAtOne(e.series) })),

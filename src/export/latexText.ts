@@ -15,8 +15,14 @@ const PLAIN: Record<string, string> = { '§': '\\S{}', '¶': '\\P{}', '−': '-'
 
 export function latexText(s: string): string {
   let out = '';
-  for (const ch of s) {
-    if (SPECIAL[ch] !== undefined) out += SPECIAL[ch];
+  const chars = [...s];
+  for (let i = 0; i < chars.length; i++) {
+    const ch = chars[i]!;
+    // a letter with a combining tilde (H̃) is the text accent \~{H}
+    if (chars[i + 1] === '\u0303' && /[A-Za-z]/.test(ch)) {
+      out += `\\~{${ch}}`;
+      i++;
+    } else if (SPECIAL[ch] !== undefined) out += SPECIAL[ch];
     else if (MATH[ch] !== undefined) out += `$${MATH[ch]}$`;
     else if (PLAIN[ch] !== undefined) out += PLAIN[ch];
     else if (ch.charCodeAt(0) > 126) out += `[U+${ch.codePointAt(0)!.toString(16).toUpperCase().padStart(4, '0')}]`;

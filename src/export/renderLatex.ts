@@ -31,6 +31,11 @@ export function matchLatex(m: SearchMatch): string {
   return body;
 }
 
+/** "θ^{n−k}" in math. */
+function latexMarker(marker: string): string {
+  return marker.replace('θ', '\\theta').replace('−', '-');
+}
+
 export function seriesLatex(s: Series): string {
   if (s.kind === 'q' || s.kind === 'qt') return s.poly.toLatex();
   if (s.kind === 'schur') {
@@ -60,6 +65,18 @@ export function renderLatex(m: ExportModel): string {
   if (r.formula) L.push(`\\item $f$ = \\texttt{${latexTextBreakable(r.formula)}} (verified on ${latexTextBreakable(m.range)})`);
   for (const x of r.recurrences) L.push(`\\item recurrence: \\texttt{${latexTextBreakable(x.text)}}${x.name ? ` (${latexText(x.name)})` : ''}, checked on ${x.checked} entries`);
   L.push(`\\item ${flagsText(r)}`, '\\end{itemize}', '');
+  L.push(`\\subsection*{Expressions (${m.expressions.length} of ${m.totalExpressions}, simplest first)}`);
+  if (m.expressions.length === 0) L.push('No expression of the library equals the target or its variants.', '');
+  else {
+    L.push('\\begin{enumerate}');
+    for (const x of m.expressions) {
+      L.push(`\\item ${x.marker ? `$\\sum_k ${latexMarker(x.marker)}\\cdot$ ` : ''}\\texttt{${latexTextBreakable(x.expression)}} --- ${latexText(x.title)}`, '\\begin{itemize}');
+      L.push(`\\item verified: ${latexTextBreakable(x.verified)}${x.complete ? '' : ' (some entries not checked)'}; parameters ${latexTextBreakable(x.mapping)}; specialisation ${latexTextBreakable(x.specialisation)}${x.projection === 'hilbert' ? ' (Hilbert series)' : ''}; variant ${latexText(x.variant)}`);
+      L.push(`\\item family \\texttt{${latexTextBreakable(x.family)}} (${latexText(x.origin)}); source: ${latexText(x.source)}`);
+      L.push(`\\item at ${latexText(x.exampleAt)}: \\texttt{${latexTextBreakable(`gradus sym "${x.example}"`)}}`, '\\end{itemize}');
+    }
+    L.push('\\end{enumerate}', '');
+  }
   L.push(`\\subsection*{Matches (${m.matches.length} of ${m.totalMatches}, simplest first)}`);
   if (m.matches.length === 0) {
     const t = m.tried;
@@ -67,7 +84,7 @@ export function renderLatex(m: ExportModel): string {
   } else {
     L.push('\\begin{enumerate}');
     for (const x of m.matches) {
-      L.push(`\\item $${matchLatex(x.match)}$`, '\\begin{itemize}');
+      L.push(`\\item ${x.match.marker ? `$\\sum_k ${latexMarker(x.match.marker)}\\cdot$ ` : ''}$${matchLatex(x.match)}$`, '\\begin{itemize}');
       L.push(`\\item verified: ${latexTextBreakable(x.match.verified)}${x.match.complete ? '' : ' (some entries not checked)'}; parameters ${latexTextBreakable(x.match.mapping)}; variant ${latexTextBreakable(x.match.variant)}`);
       L.push(`\\item family \\texttt{${latexTextBreakable(x.family.id)}}: ${latexText(x.family.description)} (source: ${latexText(x.family.source)})`);
       for (const s of x.statistics) {

@@ -19,13 +19,22 @@ export function renderMarkdown(m: ExportModel): string {
   if (r.formula) L.push(`- f = \`${r.formula}\` (verified on ${m.range})`);
   for (const x of r.recurrences) L.push(`- recurrence: \`${x.text}\`${x.name ? ` (${x.name})` : ''}, checked on ${x.checked} entries`);
   L.push(`- ${flagsText(r)}`, '');
+  L.push(`## Expressions (${m.expressions.length} of ${m.totalExpressions}, simplest first)`, '');
+  if (m.expressions.length === 0) L.push('No expression of the library equals the target or its variants.', '');
+  m.expressions.forEach((x, i) => {
+    L.push(`${i + 1}. \`${x.marker ? `Σ_k ${x.marker} · ` : ''}${x.expression}\` — ${x.title}`);
+    L.push(`   - verified: ${x.verified}${x.complete ? '' : ' (some entries not checked)'}; parameters ${x.mapping}; specialisation ${x.specialisation}${x.projection === 'hilbert' ? ' (Hilbert series)' : ''}; variant ${x.variant}`);
+    L.push(`   - family \`${x.family}\` (${x.origin}); source: ${x.source}`);
+    L.push(`   - at ${x.exampleAt}: \`gradus sym "${x.example}"\``);
+  });
+  if (m.expressions.length) L.push('');
   L.push(`## Matches (${m.matches.length} of ${m.totalMatches}, simplest first)`, '');
   if (m.matches.length === 0) {
     const t = m.tried;
     L.push(`No match. Tried ${t.candidates} candidates (${t.sameCount} with the same count at q = 1) over the families ${t.families.join(', ')}, with the variants ${t.variants.join(', ')}.`, '');
   }
   m.matches.forEach((x, i) => {
-    L.push(`${i + 1}. \`${x.match.formula}\``);
+    L.push(`${i + 1}. \`${x.match.marker ? `Σ_k ${x.match.marker} · ` : ''}${x.match.formula}\``);
     L.push(`   - verified: ${x.match.verified}${x.match.complete ? '' : ' (some entries not checked)'}; parameters ${x.match.mapping}; variant ${x.match.variant}`);
     L.push(`   - family \`${x.family.id}\`: ${x.family.description} (source: ${x.family.source})`);
     for (const s of x.statistics) {

@@ -25,6 +25,8 @@ export interface SearchDocument {
     readonly unimodal: boolean;
   };
   readonly matches: SearchOutcome['matches'];
+  /** Families of the expression library equal to the target (absent in files of older versions). */
+  readonly expressions: SearchOutcome['expressions'];
   readonly tried: SearchOutcome['tried'];
   readonly provenance: Provenance;
 }
@@ -42,6 +44,7 @@ export function searchDocument(target: Target, range: string, rec: Recognition, 
       unimodal: rec.unimodal,
     },
     matches: outcome.matches,
+    expressions: outcome.expressions,
     tried: outcome.tried,
     provenance: prov,
   };
@@ -77,9 +80,34 @@ const SAVED_SEARCH = z.object({
         unchecked: z.array(PLACE).max(10_000),
         complete: z.boolean(),
         cost: z.number(),
+        marker: TEXT.optional(),
       }),
     )
     .max(100_000),
+  expressions: z
+    .array(
+      z.object({
+        family: TEXT,
+        title: TEXT,
+        source: TEXT,
+        origin: z.enum(['built-in', 'user']),
+        expression: TEXT,
+        example: TEXT,
+        exampleAt: TEXT,
+        specialisation: TEXT,
+        projection: z.enum(['frobenius', 'hilbert']),
+        variant: TEXT,
+        mapping: TEXT,
+        verified: TEXT,
+        verifiedEntries: z.array(PLACE).max(10_000),
+        unchecked: z.array(PLACE).max(10_000),
+        complete: z.boolean(),
+        cost: z.number(),
+        marker: TEXT.optional(),
+      }),
+    )
+    .max(100_000)
+    .default([]),
   tried: z.object({
     anchor: PLACE.nullable(),
     catalogueMaxN: z.number().int(),
@@ -90,6 +118,8 @@ const SAVED_SEARCH = z.object({
     statistics: z.array(TEXT),
     variants: z.array(TEXT),
     combines: z.array(TEXT),
+    expressions: z.object({ families: z.number().int().min(0), maxN: z.number().int() }).optional(),
+    readings: z.array(TEXT).optional(),
   }),
   provenance: z.looseObject({ method: TEXT, time: TEXT }).transform((p) => ({
     request: typeof p['request'] === 'string' ? p['request'] : JSON.stringify(p['inputs'] ?? {}),

@@ -31,7 +31,9 @@ export function seriesFromDocument(doc: unknown, take: Take, where: string): Ser
   if ('terms' in o && o['terms'] && typeof o['terms'] === 'object' && !Array.isArray(o['terms'])) {
     frob = seriesFromJson(o['terms'], `${where}.terms`);
   } else if ('schur' in o && o['schur'] && typeof o['schur'] === 'object') {
-    frob = seriesFromJson(o['schur'], `${where}.schur`);
+    const tables = frobeniusTables(o['schur'] as Record<string, unknown>, o['axes'], `${where}.schur`);
+    if (tables.slices) throw new InputError(`${where}: three gradings vary in its Frobenius series; it is read as a marked union by the search (markedSlicesOfDocument)`, 'take');
+    frob = tables.series;
   }
   if (o['frobenius'] && typeof o['frobenius'] === 'object') frob = frobeniusOfDist(o['frobenius'] as Record<string, unknown>, where);
   if ('hilbertSeries' in o) graded = gradedFromTable(o['hilbertSeries'], o['axes'], `${where}.hilbertSeries`);
@@ -114,6 +116,65 @@ function frobeniusOfDist(f: Record<string, unknown>, where: string): Series {
     return schurSeries([...sf.schurTerms()].map(([l, c]) => [l, c.toPoly()] as const));
   }
   throw new InputError(`${where}: unknown Frobenius basis ${JSON.stringify(f['basis'])}`);
+}
+
+/** Exponent vectors of a nested table (one index per axis) with their non-zero coefficients. */
+function cellsOf(v: unknown, where: string): Map<string, bigint> {
+  const out = new Map<string, bigint>();
+  const walk = (x: unknown, at: number[]): void => {
+    if (Array.isArray(x)) x.forEach((y, i) => walk(y, [...at, i]));
+    else if (x !== 0 && x !== '0') {
+      if (!(typeof x === 'number' && Number.isSafeInteger(x)) && !(typeof x === 'string' && /^-?\d{1,2000}$/.test(x))) throw new InputError(`${where}: expected integer coefficients`);
+      out.set(at.join(','), BigInt(x));
+    }
+  };
+  walk(v, []);
+  return out;
+}
+
+/**
+ * The Frobenius tables of a module document with any number of axes: axes held at one degree
+ * are dropped; one or two left give a Schur series in q (and t); three give its slices by the
+ * last axis (θ for superspace modules), each a Schur series in the first two.
+ */
+export function frobeniusTables(schur: Record<string, unknown>, axesDoc: unknown, where: string): { series?: Series; slices?: { axis: string; bySlice: Map<number, Series> } } {
+  const d = Math.max(0, ...Object.values(schur).map(depth));
+  if (d <= 2) return { series: seriesFromJson(schur, where) };
+  const cells = new Map<string, Map<string, bigint>>();
+  for (const [l, table] of Object.entries(schur)) cells.set(l, cellsOf(table, `${where}.${l}`));
+  const keys = [...cells.values()].flatMap((m) => [...m.keys()].map((k) => k.split(',').map(Number)));
+  const vary = Array.from({ length: d }, (_, i) => new Set(keys.map((e) => e[i])).size > 1);
+  const kept = vary.flatMap((v, i) => (v ? [i] : []));
+  const axes = Array.isArray(axesDoc) && axesDoc.length === d ? axesDoc.map(String) : Array.from({ length: d }, (_, i) => `axis${i + 1}`);
+  const polyOf = (m: Map<string, bigint>, pick: (e: number[]) => boolean, [a, b]: number[]) =>
+    Poly.fromTerms([...m].map(([k, c]) => [k.split(',').map(Number), c] as const).filter(([e]) => pick(e)).map(([e, c]) => [a === undefined ? 0 : e[a]!, b === undefined ? 0 : e[b]!, c] as const));
+  if (kept.length <= 2) return { series: schurSeries([...cells].map(([l, m]) => [l, polyOf(m, () => true, kept)] as const)) };
+  if (kept.length > 3) throw new InputError(`${where}: ${kept.length} gradings vary; at most three are read`, 'take');
+  const last = kept[2]!;
+  const bySlice = new Map<number, Series>();
+  for (const j of new Set(keys.map((e) => e[last]!))) bySlice.set(j, schurSeries([...cells].map(([l, m]) => [l, polyOf(m, (e) => e[last] === j, kept.slice(0, 2))] as const)));
+  return { slices: { axis: axes[last]!, bySlice } };
+}
+
+/**
+ * The slices by its last axis (θ for superspace modules) of a document whose Frobenius tables
+ * have three axes, each a Schur series in the first two (undefined for fewer axes).
+ */
+export function markedSlicesOfDocument(doc: unknown, where: string): { axis: string; bySlice: Map<number, Series> } | undefined {
+  if (doc === null || typeof doc !== 'object') return undefined;
+  const o = doc as Record<string, unknown>;
+  const schur = o['schur'];
+  if (!schur || typeof schur !== 'object' || Array.isArray(schur)) return undefined;
+  const tables = schur as Record<string, unknown>;
+  if (Math.max(0, ...Object.values(tables).map(depth)) !== 3) return undefined;
+  const axes = Array.isArray(o['axes']) && o['axes'].length === 3 ? (o['axes'] as unknown[]).map(String) : ['axis1', 'axis2', 'axis3'];
+  const bySlice = new Map<number, Series>();
+  const cells = Object.entries(tables).map(([l, t]) => [l, cellsOf(t, `${where}.schur.${l}`)] as const);
+  const js = new Set(cells.flatMap(([, m]) => [...m.keys()].map((k) => Number(k.split(',')[2]))));
+  for (const j of js) {
+    bySlice.set(j, schurSeries(cells.map(([l, m]) => [l, Poly.fromTerms([...m].map(([k, c]) => [k.split(',').map(Number), c] as const).filter(([e]) => e[2] === j).map(([e, c]) => [e[0]!, e[1]!, c] as const))] as const)));
+  }
+  return { axis: axes[2]!, bySlice };
 }
 
 function depth(v: unknown): number {

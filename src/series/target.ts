@@ -16,10 +16,15 @@ export interface Target {
   /** Where the values came from (a command line, a file, typed coefficients). */
   readonly label: string;
   readonly entries: readonly TargetEntry[];
+  /**
+   * A marked union read apart: each entry (n, k) is the coefficient of the marking variable's
+   * power named here (e.g. "θ^{n−k}") in a series over n.
+   */
+  readonly marked?: string;
 }
 
 /** Build a target; its kind is the widest of its entries' kinds (q inside q,t). */
-export function makeTarget(label: string, entries: readonly TargetEntry[]): Target {
+export function makeTarget(label: string, entries: readonly TargetEntry[], marked?: string): Target {
   if (entries.length === 0) throw new InputError('a target needs at least one entry (n, series)');
   const kinds = new Set(entries.map((e) => e.series.kind));
   let kind: SeriesKind;
@@ -35,7 +40,7 @@ export function makeTarget(label: string, entries: readonly TargetEntry[]): Targ
     seen.add(key);
   }
   const sorted = [...entries].sort((a, b) => a.n - b.n || (a.k ?? 0) - (b.k ?? 0));
-  return { kind, label, entries: sorted };
+  return { kind, label, entries: sorted, ...(marked ? { marked } : {}) };
 }
 
 export function entryKey(n: number, k?: number): string {
@@ -53,11 +58,13 @@ export function rangeText(entries: readonly { n: number; k?: number }[]): string
   const contiguous = ns.every((n, i) => i === 0 || n === ns[i - 1]! + 1);
   const nText = contiguous && ns.length > 1 ? `n = ${ns[0]}..${ns[ns.length - 1]}` : `n = ${ns.join(', ')}`;
   if (!entries.some((e) => e.k !== undefined)) return nText;
-  const allK = ns.every((n) => {
-    const ks = new Set(entries.filter((e) => e.n === n).map((e) => e.k));
-    for (let k = 1; k <= n; k++) if (!ks.has(k)) return false;
-    return ks.size === n;
-  });
-  if (allK) return `${nText}, all k = 1..n`;
+  for (const from of [1, 0]) {
+    const allK = ns.every((n) => {
+      const ks = new Set(entries.filter((e) => e.n === n).map((e) => e.k));
+      for (let k = from; k <= n; k++) if (!ks.has(k)) return false;
+      return ks.size === n - from + 1;
+    });
+    if (allK) return `${nText}, all k = ${from}..n`;
+  }
   return entries.map((e) => `(${e.n},${e.k ?? '-'})`).join(' ');
 }

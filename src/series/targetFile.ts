@@ -23,6 +23,7 @@ export function targetToJson(t: Target): object {
     version: TARGET_VERSION,
     kind: t.kind,
     label: t.label,
+    ...(t.marked ? { marked: t.marked } : {}),
     entries: t.entries.map((e) => ({ n: e.n, ...(e.k === undefined ? {} : { k: e.k }), series: seriesToJson(e.series) })),
   };
 }
@@ -38,6 +39,7 @@ const TARGET = z.object({
   version: z.literal(TARGET_VERSION, { error: `"version" must be ${TARGET_VERSION} (the version this gradus reads)` }),
   kind: z.enum(KINDS as [SeriesKind, ...SeriesKind[]]),
   label: z.string().max(1000).optional(),
+  marked: z.string().max(200).optional(),
   entries: z.array(ENTRY).min(1).max(10_000),
 });
 
@@ -45,7 +47,7 @@ export function targetFromJson(doc: unknown, where = 'target', option?: string):
   const o = parseWith(TARGET, doc, where, option);
   const kind = o.kind;
   const entries = o.entries.map((r, i) => ({ n: r.n, ...(r.k === undefined ? {} : { k: r.k }), series: seriesFromJson(r.series, `${where}: entries[${i}].series`, kind) }));
-  const t = makeTarget(o.label ?? where, entries);
+  const t = makeTarget(o.label ?? where, entries, o.marked);
   if (t.kind !== kind && !(kind === 'qt' && t.kind === 'q')) {
     throw new InputError(`${where}: "kind" says ${kind} but the entries are ${t.kind}`, option);
   }

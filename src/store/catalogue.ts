@@ -231,6 +231,12 @@ export class Catalogue {
     return this.read(() => (this.db.prepare("SELECT * FROM distributions WHERE combine = 'joint' AND n = ? AND k IS NULL").all(n) as RawRow[]).map((r) => decode(r, this.path)));
   }
 
+  /** Frobenius-level rows of pairs of statistics at size n (with ks: only rows without k or with k among them). */
+  schurPairRowsAt(n: number, ks?: readonly number[]): StoredRow[] {
+    const byK = ks ? ` AND (k IS NULL OR k IN (${ks.map(() => '?').join(',') || 'NULL'}))` : '';
+    return this.read(() => (this.db.prepare(`SELECT * FROM distributions WHERE kind = 'schur' AND n = ? AND instr(statistics, ',') > 0${byK}`).all(n, ...(ks ?? [])) as RawRow[]).map((r) => decode(r, this.path)));
+  }
+
   /** The row of one candidate at one place, if stored. */
   find(family: string, params: Readonly<Record<string, number>>, statistics: string, combine: string, transform: string): StoredRow | undefined {
     this.findStatement ??= this.db.prepare('SELECT * FROM distributions WHERE family = ? AND params = ? AND statistics = ? AND combine = ? AND transform = ?');

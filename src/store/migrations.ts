@@ -35,6 +35,23 @@ export const MIGRATIONS: readonly string[] = [
      document TEXT NOT NULL, hash TEXT NOT NULL, provenance TEXT NOT NULL);
    CREATE INDEX results_place ON results (kind, n, k);
    ALTER TABLE search_results ADD COLUMN hash TEXT NOT NULL DEFAULT '';`,
+  // 4: the expression library: families of symmetric-function expressions (built in or added by
+  // the user), one unit per (family, n); every value (a place, a specialisation, a projection)
+  // points at its series, each distinct series stored once under its hash; and an index by size
+  // for the search's counts of candidates
+  `CREATE TABLE expression_families (
+     id TEXT PRIMARY KEY, template TEXT NOT NULL, indexing TEXT NOT NULL, k_min INTEGER NOT NULL,
+     title TEXT NOT NULL, source TEXT NOT NULL, origin TEXT NOT NULL, sign TEXT NOT NULL, created TEXT NOT NULL);
+   CREATE TABLE expression_units (
+     family TEXT NOT NULL, n INTEGER NOT NULL, seconds REAL NOT NULL, provenance TEXT NOT NULL,
+     PRIMARY KEY (family, n));
+   CREATE TABLE expression_series (hash TEXT PRIMARY KEY, kind TEXT NOT NULL, series TEXT NOT NULL, at_one TEXT NOT NULL);
+   CREATE TABLE expression_values (
+     id INTEGER PRIMARY KEY, family TEXT NOT NULL, n INTEGER NOT NULL, k INTEGER, partition TEXT NOT NULL,
+     place TEXT NOT NULL, specialisation TEXT NOT NULL, projection TEXT NOT NULL, expression TEXT NOT NULL,
+     hash TEXT NOT NULL, UNIQUE (family, place, specialisation, projection));
+   CREATE INDEX expression_values_hash ON expression_values (hash);
+   CREATE INDEX distributions_size ON distributions (n, kind, at_one);`,
 ];
 
 export const SCHEMA_VERSION = MIGRATIONS.length;

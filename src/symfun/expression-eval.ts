@@ -9,8 +9,8 @@ import { unknownNameMessage } from '../core/suggest.js';
 import type { Arg, Node } from './expression-parser.js';
 import { HALL_LITTLEWOOD_MAX_N, modifiedHallLittlewood } from './hall-littlewood.js';
 import { MACDONALD_MAX_N, modifiedMacdonald } from './macdonald.js';
-import { delta, deltaPrime, deltaPrimeOfEn, nabla, starScalar } from './operators.js';
-import { plethysmTimes } from './plethysm.js';
+import { delta, deltaEigen, deltaPrime, deltaPrimeOfEn, enNumerators, nabla, nablaEigen, starScalar, sumInMacdonaldBasis } from './operators.js';
+import { plethysmDividedCleared, plethysmTimes } from './plethysm.js';
 import { SymFun } from './symfun.js';
 import type { Basis } from './transitions.js';
 
@@ -42,6 +42,8 @@ export const EXPRESSION_FUNCTIONS: readonly FunctionDoc[] = [
   { name: 'subs', signature: 'subs(F, t=0)', description: 'set q and/or t to integers (subs(F, q=1, t=1))' },
   { name: 'swap', signature: 'swap(F)', description: 'exchange q and t' },
   { name: 'pleth', signature: 'pleth(F, 1-q)', description: 'plethysm F[X·A] by a q,t-polynomial A with integer coefficients' },
+  { name: 'revq', signature: 'revq(F)', description: 'q-reversal q^D F(1/q), D the largest q-degree of F' },
+  { name: 'plethdiv', signature: 'plethdiv(F, 1-q, 1-t)', description: '(q;q)_n (t;t)_n F[X/((1-q)(1-t))] (each alphabet 1-u, u a monomial; the factors (u;u)_n make it a polynomial)' },
   { name: 'hall', signature: 'hall(F, G)', description: 'Hall scalar product ⟨F, G⟩, ⟨s_λ, s_μ⟩ = δ (a scalar)' },
   { name: 'hilbert', signature: 'hilbert(F)', description: 'Hilbert series ⟨F, p_1^n⟩ (a scalar)' },
   { name: 'star', signature: 'star(F, G)', description: '*-scalar product, ⟨H̃_λ, H̃_μ⟩_* = δ w_μ (a scalar)' },
@@ -146,6 +148,23 @@ function reporter(label: string, opts: EvalOptions): ((done: number, total: numb
   return sink ? (done, total) => sink(label, done, total) : undefined;
 }
 
+/** The monomial u = q^a t^b of an alphabet 1 − u (u ≠ 1). */
+function oneMinusMonomial(f: SymFun, col: number): [number, number] {
+  const c = constantOf(f);
+  const u = c && c.isIntegral() ? Poly.one.sub(c.num) : undefined;
+  const terms = u ? [...u.terms()] : [];
+  if (terms.length !== 1 || terms[0]![2] !== 1n || terms[0]![0] + terms[0]![1] === 0) fail(col, 'the alphabet must be 1 - u for a monomial u in q, t, as 1-q or 1-q*t');
+  return [terms[0]![0], terms[0]![1]];
+}
+
+/** F = c·e_n (n ≥ 1): then the operators use the closed H̃-expansion of e_n. */
+function multipleOfEn(f: SymFun): { n: number; c: PolyQ } | undefined {
+  const d = f.degrees();
+  if (d.length !== 1 || d[0]! === 0) return undefined;
+  const c = f.coeff(new Array(d[0]!).fill(1));
+  return !c.isZero() && f.equals(SymFun.basisElement('e', [d[0]!]).scale(c)) ? { n: d[0]!, c } : undefined;
+}
+
 function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions): SymFun {
   const ev = (n: Node): SymFun => evaluateNode(n, opts);
   const name = node.name;
@@ -174,6 +193,8 @@ function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions):
       const [a] = exprArgs(node, 1, 'nabla(F)');
       const f = ev(a!);
       checkDegree(f, 'nabla', node.col, opts);
+      const en = multipleOfEn(f);
+      if (en) return sumInMacdonaldBasis(en.n, enNumerators(en.n), nablaEigen, reporter('nabla', opts)).scale(en.c);
       return nabla(f, reporter('nabla', opts));
     }
     case 'delta':
@@ -183,14 +204,10 @@ function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions):
       const f = ev(b!);
       checkDegree(f, name, node.col, opts);
       const onStep = reporter(name, opts);
-      if (name === 'delta') return delta(g, f, onStep);
       // e_n has a closed expansion in the H̃ basis: use it when F is a multiple of e_n
-      const d = f.degrees();
-      if (d.length === 1 && d[0]! > 0) {
-        const en = SymFun.basisElement('e', [d[0]!]);
-        const c = f.coeff(new Array(d[0]!).fill(1));
-        if (!c.isZero() && f.equals(en.scale(c))) return deltaPrimeOfEn(g, d[0]!, onStep).scale(c);
-      }
+      const en = multipleOfEn(f);
+      if (name === 'delta') return en ? sumInMacdonaldBasis(en.n, enNumerators(en.n), deltaEigen(g), onStep).scale(en.c) : delta(g, f, onStep);
+      if (en) return deltaPrimeOfEn(g, en.n, onStep).scale(en.c);
       return deltaPrime(g, f, onStep);
     }
     case 'omega': {
@@ -220,6 +237,15 @@ function evaluateCall(node: Extract<Node, { kind: 'call' }>, opts: EvalOptions):
       const alpha = constantOf(ev(b!));
       if (!alpha || !alpha.isIntegral()) fail(b!.col, 'the alphabet must be a polynomial in q, t with integer coefficients, as 1-q');
       return plethysmTimes(f, alpha!.num);
+    }
+    case 'revq': {
+      const [a] = exprArgs(node, 1, 'revq(F)');
+      return ev(a!).reverseQ();
+    }
+    case 'plethdiv': {
+      if (node.args.length < 2 || node.args.some((x) => x.kind !== 'expr')) fail(node.col, 'plethdiv takes a function and one or more alphabets 1-u: plethdiv(F, 1-q) or plethdiv(F, 1-q, 1-t)');
+      const [a, ...alphabets] = node.args.map((x) => (x as { expr: Node }).expr);
+      return plethysmDividedCleared(ev(a!), alphabets.map((b) => oneMinusMonomial(ev(b), b.col)));
     }
     case 'hall': {
       const [a, b] = exprArgs(node, 2, 'hall(F, G)');

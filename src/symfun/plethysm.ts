@@ -36,3 +36,30 @@ export function evaluateAtAlphabet(f: SymFun, a: Poly): PolyQ {
   for (const [rho, c] of f.toBasis('p')) s = s.add(c.mul(PolyQ.of(powerSumAt(rho, a, cache))));
   return s;
 }
+
+/** (u;u)_n / Π_i (1 − u^{ρ_i}) for a partition ρ of n: a polynomial (a q-multinomial times factorials' ratio). */
+function clearedFactor(rho: Partition, u: readonly [number, number]): Poly {
+  const n = rho.reduce((a, b) => a + b, 0);
+  let num = Poly.one;
+  for (let i = 1; i <= n; i++) num = num.mul(Poly.one.sub(Poly.monomial(1n, u[0] * i, u[1] * i)));
+  let den = Poly.one;
+  for (const r of rho) den = den.mul(Poly.one.sub(Poly.monomial(1n, u[0] * r, u[1] * r)));
+  return num.divExact(den);
+}
+
+/**
+ * (u;u)_n (v;v)_n … · F[X/((1−u)(1−v)…)] for monomials u, v, … (degree by degree): the
+ * plethysm by X/(1−u) has denominators Π_i (1 − u^{ρ_i}) on p_ρ, which divide (u;u)_n, so the
+ * product is a polynomial. (q;q)_n h_n[X/(1−q)] is the graded Frobenius series of the
+ * coinvariant algebra (Stanley, "Invariants of finite groups and their applications to
+ * combinatorics", Bull. AMS 1 (1979)).
+ */
+export function plethysmDividedCleared(f: SymFun, monomials: readonly (readonly [number, number])[]): SymFun {
+  const out = new Map<string, [Partition, PolyQ]>();
+  for (const [rho, c] of f.toBasis('p')) {
+    let w = Poly.one;
+    for (const u of monomials) w = w.mul(clearedFactor(rho, u));
+    out.set(partitionKey(rho), [rho, c.mul(PolyQ.of(w))]);
+  }
+  return SymFun.fromBasis('p', out.values());
+}

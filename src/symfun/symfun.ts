@@ -189,6 +189,14 @@ export class SymFun {
   swapQT(): SymFun {
     return this.mapCoefficients((c) => PolyQ.of(c.num.swapQT(), c.den));
   }
+  /**
+   * rev_q: q^D F(1/q, t) with D the largest q-degree over all coefficients, so the whole
+   * function is reversed as one (as the graded Frobenius series of a module is).
+   */
+  reverseQ(): SymFun {
+    const d = Math.max(-1, ...[...this.schur.values()].map((c) => c.num.degQ()));
+    return this.mapCoefficients((c) => PolyQ.of(Poly.fromTerms(c.num.sortedTerms().map(([i, j, v]) => [d - i, j, v] as const)), c.den));
+  }
   /** Set q and/or t to integers in every coefficient. */
   specialize(values: { q?: bigint | number; t?: bigint | number }): SymFun {
     return this.mapCoefficients((c) => PolyQ.of(c.num.specialize(values), c.den));

@@ -64,7 +64,7 @@ export const SCREENS: readonly ScreenInfo[] = [
       { keys: 'p', action: 'edit parameters' },
       SCROLL,
       { keys: '</>', action: 'table columns' },
-      { keys: 'g', action: 'send to search' },
+      { keys: 'g', action: 'search n = 1..N (all k)' },
       { keys: 'x', action: 'cancel a long count' },
     ],
   },
@@ -98,7 +98,8 @@ export const SCREENS: readonly ScreenInfo[] = [
       { keys: '+/-', action: 'size {n}' },
       { keys: '↑/↓ PgUp/PgDn', action: 'scroll' },
       { keys: 'x', action: 'cancel' },
-      { keys: 'g', action: 'send to search' },
+      { keys: 'g', action: 'search n = 1..N (all k)' },
+      { keys: 'a', action: 'keep as an expression family' },
     ],
   },
   {

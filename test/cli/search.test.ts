@@ -24,7 +24,7 @@ beforeAll(() => {
   cat = join(dir, 'catalogue.sqlite');
   const r = runCli(['catalogue', 'build', '--n-max', '6', '--catalogue', cat]);
   expect(r.code, r.stderr).toBe(0);
-}, 120_000);
+}, 300_000); // the build also fills the expression library (n ≤ 6)
 
 interface Match {
   family: string;

@@ -6,11 +6,13 @@
 import { existsSync, renameSync, rmSync } from 'node:fs';
 import { InputError } from '../../core/errors.js';
 import { toJsonText } from '../../core/json-text.js';
+import { buildExpressionLibrary, restoreUserFamilies, userFamiliesOf, type ExpressionBuildReport } from '../../match/buildExpressions.js';
 import { buildCatalogue, type BuildOptions, type BuildReport } from '../../store/buildCatalogue.js';
 import { buildCatalogueParallel } from '../../store/buildParallel.js';
 import { Catalogue } from '../../store/catalogue.js';
 import { ForeignFileError, GRADUS_APPLICATION_ID, inspectCatalogueFile } from '../../store/catalogue-file.js';
 import { cataloguePath } from '../../store/cataloguePath.js';
+import { expressionCounts, expressionFamilies } from '../../store/expressionStore.js';
 import { planUnits } from '../../store/planUnits.js';
 import { flagOpt, intOpt, listOpt, strOpt, type CommandIO, type CommandSpec, type ParsedArgs } from '../command.js';
 
@@ -40,13 +42,22 @@ function buildOptions(args: ParsedArgs, io: CommandIO, rebuild: boolean): BuildO
   return { nMax, maxObjects, ...(families ? { families } : {}), progress: io.progress, workers: intOpt(args, 'workers') ?? 2 };
 }
 
-async function runBuild(cat: Catalogue, o: BuildOptions & { workers: number }): Promise<BuildReport> {
-  return o.workers > 1 ? buildCatalogueParallel(cat, o) : buildCatalogue(cat, o);
+/** The size the expression library is built to with the catalogue (beyond: gradus expressions build). */
+const EXPRESSIONS_WITH_CATALOGUE = 6;
+
+async function runBuild(cat: Catalogue, o: BuildOptions & { workers: number }): Promise<BuildReport & { expressions?: ExpressionBuildReport }> {
+  const report = await (o.workers > 1 ? buildCatalogueParallel(cat, o) : buildCatalogue(cat, o));
+  // a whole build also fills the expression library (a build of named families leaves it alone)
+  if (o.families) return report;
+  const expressions = await buildExpressionLibrary(cat, { nMax: Math.min(o.nMax, EXPRESSIONS_WITH_CATALOGUE), workers: o.workers, progress: o.progress });
+  return { ...report, expressions };
 }
 
-function printReport(io: CommandIO, path: string, nMax: number, report: BuildReport, json: boolean, extra: Record<string, unknown> = {}): void {
+function printReport(io: CommandIO, path: string, nMax: number, report: BuildReport & { expressions?: ExpressionBuildReport }, json: boolean, extra: Record<string, unknown> = {}): void {
   if (json) return io.out(toJsonText({ catalogue: path, nMax, ...report, ...extra }));
   io.out(`catalogue ${path}: ${report.units} units built (${report.skippedDone} already there), ${report.rows} distributions from ${report.objects} objects in ${report.seconds.toFixed(1)}s`);
+  const e = report.expressions;
+  if (e) io.out(`expression library: ${e.units} units built (${e.skippedDone} already there) over ${e.families} families, ${e.values} values in ${e.seconds.toFixed(1)}s (n ≤ ${Math.min(nMax, EXPRESSIONS_WITH_CATALOGUE)}; beyond: gradus expressions build --n-max N)`);
   for (const s of report.familiesLeftOut) io.out(`  left out ${s.family}: ${s.why}`);
 }
 
@@ -76,10 +87,14 @@ async function rebuild(path: string, args: ParsedArgs, io: CommandIO): Promise<v
     }
   }
   const fresh = `${path}.rebuilding`;
+  // the expression families the user added are evaluated again into the new file
+  const userFamilies = present.kind === 'sqlite' ? userFamiliesOf(() => Catalogue.open(path, { existing: true })) : [];
   const cat = Catalogue.open(fresh);
-  let report: BuildReport;
+  let report: BuildReport & { expressions?: ExpressionBuildReport };
   try {
     report = await runBuild(cat, o);
+    const kept = new Set(expressionFamilies(cat).map((f) => f.id));
+    await restoreUserFamilies(cat, userFamilies.filter((f) => !kept.has(f.id)), o.workers, o.progress);
   } finally {
     cat.close();
   }
@@ -110,7 +125,8 @@ export const catalogueCommand: CommandSpec = {
   ],
   producesData: true,
   details: [
-    'build    enumerate every family × statistic (pairs, sums, Frobenius-level sums) up to n;',
+    'build    enumerate every family × statistic (pairs, sums, Frobenius-level sums) up to n, and (without',
+    `         --families) evaluate the expression library up to n ≤ ${EXPRESSIONS_WITH_CATALOGUE} (gradus expressions);`,
     '         finished units are kept, so an interrupted build resumes where it stopped',
     'rebuild  build a fresh catalogue beside the present one and swap them when it is complete',
     '         (the present file is kept as PATH.aside-<time>)',
@@ -128,11 +144,13 @@ export const catalogueCommand: CommandSpec = {
       try {
         const info = cat.info();
         const check = flagOpt(args, 'check') ? cat.integrityCheck() : undefined;
-        if (json) return io.out(toJsonText({ ...info, ...(check !== undefined ? { check } : {}) }));
+        const expressions = expressionCounts(cat);
+        if (json) return io.out(toJsonText({ ...info, expressions, ...(check !== undefined ? { check } : {}) }));
         io.out(`catalogue ${info.path} (schema ${info.schema}${info.writable ? '' : ', read-only'})`);
         if (info.unfinished) io.out(`warning: ${info.unfinished}`);
         io.out(`${info.units} units, ${info.distributions} distributions, ${info.results.map((r) => `${r.count} ${r.kind} results`).join(', ') || 'no kept results'}, ${info.searches} saved searches`);
         for (const f of info.families) io.out(`  ${f.family.padEnd(28)} n ≤ ${f.nMax}  ${f.rows} distributions`);
+        io.out(`expression library: ${expressions.families} families, ${expressions.values} values, ${expressions.series} distinct series (gradus expressions list)`);
         if (check !== undefined) io.out(`SQLite check: ${check}`);
       } finally {
         cat.close();

@@ -21,6 +21,7 @@ export const COMMAND_ENTRIES: readonly CommandEntry[] = [
   { name: 'sweep', load: async () => (await import('./sweep.js')).sweepCommand },
   { name: 'catalogue', load: async () => (await import('./catalogue.js')).catalogueCommand },
   { name: 'cluster', load: async () => (await import('./cluster.js')).clusterCommand },
+  { name: 'expressions', load: async () => (await import('./expressions.js')).expressionsCommand },
   { name: 'export', load: async () => (await import('./export.js')).exportCommand },
   { name: 'qanalog', load: async () => (await import('./qanalog.js')).qanalogCommand },
   { name: 'app', load: async () => (await import('./app.js')).appCommand },

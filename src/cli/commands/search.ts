@@ -77,8 +77,11 @@ export const searchCommand: CommandSpec = {
   producesData: true,
   details: [
     'The catalogue (gradus catalogue build) is searched for the target and its variants (q-reversed, ω,',
-    'q and t swapped); each match says the range it was verified on. Every search is kept in the catalogue',
-    'with an id that gradus export accepts (as search:ID). Example:',
+    'q and t swapped): first its expression library (gradus expressions: which known symmetric function',
+    'it is, written so that gradus sym evaluates it again), then the statistics; each match says the range',
+    'it was verified on. A target over n with a second grading is also read as a marked union',
+    'Σ_k t^{n−k} F(n,k), and one with three gradings (x, y, θ) by its θ-degree. Every search is kept in the',
+    'catalogue with an id that gradus export accepts (as search:ID). Example:',
     '  gradus search --n-range 1..6 --from "qanalog ordered-stirling --n {n} --k {k}"',
   ].join('\n'),
   async run(args: ParsedArgs, io) {
@@ -122,17 +125,19 @@ function printText(io: CommandIO, d: SearchDocument, id: number | undefined, lim
   for (const x of r.recurrences) io.out(`recurrence: ${x.text}${x.name ? `  [${x.name}]` : ''}  (checked on ${x.checked} entries)`);
   io.out(flagsText(r));
   const t = d.tried;
-  const triedLine = `tried ${t.candidates} candidates at n = ${t.anchor?.n ?? '-'}${t.anchor?.k === undefined ? '' : `, k = ${t.anchor.k}`} (whole distributions: ${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there${t.combines.includes('slice') ? '; slices of joint distributions by their second statistic checked apart' : ''}) over ${t.families.length} families [${t.families.join(', ')}], ${t.statistics.length} statistics, forms ${t.combines.join('/')}, variants ${t.variants.join(', ')}; catalogue n ≤ ${t.catalogueMaxN}`;
+  const readings = t.readings?.length ? `; also read ${t.readings.join('; ')}` : '';
+  const triedLine = `tried ${t.candidates} candidates at n = ${t.anchor?.n ?? '-'}${t.anchor?.k === undefined ? '' : `, k = ${t.anchor.k}`} (whole distributions: ${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there${t.combines.includes('slice') ? '; slices of joint distributions by their second statistic checked apart' : ''}) over ${t.families.length} families [${t.families.join(', ')}], ${t.statistics.length} statistics, forms ${t.combines.join('/')}, variants ${t.variants.join(', ')}; catalogue n ≤ ${t.catalogueMaxN}${readings}`;
+  printExpressions(io, d, limit);
   if (d.matches.length === 0) {
     io.out('no match: no distribution in the catalogue equals the target or any of its variants.');
-    if ((d.target as { kind?: string }).kind === 'multi') io.out('the target is a table with three or more varying gradings; the catalogue holds series in q, in q and t, and Frobenius series');
+    if ((d.target as { kind?: string }).kind === 'multi' && !t.readings?.length) io.out('the target is a table with three or more varying gradings; the catalogue holds series in q, in q and t, and Frobenius series');
     else if (!t.anchor) io.out(`the catalogue holds n ≤ ${t.catalogueMaxN}, below every n of the target; extend it with gradus catalogue build --n-max N`);
     io.out(triedLine);
   } else {
-    io.out(`${d.matches.length} match${d.matches.length === 1 ? '' : 'es'}, simplest first:`);
+    io.out(`${d.matches.length} statistic match${d.matches.length === 1 ? '' : 'es'}, simplest first:`);
     d.matches.slice(0, limit).forEach((m, i) => {
-      io.out(`${String(i + 1).padStart(3)}. ${m.formula}`);
-      io.out(`     family ${m.family}, statistics ${m.statistics.join(' & ')} (${m.combine}${m.transform ? `, via ${m.transform}` : ''}), ${m.mapping}, variant ${m.variant}`);
+      io.out(`${String(i + 1).padStart(3)}. ${m.marker ? `Σ_k ${m.marker} · ` : ''}${m.formula}`);
+      io.out(`     family ${m.family}, statistics ${m.statistics.join(' & ')} (${m.combine}${m.transform ? `, via ${m.transform}` : ''}), ${m.mapping}, variant ${m.variant}${m.marker ? `; the coefficient of ${m.marker.replace(/\^.*/, '')}^j is the entry k = n − j` : ''}`);
       io.out(`     verified ${m.verified}${m.complete ? '' : `; not checked (outside the catalogue or the family): ${m.unchecked.map((p) => `(${p.n}${p.k === undefined ? '' : `,${p.k}`})`).join(' ')}`}`);
     });
     if (d.matches.length > limit) io.out(`… ${d.matches.length - limit} more (--limit, or --json for all)`);
@@ -141,4 +146,26 @@ function printText(io: CommandIO, d: SearchDocument, id: number | undefined, lim
   if (id !== undefined) io.out(`saved as search:${id} (gradus export search:${id} --format latex --out FILE)`);
   else io.out(`not kept in the catalogue (it is read-only)${save ? `; written to ${save}` : '; keep it with --save FILE'}`);
   if (save && id !== undefined) io.out(`written to ${save}`);
+}
+
+/** Expressions first: which known symmetric function the target is, written to be evaluated again. */
+function printExpressions(io: CommandIO, d: SearchDocument, limit: number): void {
+  const lib = d.tried.expressions;
+  if (!lib || lib.families === 0) {
+    io.out('expressions: the library is empty; fill it with gradus expressions build --n-max N');
+    return;
+  }
+  if (d.expressions.length === 0) {
+    io.out(`expressions: none of the ${lib.families} families of the library (n ≤ ${lib.maxN}) equals the target or its variants`);
+    return;
+  }
+  io.out(`${d.expressions.length} expression${d.expressions.length === 1 ? '' : 's'} of the library, simplest first:`);
+  d.expressions.slice(0, limit).forEach((m, i) => {
+    io.out(`${String(i + 1).padStart(3)}. ${m.marker ? `Σ_k ${m.marker} · ` : ''}${m.expression}`);
+    io.out(`     ${m.title} (${m.family}, ${m.origin}); ${m.mapping}; specialisation ${m.specialisation}${m.projection === 'hilbert' ? ', Hilbert series' : ''}; variant ${m.variant}${m.marker ? `; the coefficient of ${m.marker.replace(/\^.*/, '')}^j is the entry k = n − j` : ''}`);
+    io.out(`     at ${m.exampleAt}: gradus sym "${m.example}"`);
+    io.out(`     verified ${m.verified}${m.complete ? '' : `; not checked (outside the library): ${m.unchecked.map((p) => `(${p.n}${p.k === undefined ? '' : `,${p.k}`})`).join(' ')}`}`);
+    io.out(`     source: ${m.source}`);
+  });
+  if (d.expressions.length > limit) io.out(`… ${d.expressions.length - limit} more (--limit, or --json for all)`);
 }

@@ -92,28 +92,31 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
     const { targets, catalogue } = input as { targets: unknown[]; catalogue: string };
     return searchMany(targets, catalogue, progress);
   },
-  // The same engine call as `gradus catalogue build`.
+  // The same engine calls as `gradus catalogue build`: the distributions, then the expression library.
   'catalogue-build': async (input, progress) => {
-    const [{ buildCatalogue }, { Catalogue }] = await Promise.all([import('../../store/buildCatalogue.js'), import('../../store/catalogue.js')]);
+    const [{ buildCatalogue }, { buildExpressionLibrary }, { Catalogue }] = await Promise.all([
+      import('../../store/buildCatalogue.js'),
+      import('../../match/buildExpressions.js'),
+      import('../../store/catalogue.js'),
+    ]);
     const { catalogue, nMax } = input as { catalogue: string; nMax: number };
     const cat = Catalogue.open(catalogue);
     try {
       let label = 'catalogue build';
       let total: number | undefined;
-      const r = buildCatalogue(cat, {
-        nMax,
-        maxObjects: 50_000_000n,
-        progress: {
-          start: (l, t) => {
-            label = l;
-            total = t;
-            progress(label, 0, total);
-          },
-          update: (done) => progress(label, done, total),
-          finish: () => {},
+      const onProgress = {
+        start: (l: string, t?: number) => {
+          label = l;
+          total = t;
+          progress(label, 0, total);
         },
-      });
-      return { text: `catalogue ${catalogue}: ${r.units} units built (${r.skippedDone} already there), ${r.rows} distributions in ${r.seconds.toFixed(1)}s` };
+        update: (done: number) => progress(label, done, total),
+        finish: () => {},
+      };
+      const r = buildCatalogue(cat, { nMax, maxObjects: 50_000_000n, progress: onProgress });
+      // in this worker thread, one place at a time
+      const e = await buildExpressionLibrary(cat, { nMax, workers: 1, progress: onProgress });
+      return { text: `catalogue ${catalogue}: ${r.units} units built (${r.skippedDone} already there), ${r.rows} distributions, ${e.values} expression values in ${(r.seconds + e.seconds).toFixed(1)}s` };
     } finally {
       cat.close();
     }
@@ -167,6 +170,33 @@ export const JOB_TASKS: Readonly<Record<string, JobTask>> = {
       return targetToJson(target);
     } finally {
       cat?.close();
+    }
+  },
+  // The same engine call as `gradus expressions add`: every place evaluated, then stored in one transaction.
+  'expression-add': async (input, progress) => {
+    const [{ addExpressionFamily }, { userFamily }, { Catalogue }] = await Promise.all([
+      import('../../match/buildExpressions.js'),
+      import('../../match/expressionFamilies.js'),
+      import('../../store/catalogue.js'),
+    ]);
+    const { catalogue, name, template, nMax } = input as { catalogue: string; name: string; template: string; nMax: number };
+    const family = userFamily(name, template, 'added in the app', undefined);
+    const cat = Catalogue.open(catalogue);
+    try {
+      let label = 'expression family';
+      let total: number | undefined;
+      const r = await addExpressionFamily(cat, family, nMax, 1, {
+        start: (l, t) => {
+          label = l;
+          total = t;
+          progress(label, 0, total);
+        },
+        update: (done) => progress(label, done, total),
+        finish: () => {},
+      });
+      return { text: `kept ${name} in ${catalogue}: ${r.values} values for n = 1..${nMax}; the search now tries it` };
+    } finally {
+      cat.close();
     }
   },
   // Exercises the worker plumbing in tests: counts to input.n, reporting progress.

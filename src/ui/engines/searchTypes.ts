@@ -1,6 +1,8 @@
 /** What the Search screen shows of a search, as plain data from the worker. */
 
 export interface SearchCandidateView {
+  /** An expression of the library (which function the target is) or a statistic (which objects count it). */
+  readonly kind?: 'expression' | 'statistic';
   /** One line: statistics, family, transforms. */
   readonly title: string;
   /** The exact range verified, e.g. "n = 1..4, all k = 1..n". */

@@ -9,7 +9,8 @@ export function triedText(d: SearchDocument): string {
   return (
     `${plural(t.candidates, 'candidate')} at ${at} (whole distributions: ${t.sameCount} with the same count at q = 1, ${t.exactAtAnchor} equal there${t.combines.includes('slice') ? '; slices checked apart' : ''}) ` +
     `over ${plural(t.families.length, 'family', 'families')} and ${plural(t.statistics.length, 'statistic')}, forms ${t.combines.join('/')}, ` +
-    `variants ${t.variants.join(', ')}; catalogue n ≤ ${t.catalogueMaxN}`
+    `variants ${t.variants.join(', ')}; catalogue n ≤ ${t.catalogueMaxN}` +
+    (t.expressions ? `; expression library: ${plural(t.expressions.families, 'family', 'families')}, n ≤ ${t.expressions.maxN}` : '')
   );
 }
 
@@ -21,15 +22,26 @@ export function searchOutcome(d: SearchDocument, id: number | undefined, elapsed
   recognition.push(`every entry: ${r.palindromic ? 'palindromic' : 'not palindromic'}, ${r.unimodal ? 'unimodal' : 'not unimodal'}`);
   return {
     targetLabel: String((d.target as { label?: unknown }).label ?? ''),
-    candidates: d.matches.map((m) => ({
-      title: `${m.statistics.join(' & ')} on ${m.family} (${m.combine}${m.transform ? `, via ${m.transform}` : ''})`,
-      range: m.verified,
-      formula: m.formula,
-      detail: [
-        `parameters ${m.mapping}; variant ${m.variant}`,
-        ...(m.complete ? [] : [`not checked: ${m.unchecked.map((p) => `(${p.n}${p.k === undefined ? '' : `,${p.k}`})`).join(' ')}`]),
-      ],
-    })),
+    // expressions first (which known function is this?), then the statistics that count it
+    candidates: [
+      ...(d.expressions ?? []).map((m) => ({
+        kind: 'expression' as const,
+        title: `≡ ${m.marker ? `Σ_k ${m.marker}·` : ''}${m.expression}`,
+        range: m.verified,
+        formula: `${m.title} — at ${m.exampleAt}: gradus sym "${m.example}"`,
+        detail: [`${m.family} (${m.origin}); parameters ${m.mapping}; specialisation ${m.specialisation}${m.projection === 'hilbert' ? ', Hilbert series' : ''}; variant ${m.variant}`, `source: ${m.source}`],
+      })),
+      ...d.matches.map((m) => ({
+        kind: 'statistic' as const,
+        title: `${m.marker ? `Σ_k ${m.marker}· ` : ''}${m.statistics.join(' & ')} on ${m.family} (${m.combine}${m.transform ? `, via ${m.transform}` : ''})`,
+        range: m.verified,
+        formula: m.formula,
+        detail: [
+          `parameters ${m.mapping}; variant ${m.variant}`,
+          ...(m.complete ? [] : [`not checked: ${m.unchecked.map((p) => `(${p.n}${p.k === undefined ? '' : `,${p.k}`})`).join(' ')}`]),
+        ],
+      })),
+    ],
     tried: triedText(d),
     recognition,
     elapsedMs,

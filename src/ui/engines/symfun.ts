@@ -37,20 +37,30 @@ export function errorColumn(message: string): number | undefined {
   return m ? Number(m[1]) : undefined;
 }
 
-/** An expression with {n} stands for a family over n (as in `gradus search --from "sym …{n}…"`). */
+/** An expression with {n} (and {k}) stands for a family over n (as in `gradus search --from "sym …{n}…"`). */
 export function hasSize(expression: string): boolean {
   return expression.includes('{n}');
 }
 
-/** The expression at size n: {n} and the arithmetic next to it worked out (`e({n}-1)` at 4 is `e(3)`). */
+/** The k shown with size n when the expression has {k}: the middle of 1..n. */
+export function middleK(n: number): number {
+  return Math.ceil(n / 2);
+}
+
+/** The expression at size n (and k = middleK(n)): the arithmetic next to {n}, {k} worked out (`e({k}-1)` at k = 2 is `e(1)`). */
 export function atSize(expression: string, n: number): string {
-  return instantiate(expression, { n }, 'expression');
+  return instantiate(expression, { n, ...(expression.includes('{k}') ? { k: middleK(n) } : {}) }, 'expression');
 }
 
 /** The family's target for n = 1..nTo, built by the search engine's own command runner. */
 export function startSymTarget(expression: string, nTo: number, cwd: string, catalogue: string | undefined, onProgress: (p: JobProgress) => void): Job<Target> {
   if (expression.includes('"')) throw new InputError('the expression cannot contain a double quote');
-  parseExpression(atSize(expression, 1));
+  parseExpression(atSize(expression, 1)); // the family over n = 1..nTo, and every k = 1..n when {k} appears
   const job = startJob<unknown>('from-template', { template: `sym "${expression}"`, nFrom: 1, nTo, cwd, ...(catalogue ? { catalogue } : {}) }, onProgress);
   return { result: job.result.then((j) => targetFromJson(j, 'sym target')), cancel: job.cancel };
+}
+
+/** Keep the expression as a family of the user's expression library (as `gradus expressions add`), for n = 1..nMax. */
+export function startAddFamily(name: string, template: string, nMax: number, catalogue: string, onProgress: (p: JobProgress) => void): Job<{ text: string }> {
+  return startJob<{ text: string }>('expression-add', { name, template, nMax, catalogue }, onProgress);
 }

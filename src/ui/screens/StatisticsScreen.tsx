@@ -9,7 +9,7 @@ import type { Poly } from '../../core/poly.js';
 import type { Family, Params, Statistic } from '../../enumerate/plugin.js';
 import { qtSeries } from '../../series/series.js';
 import { isPalindromic, isUnimodal } from '../../series/seriesOps.js';
-import { makeTarget } from '../../series/target.js';
+import { makeTarget, type Target } from '../../series/target.js';
 import { barLines } from '../components/BarChart.js';
 import { LineInput } from '../components/LineInput.js';
 import { Lines } from '../components/Lines.js';
@@ -18,6 +18,8 @@ import { gridLines } from '../components/ShadedGrid.js';
 import { Unavailable } from '../components/Unavailable.js';
 import { defaultParams, loadCatalog, statisticsOf } from '../engines/catalog.js';
 import { DISTRIBUTION_ENGINE_AVAILABLE, startDistribution, type DistView } from '../engines/distribution.js';
+import { existingCatalogue } from '../engines/existingCatalogue.js';
+import { distTemplate, startTemplateTarget } from '../engines/templateTarget.js';
 import { bumpSize, paramsToText, parseParamsText } from '../engines/paramsText.js';
 import { errorText } from '../errorText.js';
 import { useKeys, useTicker } from '../hooks.js';
@@ -62,6 +64,12 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
   const scroll = useScroll();
 
   const job = useJob<DistView>('statistics');
+  const range = useJob<Target>('statistics');
+  useEffect(() => {
+    if (range.state.status === 'error') props.notify(range.state.error ?? 'the range could not be computed', 'error');
+    // the notice follows the range job's state
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [range.state.status]);
   const now = useTicker(job.state.status === 'running');
   const runKey = `${family.id} ${paramsToText(params)} ${s1.id} ${s2?.id ?? ''}`;
   // The key of the run whose result (or error) is shown: nothing shows under other choices.
@@ -129,12 +137,26 @@ function StatisticsView(props: ScreenProps & { families: readonly Family<unknown
         const title = `${s2 ? `${s1.id} × ${s2.id}` : s1.id} on ${family.id} ${paramsToText(params)}`;
         const n = typeof params['n'] === 'number' ? params['n'] : 0;
         const k = typeof params['k'] === 'number' ? params['k'] : undefined;
-        props.addItem({ title, origin: 'statistics', target: makeTarget(title, [{ n, ...(k !== undefined ? { k } : {}), series: qtSeries(poly) }]) });
-        return props.go('search');
+        if (n === 0) {
+          props.addItem({ title, origin: 'statistics', target: makeTarget(title, [{ n, ...(k !== undefined ? { k } : {}), series: qtSeries(poly) }]) });
+          return props.go('search');
+        }
+        // the whole range n = 1..N (and every k) goes to the search, as gradus search --from builds it
+        const nFrom = Math.max(1, family.params.find((p) => p.name === 'n')?.min ?? 1);
+        props.notify(`computing n = ${nFrom}..${n}${k !== undefined ? ', all k' : ''} for the search… (x cancels)`);
+        range.run(
+          (onProgress) => startTemplateTarget(distTemplate(family.id, params, s2 ? [s1.id, s2.id] : [s1.id]), nFrom, n, props.cwd, existingCatalogue(props.env, props.cwd), onProgress),
+          (t) => {
+            props.addItem({ title: `${title.replace(/ n=\d+/, '').replace(/ k=\d+/, '')}, n = ${nFrom}..${n}${k !== undefined ? ', all k' : ''}`, origin: 'statistics', target: t });
+            props.go('search');
+          },
+        );
+        return;
       }
       if (input === 'x') {
-        if (job.state.status !== 'running') return props.notify('nothing is running');
-        return job.cancel();
+        if (job.state.status !== 'running' && range.state.status !== 'running') return props.notify('nothing is running');
+        job.cancel();
+        return range.cancel();
       }
       if (input === '<' || input === ',') return setColOffset(Math.max(0, shownCol.current - 1));
       if (input === '>' || input === '.') return setColOffset(shownCol.current + 1);

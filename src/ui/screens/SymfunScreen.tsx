@@ -10,7 +10,8 @@ import { makeTarget, type Target } from '../../series/target.js';
 import { LineInput } from '../components/LineInput.js';
 import { Lines } from '../components/Lines.js';
 import { existingCatalogue } from '../engines/existingCatalogue.js';
-import { atSize, errorColumn, hasSize, startSym, startSymTarget, SYMFUN_ENGINE_AVAILABLE, type SymOutcome } from '../engines/symfun.js';
+import { atSize, errorColumn, hasSize, middleK, startAddFamily, startSym, startSymTarget, SYMFUN_ENGINE_AVAILABLE, type SymOutcome } from '../engines/symfun.js';
+import { cataloguePath } from '../../store/cataloguePath.js';
 import { errorText } from '../errorText.js';
 import { useKeys } from '../hooks.js';
 import type { ScreenProps } from '../ScreenProps.js';
@@ -21,7 +22,7 @@ import { useJob } from '../useJob.js';
 import { useScroll } from '../useScroll.js';
 
 export const DEFAULT_EXPRESSION = 'nabla(e({n}))';
-const FORMS = 'Forms: e(4) h(2,1) s(2,1) p(2,1) m(2,1) H(2,1) HL(2,1) nabla(F) delta(f,F) deltaprime(f,F) omega(F) subs(F,t=0) swap(F) pleth(F,1-q) hall(F,G) star(F,G) hilbert(F)';
+const FORMS = 'Forms: e(4) h(2,1) s(2,1) p(2,1) m(2,1) H(2,1) HL(2,1) nabla(F) delta(f,F) deltaprime(f,F) omega(F) subs(F,t=0) swap(F) pleth(F,1-q) plethdiv(F,1-q) revq(F) hall(F,G) star(F,G) hilbert(F)';
 
 /** The expression with a caret under `col` (1-based): whole when it fits, else the part around it. */
 function caretLines(expr: string, col: number, width: number): SLine[] {
@@ -38,9 +39,10 @@ function caretLines(expr: string, col: number, width: number): SLine[] {
 
 export function SymfunScreen(props: ScreenProps) {
   const [expr, setExpr] = useState(DEFAULT_EXPRESSION);
-  const [field, setField] = useEditField<'expr'>(props.active, props.setEditing);
+  const [field, setField] = useEditField<'expr' | 'name'>(props.active, props.setEditing);
   const job = useJob<SymOutcome>('symfun');
   const family = useJob<Target>('symfun');
+  const add = useJob<{ text: string }>('symfun');
   const [size, setSize] = useState(3);
   const scroll = useScroll();
 
@@ -55,11 +57,11 @@ export function SymfunScreen(props: ScreenProps) {
 
   const sendToSearch = () => {
     if (hasSize(expr)) {
-      props.notify(`evaluating ${expr} for n = 1..${size}…`);
+      props.notify(`evaluating ${expr} for n = 1..${size}${expr.includes('{k}') ? ', all k' : ''}…`);
       return family.run(
         (onProgress) => startSymTarget(expr, size, props.cwd, existingCatalogue(props.env, props.cwd), onProgress),
         (t) => {
-          props.addItem({ title: `sym ${expr}, n = 1..${size}`, origin: 'symfun', target: t });
+          props.addItem({ title: `sym ${expr}, n = 1..${size}${expr.includes('{k}') ? ', all k' : ''}`, origin: 'symfun', target: t });
           props.go('search');
         },
       );
@@ -82,6 +84,10 @@ export function SymfunScreen(props: ScreenProps) {
       if (key.return) return evaluate(expr);
       if (input === 'e') return setField('expr');
       if (input === 'g') return sendToSearch();
+      if (input === 'a') {
+        if (!hasSize(expr) && !/\{(?:λ|lambda)\}/.test(expr)) return props.notify('only a family ({n}, {k} or {λ} in it) can be kept in the expression library', 'error');
+        return setField('name');
+      }
       if (input === 'x') {
         if (job.state.status !== 'running' && family.state.status !== 'running') return props.notify('nothing is running');
         family.cancel();
@@ -109,7 +115,12 @@ export function SymfunScreen(props: ScreenProps) {
   if (!SYMFUN_ENGINE_AVAILABLE) top.push(...wrapLine(line('The symmetric-function engine (src/symfun expressions) is not available in this build; nothing can be evaluated here.', 'warn'), w));
   if (field !== 'expr') top.push(...wrapLine([{ text: 'sym ', style: 'dim' }, { text: expr }], w, 4));
   const mid: SLine[] = [];
-  if (hasSize(expr)) mid.push(...wrapLine(line(`{n} = ${size} (+/- changes it; Enter evaluates at ${size}; g searches n = 1..${size})`, 'dim'), w, 2));
+  if (hasSize(expr)) {
+    const k = expr.includes('{k}');
+    mid.push(...wrapLine(line(`{n} = ${size}${k ? `, {k} = ${middleK(size)}` : ''} (+/- changes it; Enter evaluates there; g searches n = 1..${size}${k ? ', all k' : ''}; a keeps it in the expression library)`, 'dim'), w, 2));
+  }
+  if (add.state.status === 'error') mid.push(...wrapLine(line(`✗ ${add.state.error}`, 'error'), w, 2));
+  else if (add.state.status === 'running') mid.push(line(`evaluating the family for n = 1..${size}…`, 'dim'));
   if (family.state.status === 'error') mid.push(...wrapLine(line(`✗ ${family.state.error}`, 'error'), w, 2));
   else if (family.state.status === 'running') mid.push(line('building the target over n… (x cancels)', 'dim'));
   if (st.status === 'running') mid.push(line('evaluating… (x cancels)', 'dim'));
@@ -128,6 +139,22 @@ export function SymfunScreen(props: ScreenProps) {
   return (
     <Box flexDirection="column">
       <Lines lines={top} />
+      {field === 'name' ? (
+        <LineInput
+          label="keep as family"
+          initial="my-family"
+          active
+          width={w}
+          onSubmit={(v) => {
+            setField(undefined);
+            add.run(
+              (onProgress) => startAddFamily(v.trim(), expr, size, cataloguePath(undefined, props.env, props.cwd), onProgress),
+              (r) => props.notify(r.text),
+            );
+          }}
+          onCancel={() => setField(undefined)}
+        />
+      ) : null}
       {field === 'expr' ? (
         <LineInput
           label="sym"
