@@ -16,7 +16,10 @@ import { variantsOf } from './variants.js';
 
 export type { SearchMatch, SearchOutcome, SearchTried } from './searchTypes.js';
 
-const COMBINE_COST: Record<MatchCombine, number> = { single: 0, shape: 0, joint: 1, fundamental: 1, ifundamental: 1.5, sum: 2, slice: 1.5 };
+const COMBINE_COST: Record<MatchCombine, number> = {
+  single: 0, shape: 0, joint: 1, fundamental: 1, ifundamental: 1.5, content: 1, sum: 2, slice: 1.5,
+  'shape-t0': 1.5, 'fundamental-t0': 1.5, 'ifundamental-t0': 2, 'content-t0': 1.5,
+};
 
 function kindsFor(kind: SeriesKind): SeriesKind[] {
   return kind === 'schur' ? ['schur'] : kind === 'multi' ? ['multi'] : ['q', 'qt'];
@@ -85,7 +88,7 @@ export function searchCatalogue(cat: Catalogue, target: Target): SearchOutcome {
       families: counts.families,
       statistics: counts.statistics,
       variants: variants.map((v) => v.id),
-      combines: target.kind === 'schur' ? ['shape', 'fundamental', 'ifundamental'] : ['single', 'sum', 'joint', ...(target.entries.some((e) => e.k !== undefined) ? ['slice'] : [])],
+      combines: target.kind === 'schur' ? ['shape', 'fundamental', 'ifundamental', 'content', 'shape-t0', 'fundamental-t0', 'ifundamental-t0', 'content-t0'] : ['single', 'sum', 'joint', ...(target.entries.some((e) => e.k !== undefined) ? ['slice'] : [])],
     },
   };
 }

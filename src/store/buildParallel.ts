@@ -25,7 +25,11 @@ export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & {
   for (const unit of todo) {
     const shards = unit.objects >= (o.shardMin ?? SHARD_MIN) && unit.family.visit ? o.workers : 1;
     for (let index = 0; index < shards; index++) {
-      jobs.push({ unit, job: { family: unit.family.id, params: unit.params, ...(shards > 1 ? { shard: { index, count: shards } } : {}) } });
+      const job: TallyJob = {
+        family: unit.family.id, n: unit.n, parts: unit.parts, stats: unit.stats.map((s) => s.id), checks: unit.checks.map((c) => [c.stat.id, c.sameAs] as const),
+        ...(shards > 1 ? { shard: { index, count: shards } } : {}),
+      };
+      jobs.push({ unit, job });
     }
   }
   const pending = new Map<Unit, { left: number; raw?: RawTally; started: number }>();
@@ -38,7 +42,7 @@ export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & {
   let rows = 0;
   o.progress.start(`catalogue build (n ≤ ${o.nMax}, ${o.workers} workers)`, Number(total));
   const finishUnit = (unit: Unit, raw: RawTally, started: number): void => {
-    const r = rowsOfTally(unit.family, unit.params, unit.stats, raw);
+    const r = rowsOfTally(unit, unit.stats, raw);
     const seconds = (Date.now() - started) / 1000;
     cat.writeUnit(unit.family.id, unit.params, r.objects, seconds, r.rows,
       unitProvenance(unit, `exhaustive enumeration, exact integer tallies (${o.workers} worker threads)`, seconds), statsSignature(unit));
