@@ -188,8 +188,8 @@ export class Catalogue {
       this.db.transaction(() => {
         stale.run(family, paramsKey(params)); // rows of an earlier build of this unit
         for (const r of rows) {
-          // each row names its own inputs; the unit row keeps the full list of statistics
-          const rowProv = JSON.stringify({ ...prov, request: `${r.family} ${paramsKey(r.params)} ${r.statistics.join(',')} ${r.combine}${r.transform ? ` via ${r.transform}` : ''}` });
+          // each row names its own inputs; the unit row keeps the notes and the full list of statistics
+          const rowProv = JSON.stringify({ ...prov, request: `${r.family} ${paramsKey(r.params)} ${r.statistics.join(',')} ${r.combine}${r.transform ? ` via ${r.transform}` : ''}`, notes: [] });
           ins.run(r.family, paramsKey(r.params), r.n, r.k ?? null, r.statistics.join(','), r.combine, r.transform, r.series.kind,
             toJsonText(seriesToJson(r.series)), seriesAtOne(r.series).toString(), seriesHash(r.series), rowProv);
         }
