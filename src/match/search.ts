@@ -101,7 +101,9 @@ function verify(cat: Catalogue, row: StoredRow, m: Mapping, entries: readonly Ta
   for (const e of entries) {
     const place: Place = { n: e.n, ...(e.k === undefined ? {} : { k: e.k }) };
     const params = applyMapping(m, e);
-    if (params['n']! < 1 || (params['k'] !== undefined && (params['k'] < 1 || params['k'] > params['n']!))) {
+    const size = e.n + m.dn;
+    const k = params?.['k'];
+    if (!params || size < 1 || (typeof k === 'number' && (k < 1 || k > size))) {
       unchecked.push(place);
       continue;
     }
