@@ -44,14 +44,8 @@ export function planUnits(nMax: number, only?: readonly string[]): Plan {
     }
   }
   const units: Unit[] = [];
-  const skipped: { family: string; why: string }[] = [];
-  for (const family of FAMILIES) {
-    if (only && !only.includes(family.id)) continue;
-    const why = leftOut(family);
-    if (why) {
-      skipped.push({ family: family.id, why });
-      continue;
-    }
+  const { planned, skipped } = coverage(only);
+  for (const family of planned) {
     const choice = statChoice(family);
     const stats = orderStats(choice.kept);
     const checks = choice.dropped.map((d) => ({ stat: d.stat, sameAs: stats.findIndex((s) => s.id === d.sameAs) }));
@@ -64,6 +58,19 @@ export function planUnits(nMax: number, only?: readonly string[]): Plan {
     }
   }
   return { units, skipped };
+}
+
+/** The families a build fills and those it leaves out, with the reason (cheap: no statistic is computed). */
+export function coverage(only?: readonly string[]): { planned: Family<unknown>[]; skipped: { family: string; why: string }[] } {
+  const planned: Family<unknown>[] = [];
+  const skipped: { family: string; why: string }[] = [];
+  for (const family of FAMILIES) {
+    if (only && !only.includes(family.id)) continue;
+    const why = leftOut(family);
+    if (why) skipped.push({ family: family.id, why });
+    else planned.push(family);
+  }
+  return { planned, skipped };
 }
 
 /** Why a family is not catalogued, or undefined. */
