@@ -66,7 +66,7 @@ export function searchCatalogue(cat: Catalogue, target: Target): SearchOutcome {
           transform: row.transform,
           variant: v.id,
           mapping: m.text,
-          formula: candidateFormula(row.family, Object.keys(row.params).sort((a, b) => (a === 'n' ? -1 : b === 'n' ? 1 : a.localeCompare(b))).join(','), row.statistics, row.combine, v.id),
+          formula: candidateFormula(row.family, m.lists ? [...m.lists.map((l) => `${l.name} ${l.id}`), ...(m.k ? ['k'] : [])].join(', ') : Object.keys(row.params).sort((a, b) => (a === 'n' ? -1 : b === 'n' ? 1 : a.localeCompare(b))).join(','), row.statistics, row.combine, v.id),
           verified: rangeText(found.verified),
           verifiedEntries: found.verified,
           unchecked: found.unchecked,
