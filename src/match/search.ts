@@ -10,7 +10,7 @@ import { seriesAtOne, seriesEquals, type SeriesKind } from '../series/series.js'
 import { rangeText, type Target, type TargetEntry } from '../series/target.js';
 import { candidateFormula } from './candidateFormula.js';
 import { applyMapping, mappingCost, mappingsFor, type Mapping } from './parameterMapping.js';
-import { sliceMatches } from './sliceSearch.js';
+import { jointTables, sliceMatches } from './sliceSearch.js';
 import type { SearchMatch, SearchOutcome, SearchTried } from './searchTypes.js';
 import { variantsOf } from './variants.js';
 
@@ -43,10 +43,11 @@ export function searchCatalogue(cat: Catalogue, target: Target): SearchOutcome {
   const counts = anchor0 ? cat.candidateCounts(kinds, anchor0.n, seriesAtOne(anchor0.series)) : { groups: 0, sameCount: 0, families: [], statistics: [] };
   const matches = new Map<string, SearchMatch>();
   const exactGroups = new Set<string>();
+  const tables = jointTables(cat);
   for (const v of variants) {
     const anchor = anchor0 && v.target.entries.find((e) => e.n === anchor0.n && e.k === anchor0.k);
     if (!anchor) continue;
-    for (const m of sliceMatches(cat, anchor, v.target.entries, v.id)) {
+    for (const m of sliceMatches(cat, anchor, v.target.entries, v.id, tables)) {
       const key = [m.family, m.statistics.join(','), m.combine, m.transform, m.mapping].join('|');
       if (!matches.has(key)) matches.set(key, m);
     }

@@ -16,6 +16,7 @@ import { seriesFromJson, seriesToJson } from '../series/seriesJson.js';
 import { seriesAtOne, type Series, type SeriesKind } from '../series/series.js';
 import { environmentReason, guarded } from '../core/environment-errors.js';
 import { GRADUS_APPLICATION_ID, inspectCatalogueFile, notOurs } from './catalogue-file.js';
+import { candidateSummary, dropSummaries } from './candidateSummary.js';
 import { MIGRATIONS, SCHEMA_VERSION } from './migrations.js';
 import { seriesHash } from './seriesHash.js';
 
@@ -187,6 +188,7 @@ export class Catalogue {
       const provText = JSON.stringify(prov);
       this.db.transaction(() => {
         stale.run(family, paramsKey(params)); // rows of an earlier build of this unit
+        dropSummaries(this.db);
         for (const r of rows) {
           // each row names its own inputs; the unit row keeps the notes and the full list of statistics
           const rowProv = JSON.stringify({ ...prov, request: `${r.family} ${paramsKey(r.params)} ${r.statistics.join(',')} ${r.combine}${r.transform ? ` via ${r.transform}` : ''}`, notes: [] });
@@ -235,6 +237,18 @@ export class Catalogue {
 
   private findStatement: Database.Statement | undefined;
 
+  /**
+   * The joint tables of families indexed by n alone, at size n, as stored text (not decoded:
+   * a slice search reads thousands; the rows it keeps are read again through `find`, which
+   * checks them against their hashes).
+   */
+  jointTextsAt(n: number): { family: string; statistics: string; transform: string; series: string }[] {
+    // family by family, so that SQLite seeks the place index (family, n, k) instead of reading every row
+    const families = this.db.prepare('SELECT DISTINCT family FROM units WHERE n = ? AND k IS NULL').pluck().all(n) as string[];
+    const at = this.db.prepare("SELECT family, statistics, transform, series FROM distributions WHERE family = ? AND n = ? AND k IS NULL AND combine = 'joint' AND params = ?");
+    return this.read(() => families.flatMap((f) => at.all(f, n, paramsKey({ n })) as { family: string; statistics: string; transform: string; series: string }[]));
+  }
+
   /** Joint distributions of families indexed by n alone, at size n (for targets in n and k). */
   jointRowsAt(n: number): StoredRow[] {
     return this.read(() => (this.db.prepare("SELECT * FROM distributions WHERE combine = 'joint' AND n = ? AND k IS NULL").all(n) as RawRow[]).map((r) => decode(r, this.path)));
@@ -253,13 +267,8 @@ export class Catalogue {
   }
 
   private countCandidates(kinds: readonly SeriesKind[], n: number, atOne: bigint): { groups: number; sameCount: number; families: string[]; statistics: string[] } {
-    const where = `kind IN (${kinds.map(() => '?').join(',')}) AND n = ?`;
-    const args: unknown[] = [...kinds, n];
-    const groups = (this.db.prepare(`SELECT COUNT(*) AS c FROM (SELECT DISTINCT family, statistics, combine, transform FROM distributions WHERE ${where})`).get(...args) as { c: number }).c;
-    const sameCount = (this.db.prepare(`SELECT COUNT(*) AS c FROM (SELECT DISTINCT family, statistics, combine, transform FROM distributions WHERE ${where} AND at_one = ?)`).get(...args, atOne.toString()) as { c: number }).c;
-    const families = (this.db.prepare(`SELECT DISTINCT family FROM distributions WHERE ${where} ORDER BY family`).all(...args) as { family: string }[]).map((r) => r.family);
-    const statistics = (this.db.prepare(`SELECT DISTINCT statistics FROM distributions WHERE ${where} AND combine IN ('single', 'shape') ORDER BY statistics`).all(...args) as { statistics: string }[]).map((r) => r.statistics);
-    return { groups, sameCount, families, statistics };
+    const s = candidateSummary(this.db, kinds, n, this.writable);
+    return { groups: s.groups, sameCount: s.byCount[atOne.toString()] ?? 0, families: [...s.families], statistics: [...s.statistics] };
   }
 
   private maxNCache: number | undefined;
