@@ -6,6 +6,7 @@
  * decorations d = n − k (0..n−1). A double rise is a row r ≥ 2 whose north step follows
  * the north step of row r−1. Order: Dyck paths (lexicographic), then the decorated sets
  * (lexicographic), then the labellings.
+ * Fast path: `visit` reuses the label buffer; shards take whole Dyck paths, balanced by their weights.
  */
 import { binomial } from '../src/core/integers.js';
 import { InputError } from '../src/core/errors.js';
@@ -14,6 +15,7 @@ import { labellings } from './parking-functions.js';
 import { drawDyckPath, firstDyckPath, nextDyckPath } from './support/dyck.js';
 import { multinomial } from './support/numbers.js';
 import { intParam, optIntParam, validateBySpec } from './support/params.js';
+import { shardParts } from './support/shards.js';
 import { labelRuns, northRuns, parkingReadingWord } from './support/parking.js';
 import { shuffleInPlace, weightedIndex } from './support/random.js';
 import type { DecoratedLabelledDyckPath, DyckPath } from './types.js';
@@ -90,6 +92,20 @@ function weightedPaths(n: number, d: number): { paths: (0 | 1)[][]; weights: big
   return hit;
 }
 
+/** Which shard takes each weighted path: largest first, each to the least loaded shard (the same plan everywhere). */
+function owners(weights: readonly bigint[], count: number): Uint16Array {
+  const order = weights.map((_, i) => i).sort((a, b) => (weights[b]! > weights[a]! ? 1 : weights[b]! < weights[a]! ? -1 : a - b));
+  const load = new Array<bigint>(count).fill(0n);
+  const owner = new Uint16Array(weights.length);
+  for (const i of order) {
+    let target = 0;
+    for (let s = 1; s < count; s++) if (load[s]! < load[target]!) target = s;
+    load[target]! += weights[i]!;
+    owner[i] = target;
+  }
+  return owner;
+}
+
 export const decoratedDyckPaths: Family<DecoratedLabelledDyckPath> = {
   id: ID,
   description: 'labelled Dyck paths with n − k decorated double rises (rise version of the Delta theorem)',
@@ -105,6 +121,22 @@ export const decoratedDyckPaths: Family<DecoratedLabelledDyckPath> = {
         for (const labels of labellings(frozen)) yield { path: frozen, labels: labels.slice(), decorated };
       }
     } while (nextDyckPath(path));
+  },
+  visit(params, f, shard) {
+    const d = decorations(params);
+    const [index, count] = shardParts(shard);
+    const { paths, weights } = weightedPaths(intParam(params, 'n'), d);
+    const owner = count === 1 ? undefined : owners(weights, count);
+    paths.forEach((path, j) => {
+      if (owner && owner[j] !== index) return;
+      for (const decorated of subsetsOfSize(doubleRises(path), d)) {
+        const obj = { path, labels: [] as number[], decorated };
+        for (const labels of labellings(path)) {
+          obj.labels = labels;
+          f(obj);
+        }
+      }
+    });
   },
   count(params) {
     const d = decorations(params);

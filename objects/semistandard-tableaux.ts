@@ -125,6 +125,8 @@ export const semistandardTableaux: Family<Tableau> = {
   },
   key: (t) => t.map((r) => r.join(',')).join('/'),
   readingWord: rowReadingWord,
+  // the shape, for Σ q^stat s_shape over the tableaux of one content (Hall–Littlewood by charge)
+  shape: (t) => t.map((r) => r.length),
   testParams: [
     { shape: [], content: [] },
     { shape: [3, 2], content: [2, 2, 1] },

@@ -83,7 +83,7 @@ function pieceLabel(p: TallyPiece): string {
   return `${p.family} ${Object.entries(p.params).map(([k, v]) => `${k}=${v}`).join(' ')}${p.shard ? ` [${p.shard.index + 1}/${p.shard.count}]` : ''}`;
 }
 
-const unitKey = (family: string, params: Readonly<Record<string, number>>): string => `${family} ${JSON.stringify(Object.entries(params).sort())}`;
+export const unitKey = (family: string, params: Readonly<Record<string, number | readonly number[] | undefined>>): string => `${family} ${JSON.stringify(Object.entries(params).sort())}`;
 
 /**
  * Write the units of a finished plan into the catalogue, reading the shards one at a time: a
@@ -121,7 +121,7 @@ export function mergeCatalogue(m: Manifest, shardIds: readonly number[], read: (
         const raw = [...w.raws.keys()].sort((a, b) => a - b).map((i) => w.raws.get(i)!).reduce((a, b) => mergeRaw(a, b));
         w.raws.clear();
         if (BigInt(raw.objects) !== BigInt(w.planned.objects)) throw new InputError(`the pieces of ${k} hold ${raw.objects} objects, the plan counted ${w.planned.objects}`, 'folder');
-        const r = rowsOfTally(w.unit.family, w.unit.params, w.unit.stats, raw);
+        const r = rowsOfTally(w.unit, w.unit.stats, raw);
         const how = `exhaustive enumeration, exact integer tallies (cluster plan ${m.id}, ${w.planned.pieces} piece${w.planned.pieces > 1 ? 's' : ''})`;
         cat.writeUnit(w.unit.family.id, w.unit.params, r.objects, w.seconds, r.rows, unitProvenance(w.unit, how, w.seconds), statsSignature(w.unit));
         rows += r.rows.length;

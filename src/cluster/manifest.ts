@@ -16,7 +16,8 @@ export const MAX_SHARDS = 1000;
 
 const INT = z.number().int().min(0).max(2 ** 53);
 const PRIME = z.number().int().min(2).max(2 ** 26);
-const PARAMS = z.record(z.string(), z.number().int());
+// a parameter is a number, or a partition (a shape or a content) as its parts
+const PARAMS = z.record(z.string(), z.union([z.number().int(), z.array(z.number().int().min(0)).max(64).readonly()]));
 
 export const CODE = z.object({ gradus: z.string().max(100), source: z.string().regex(/^[0-9a-f]{8,64}$/) });
 

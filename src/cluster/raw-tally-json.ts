@@ -1,74 +1,53 @@
 /**
  * A raw tally (the counts of one catalogue unit or shard of it, before they become
- * distributions) as plain JSON and back: dense counters as flat [index, count, …] lists of
- * their non-zero entries, maps as flat [key, count, …] lists. Counts stay below 2^53, so JSON
- * numbers carry them exactly.
+ * distributions) as plain JSON and back: each counter keeps its dense bounds, its non-zero
+ * dense cells as a flat [index, count, …] list and its cells outside the bounds as a flat
+ * [key, count, …] list. Counts stay below 2^53, so JSON numbers carry them exactly.
  */
 import { z } from 'zod';
-import type { RawTally, Tally } from '../store/rawTally.js';
+import type { Counter } from '../store/counter.js';
+import type { RawTally, SymKind } from '../store/rawTally.js';
 
-const FLAT = z.array(z.number().int().min(0).max(2 ** 53)).refine((a) => a.length % 2 === 0, 'a flat list of pairs has an even length');
-const NESTED = z.record(z.string().max(200), FLAT);
+const COUNT = z.number().int().min(0).max(2 ** 53);
+const FLAT = z.array(COUNT).refine((a) => a.length % 2 === 0, 'a flat list of pairs has an even length');
+const BOUND = z.number().int().min(0).max(2 ** 20);
+const COUNTER = z.object({ A: BOUND, B: BOUND, M: BOUND, cells: FLAT, extra: FLAT }).refine((c) => c.A * c.B * c.M <= 2 ** 22, 'a dense table larger than the build makes');
 
 export const RAW_TALLY_JSON = z.object({
-  objects: z.number().int().min(0).max(2 ** 53),
-  V: z.number().int().min(1).max(1_000_000),
-  singleLength: z.number().int().min(0).max(2 ** 31),
-  pairLength: z.number().int().min(0).max(2 ** 31),
-  single: FLAT,
-  pair: FLAT,
-  overflow: NESTED,
-  shapeSingle: z.array(NESTED),
-  shapePair: z.record(z.string().max(40), NESTED),
-  wordSingle: z.array(z.array(FLAT)),
-  wordPair: z.array(NESTED),
+  objects: COUNT,
+  single: z.array(COUNTER).max(10_000),
+  pair: z.array(COUNTER).max(1_000_000),
+  sym: z.array(z.object({ kind: z.enum(['shape', 'fundamental', 'ifundamental', 'content']), single: z.array(COUNTER).max(10_000), pair: z.array(COUNTER).max(1_000_000) })).max(8),
 });
 export type RawTallyJson = z.infer<typeof RAW_TALLY_JSON>;
+type CounterJson = z.infer<typeof COUNTER>;
 
-function denseToFlat(a: Float64Array): number[] {
-  const out: number[] = [];
-  for (let i = 0; i < a.length; i++) if (a[i]) out.push(i, a[i]!);
-  return out;
+function counterToJson(c: Counter): CounterJson {
+  const cells: number[] = [];
+  for (let i = 0; i < c.data.length; i++) if (c.data[i]) cells.push(i, c.data[i]!);
+  const extra: number[] = [];
+  for (const [k, v] of c.extra) if (v) extra.push(k, v);
+  return { A: c.A, B: c.B, M: c.M, cells, extra };
 }
 
-function flatToDense(flat: readonly number[], length: number): Float64Array {
-  const a = new Float64Array(length);
-  for (let i = 0; i < flat.length; i += 2) {
-    const at = flat[i]!;
-    if (at >= length) throw new RangeError(`a counter index ${at} beyond the length ${length}`);
-    a[at] = flat[i + 1]!;
+function counterFromJson(j: CounterJson): Counter {
+  const data = new Float64Array(j.A * j.B * j.M);
+  for (let i = 0; i < j.cells.length; i += 2) {
+    const at = j.cells[i]!;
+    if (at >= data.length) throw new RangeError(`a counter index ${at} beyond the length ${data.length}`);
+    data[at] = j.cells[i + 1]!;
   }
-  return a;
+  const extra = new Map<number, number>();
+  for (let i = 0; i < j.extra.length; i += 2) extra.set(j.extra[i]!, j.extra[i + 1]!);
+  return { A: j.A, B: j.B, M: j.M, data, extra };
 }
-
-function tallyToFlat(t: Tally): number[] {
-  const out: number[] = [];
-  for (const [k, c] of t) out.push(k, c);
-  return out;
-}
-
-function flatToTally(flat: readonly number[]): Tally {
-  const t: Tally = new Map();
-  for (let i = 0; i < flat.length; i += 2) t.set(flat[i]!, flat[i + 1]!);
-  return t;
-}
-
-const nestedToJson = (m: Map<string, Tally>): Record<string, number[]> => Object.fromEntries([...m].map(([k, t]) => [k, tallyToFlat(t)]));
-const nestedFromJson = (o: Record<string, number[]>): Map<string, Tally> => new Map(Object.entries(o).map(([k, f]) => [k, flatToTally(f)]));
 
 export function rawTallyToJson(raw: RawTally): RawTallyJson {
   return {
     objects: raw.objects,
-    V: raw.V,
-    singleLength: raw.singleDense.length,
-    pairLength: raw.pairDense.length,
-    single: denseToFlat(raw.singleDense),
-    pair: denseToFlat(raw.pairDense),
-    overflow: nestedToJson(raw.overflow),
-    shapeSingle: raw.shapeSingle.map(nestedToJson),
-    shapePair: Object.fromEntries([...raw.shapePair].map(([k, m]) => [k, nestedToJson(m)])),
-    wordSingle: raw.wordSingle.map((per) => per.map(tallyToFlat)),
-    wordPair: raw.wordPair.map(nestedToJson),
+    single: raw.single.map(counterToJson),
+    pair: raw.pair.map(counterToJson),
+    sym: raw.sym.map((s) => ({ kind: s.kind, single: s.single.map(counterToJson), pair: s.pair.map(counterToJson) })),
   };
 }
 
@@ -76,13 +55,8 @@ export function rawTallyToJson(raw: RawTally): RawTallyJson {
 export function rawTallyFromJson(j: RawTallyJson): RawTally {
   return {
     objects: j.objects,
-    V: j.V,
-    singleDense: flatToDense(j.single, j.singleLength),
-    pairDense: flatToDense(j.pair, j.pairLength),
-    overflow: nestedFromJson(j.overflow),
-    shapeSingle: j.shapeSingle.map(nestedFromJson),
-    shapePair: new Map(Object.entries(j.shapePair).map(([k, o]) => [k, nestedFromJson(o)])),
-    wordSingle: j.wordSingle.map((per) => per.map(flatToTally)),
-    wordPair: j.wordPair.map(nestedFromJson),
+    single: j.single.map(counterFromJson),
+    pair: j.pair.map(counterFromJson),
+    sym: j.sym.map((s) => ({ kind: s.kind as SymKind, single: s.single.map(counterFromJson), pair: s.pair.map(counterFromJson) })),
   };
 }

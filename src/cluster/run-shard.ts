@@ -7,7 +7,9 @@ import { InputError } from '../core/errors.js';
 import { runTask } from '../pool/pool.js';
 import type { ModuleCell } from '../modules/module-cell.js';
 import type { RawTally } from '../store/rawTally.js';
-import type { TallyJob } from '../store/tally-task.js';
+import { planUnits } from '../store/planUnits.js';
+import { tallyJobOf, type TallyJob } from '../store/tally-task.js';
+import { unitKey } from './catalogue-split.js';
 import { codeVersion } from './code-version.js';
 import type { Manifest, ShardWork } from './manifest.js';
 import { youngTaskInputs } from './module-split.js';
@@ -56,11 +58,16 @@ async function compute(m: Manifest, work: ShardWork, o: ShardRunOptions): Promis
     return r;
   };
   if (work.type === 'tally') {
+    if (!m.build) throw new InputError('a tally shard belongs to a catalogue plan, and this plan names no build', 'folder');
+    // the pieces name units by family and parameters; the units' statistics and parts come from the plan of this code
+    const units = new Map(planUnits(m.build.nMax, m.build.families).units.map((u) => [unitKey(u.family.id, u.params), u]));
     const pieces = await limited(work.pieces, threads, async (p) => {
       const t0 = performance.now();
-      const job: TallyJob = { family: p.family, params: p.params, ...(p.shard ? { shard: p.shard } : {}) };
+      const unit = units.get(unitKey(p.family, p.params));
+      if (!unit) throw new InputError(`the plan's piece ${p.family} ${JSON.stringify(p.params)} is not a unit of this code's catalogue plan`, 'folder');
+      const job: TallyJob = tallyJobOf(unit, p.shard);
       const raw = await timed(`${p.family} ${JSON.stringify(p.params)}${p.shard ? ` piece ${p.shard.index + 1}/${p.shard.count}` : ''}`, () => runTask<RawTally>(TALLY_TASK, 'tallyJob', job, hooks));
-      return { ...job, seconds: (performance.now() - t0) / 1000, raw: rawTallyToJson(raw) };
+      return { family: p.family, params: p.params, ...(p.shard ? { shard: p.shard } : {}), seconds: (performance.now() - t0) / 1000, raw: rawTallyToJson(raw) };
     });
     return { type: 'tally', pieces };
   }

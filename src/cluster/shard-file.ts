@@ -25,7 +25,8 @@ const SHARD_MAX_BYTES = 512 * 1024 * 1024;
 const COUNT = z.number().int().min(0).max(2 ** 53);
 const PRIME = z.number().int().min(2).max(2 ** 26);
 const CELL = z.object({ degree: z.tuple([COUNT, COUNT, COUNT]), dim: COUNT, multiplicities: z.array(z.number().int()).optional() });
-const PARAMS = z.record(z.string(), z.number().int());
+// a parameter is a number, or a partition (a shape or a content) as its parts
+const PARAMS = z.record(z.string(), z.union([z.number().int(), z.array(z.number().int().min(0)).max(64).readonly()]));
 
 export const SHARD_RESULT = z.discriminatedUnion('type', [
   z.object({ type: z.literal('young'), items: z.array(z.object({ task: COUNT, primes: z.array(PRIME), ranks: z.array(z.array(COUNT)) })) }),

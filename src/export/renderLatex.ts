@@ -22,10 +22,17 @@ export function matchLatex(m: SearchMatch): string {
     return `\\sum_{x \\in ${latexId(m.family)}(n),\\ ${b} = k${shift}} q^{${a}}`;
   }
   const [qv, tv] = m.variant.includes('q-t-swapped') ? ['t', 'q'] : ['q', 't'];
-  const weight = m.combine === 'sum' ? `${qv}^{${a} + ${b}}` : b === undefined ? `${qv}^{${a}}` : `${qv}^{${a}} ${tv}^{${b}}`;
-  const sym = m.combine === 'shape' ? ' s_{\\lambda(x)}' : m.combine === 'fundamental' ? ' F_{\\mathrm{Des}(w(x))}' : m.combine === 'ifundamental' ? ' F_{\\mathrm{iDes}(w(x))}' : '';
-  const params = m.mapping.includes('k') ? 'n,k' : 'n';
-  let body = `\\sum_{x \\in ${latexId(m.family)}(${params})} ${weight}${sym}`;
+  const sliced = m.combine.endsWith('-t0'); // Frobenius-level pair at t = 0: the objects with b = 0
+  const form = sliced ? m.combine.slice(0, -3) : m.combine;
+  const weight = m.combine === 'sum' ? `${qv}^{${a} + ${b}}` : b === undefined || sliced ? `${qv}^{${a}}` : `${qv}^{${a}} ${tv}^{${b}}`;
+  const sym = form === 'shape' ? ' s_{\\lambda(x)}' : form === 'fundamental' ? ' F_{\\mathrm{Des}(w(x))}' : form === 'ifundamental' ? ' F_{\\mathrm{iDes}(w(x))}' : '';
+  // a shape or content following n by a template ("shape = (n−1,1)") is written out
+  const lists = m.mapping.split(', ').filter((x) => / = \(/.test(x)).map((x) => `\\mbox{${latexText(x)}}`);
+  const params = lists.length ? lists.join(',') : m.mapping.includes('k') ? 'n,k' : 'n';
+  const where = sliced ? `,\\ ${b} = 0` : '';
+  let body = form === 'content'
+    ? `\\sum_{\\mu \\vdash n} m_\\mu \\sum_{x \\in ${latexId(m.family)}(\\mu${params.includes('k') ? ',k' : ''})${where}} ${weight}`
+    : `\\sum_{x \\in ${latexId(m.family)}(${params})${where}} ${weight}${sym}`;
   if (m.variant.includes('q-reversed')) body = `\\mathrm{rev}_q\\left(${body}\\right)`;
   if (m.variant.startsWith('omega')) body = `\\omega\\left(${body}\\right)`;
   return body;

@@ -10,6 +10,8 @@ export function candidateFormula(family: string, params: string, statistics: rea
   const [a, b] = statistics.map(statText);
   const swap = variant.includes('q-t-swapped');
   const [qv, tv] = swap ? ['t', 'q'] : ['q', 't'];
+  const sliced = combine.endsWith('-t0');
+  const form = sliced ? combine.slice(0, -3) : combine;
   let weight: string;
   switch (combine) {
     case 'sum':
@@ -19,10 +21,13 @@ export function candidateFormula(family: string, params: string, statistics: rea
       weight = `${qv}^{${a}} ${tv}^{${b}}`;
       break;
     default:
-      weight = b === undefined ? `${qv}^{${a}}` : `${qv}^{${a}} ${tv}^{${b}}`;
+      weight = b === undefined || sliced ? `${qv}^{${a}}` : `${qv}^{${a}} ${tv}^{${b}}`;
   }
-  const sym = combine === 'shape' ? ' s_{shape(x)}' : combine === 'fundamental' ? ' F_{Des(word(x))}' : combine === 'ifundamental' ? ' F_{iDes(word(x))}' : '';
-  let body = `Σ_{x ∈ ${family}(${params})} ${weight}${sym}`;
+  const sym = form === 'shape' ? ' s_{shape(x)}' : form === 'fundamental' ? ' F_{Des(word(x))}' : form === 'ifundamental' ? ' F_{iDes(word(x))}' : '';
+  const where = sliced ? `, ${b} = 0` : '';
+  let body = form === 'content'
+    ? `Σ_{μ ⊢ n} m_μ Σ_{x ∈ ${family}(μ${params.includes('k') ? ', k' : ''})${where}} ${weight}`
+    : `Σ_{x ∈ ${family}(${params})${where}} ${weight}${sym}`;
   if (variant.includes('q-reversed')) body = `rev_q(${body})`;
   if (variant.startsWith('omega')) body = `ω(${body})`;
   return body;

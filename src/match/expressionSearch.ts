@@ -46,8 +46,10 @@ function placeMaps(f: ExpressionFamily, anchor: Place, v: ExpressionValue, oneSi
     mapping: m,
     placeOf: (e) => {
       const p = applyMapping(m, e);
-      const n = p['n']!;
-      const k = p['k'];
+      const n = p?.['n'];
+      const k = p?.['k'];
+      // expression families are indexed by numbers; a mapping to a partition does not apply
+      if (typeof n !== 'number' || (k !== undefined && typeof k !== 'number')) return undefined;
       if (n < 1 || (f.index === 'n,k' && (k === undefined || k < f.kMin || k > n))) return undefined;
       return { n, ...(k === undefined ? {} : { k }) };
     },

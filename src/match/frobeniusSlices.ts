@@ -60,7 +60,9 @@ export function frobeniusSliceMatches(cat: Catalogue, index: SliceIndex, anchor:
       for (const e of entries) {
         const place = { n: e.n, ...(e.k === undefined ? {} : { k: e.k }) };
         const params = applyMapping(m, e);
-        const inRange = params['n']! >= 1 && (params['k'] === undefined || (params['k'] >= 1 && params['k'] <= params['n']!));
+        const size = e.n + m.dn;
+        const k = params?.['k'];
+        const inRange = params !== undefined && size >= 1 && !(typeof k === 'number' && (k < 1 || k > size));
         const r = inRange ? cat.find(row.family, params, row.statistics.join(','), row.combine, row.transform) : undefined;
         if (!r) {
           if (!isZeroSeries(e.series)) unchecked.push(place);

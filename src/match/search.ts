@@ -14,14 +14,17 @@ import { chooseAnchor as expressionAnchor, searchExpressions } from './expressio
 import { frobeniusSliceIndex, frobeniusSliceMatches } from './frobeniusSlices.js';
 import { markedReading } from './markedReading.js';
 import { applyMapping, mappingCost, mappingsFor, type Mapping } from './parameterMapping.js';
-import { sliceMatches } from './sliceSearch.js';
+import { jointTables, sliceMatches } from './sliceSearch.js';
 import type { ExpressionMatch, SearchMatch, SearchOutcome, SearchTried } from './searchTypes.js';
 import { variantsOf } from './variants.js';
 import { isZeroSeries } from './zeroEntries.js';
 
 export type { ExpressionMatch, SearchMatch, SearchOutcome, SearchTried } from './searchTypes.js';
 
-const COMBINE_COST: Record<MatchCombine, number> = { single: 0, shape: 0, joint: 1, fundamental: 1, ifundamental: 1.5, sum: 2, slice: 1.5 };
+const COMBINE_COST: Record<MatchCombine, number> = {
+  single: 0, shape: 0, joint: 1, fundamental: 1, ifundamental: 1.5, content: 1, sum: 2, slice: 1.5,
+  'shape-t0': 1.5, 'fundamental-t0': 1.5, 'ifundamental-t0': 2, 'content-t0': 1.5,
+};
 /** A match of the marked reading costs this much more than one of the target as it is. */
 const MARKED_COST = 1;
 
@@ -68,10 +71,11 @@ function searchOnce(cat: Catalogue, target: Target): SearchOutcome {
     const key = [m.family, m.statistics.join(','), m.combine, m.transform, m.mapping].join('|');
     if (!matches.has(key)) matches.set(key, target.marked ? { ...m, marker: target.marked } : m);
   };
+  const tables = jointTables(cat);
   for (const v of variants) {
     const anchor = anchor0 && v.target.entries.find((e) => e.n === anchor0.n && e.k === anchor0.k);
     if (!anchor) continue;
-    for (const m of sliceMatches(cat, anchor, v.target.entries, v.id)) keep(m);
+    for (const m of sliceMatches(cat, anchor, v.target.entries, v.id, tables)) keep(m);
     if (slices) for (const m of frobeniusSliceMatches(cat, slices, anchor, v.target.entries, v.id)) keep(m);
     const rows = cat.byHash(seriesHash(anchor.series)).filter((r) => seriesEquals(r.series, anchor.series));
     for (const r of rows) exactGroups.add([r.family, r.statistics.join(','), r.combine, r.transform].join('|'));
@@ -89,7 +93,7 @@ function searchOnce(cat: Catalogue, target: Target): SearchOutcome {
           transform: row.transform,
           variant: v.id,
           mapping: m.text,
-          formula: candidateFormula(row.family, Object.keys(row.params).sort((a, b) => (a === 'n' ? -1 : b === 'n' ? 1 : a.localeCompare(b))).join(','), row.statistics, row.combine, v.id),
+          formula: candidateFormula(row.family, m.lists ? [...m.lists.map((l) => `${l.name} ${l.id}`), ...(m.k ? ['k'] : [])].join(', ') : Object.keys(row.params).sort((a, b) => (a === 'n' ? -1 : b === 'n' ? 1 : a.localeCompare(b))).join(','), row.statistics, row.combine, v.id),
           verified: rangeText(found.verified),
           verifiedEntries: found.verified,
           unchecked: found.unchecked,
@@ -114,7 +118,7 @@ function searchOnce(cat: Catalogue, target: Target): SearchOutcome {
       families: counts.families,
       statistics: counts.statistics,
       variants: variants.map((v) => v.id),
-      combines: target.kind === 'schur' ? ['shape', 'fundamental', 'ifundamental', 'slice at 0'] : ['single', 'sum', 'joint', ...(target.entries.some((e) => e.k !== undefined) ? ['slice'] : [])],
+      combines: target.kind === 'schur' ? ['shape', 'fundamental', 'ifundamental', 'content', 'shape-t0', 'fundamental-t0', 'ifundamental-t0', 'content-t0', 'slice at 0'] : ['single', 'sum', 'joint', ...(target.entries.some((e) => e.k !== undefined) ? ['slice'] : [])],
       expressions: { families: expr.families, maxN: expr.maxN },
     },
   };
@@ -128,7 +132,9 @@ function verify(cat: Catalogue, row: StoredRow, m: Mapping, entries: readonly Ta
   for (const e of entries) {
     const place: Place = { n: e.n, ...(e.k === undefined ? {} : { k: e.k }) };
     const params = applyMapping(m, e);
-    const inRange = params['n']! >= 1 && (params['k'] === undefined || (params['k'] >= 1 && params['k'] <= params['n']!));
+    const size = e.n + m.dn;
+    const k = params?.['k'];
+    const inRange = params !== undefined && size >= 1 && !(typeof k === 'number' && (k < 1 || k > size));
     const r = inRange ? cat.find(row.family, params, row.statistics.join(','), row.combine, row.transform) : undefined;
     if (!r) {
       // a zero entry (a slice of a marked union where nothing lives) agrees with an absent row

@@ -6,7 +6,8 @@ import { LimitError } from '../core/errors.js';
 import type { Progress } from '../core/progress.js';
 import type { Catalogue } from './catalogue.js';
 import { planUnits, statsSignature, unitProvenance, type Unit } from './planUnits.js';
-import { tallyUnit } from './tallyUnit.js';
+import { accumulate } from './rawTally.js';
+import { rowsOfTally } from './tallyUnit.js';
 
 export interface BuildOptions {
   readonly nMax: number;
@@ -47,7 +48,7 @@ export function buildCatalogue(cat: Catalogue, o: BuildOptions): BuildReport {
   o.progress.start(`catalogue build (n ≤ ${o.nMax})`, Number(total));
   for (const u of todo) {
     const t1 = Date.now();
-    const r = tallyUnit(u.family, u.params, u.stats);
+    const r = rowsOfTally(u, u.stats, accumulate({ family: u.family, n: u.n, parts: u.parts, stats: u.stats, checks: u.checks }));
     const seconds = (Date.now() - t1) / 1000;
     cat.writeUnit(u.family.id, u.params, r.objects, seconds, r.rows,
       unitProvenance(u, 'exhaustive enumeration, exact integer tallies', seconds), statsSignature(u));

@@ -11,7 +11,7 @@ import type { Catalogue } from './catalogue.js';
 import { statsSignature, unitProvenance, type Unit } from './planUnits.js';
 import { mergeRaw, type RawTally } from './rawTally.js';
 import { rowsOfTally } from './tallyUnit.js';
-import type { TallyJob } from './tally-task.js';
+import { tallyJobOf, type TallyJob } from './tally-task.js';
 
 const TASK = new URL('./tally-task.ts', import.meta.url);
 /** Units with at least this many objects are split into one shard per worker. */
@@ -25,7 +25,7 @@ export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & {
   for (const unit of todo) {
     const shards = unit.objects >= (o.shardMin ?? SHARD_MIN) && unit.family.visit ? o.workers : 1;
     for (let index = 0; index < shards; index++) {
-      jobs.push({ unit, job: { family: unit.family.id, params: unit.params, ...(shards > 1 ? { shard: { index, count: shards } } : {}) } });
+      jobs.push({ unit, job: tallyJobOf(unit, { index, count: shards }) });
     }
   }
   const pending = new Map<Unit, { left: number; raw?: RawTally; started: number }>();
@@ -38,7 +38,7 @@ export async function buildCatalogueParallel(cat: Catalogue, o: BuildOptions & {
   let rows = 0;
   o.progress.start(`catalogue build (n ≤ ${o.nMax}, ${o.workers} workers)`, Number(total));
   const finishUnit = (unit: Unit, raw: RawTally, started: number): void => {
-    const r = rowsOfTally(unit.family, unit.params, unit.stats, raw);
+    const r = rowsOfTally(unit, unit.stats, raw);
     const seconds = (Date.now() - started) / 1000;
     cat.writeUnit(unit.family.id, unit.params, r.objects, seconds, r.rows,
       unitProvenance(unit, `exhaustive enumeration, exact integer tallies (${o.workers} worker threads)`, seconds), statsSignature(unit));

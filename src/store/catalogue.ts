@@ -16,19 +16,28 @@ import { seriesFromJson, seriesToJson } from '../series/seriesJson.js';
 import { seriesAtOne, type Series, type SeriesKind } from '../series/series.js';
 import { environmentReason, guarded } from '../core/environment-errors.js';
 import { GRADUS_APPLICATION_ID, inspectCatalogueFile, notOurs } from './catalogue-file.js';
+import { candidateSummary, dropSummaries } from './candidateSummary.js';
 import { MIGRATIONS, SCHEMA_VERSION } from './migrations.js';
 import { seriesHash } from './seriesHash.js';
 
 export const REBUILD_HINT = 'gradus catalogue rebuild';
 
-/** How a distribution row was formed from its statistics. */
-export type Combine = 'single' | 'joint' | 'sum' | 'shape' | 'fundamental' | 'ifundamental';
+/** The Frobenius-level forms: Σ q^stat s_shape, F_Des(word), F_iDes(word), and Σ_μ m_μ Σ_{content μ} q^stat. */
+export type SymCombine = 'shape' | 'fundamental' | 'ifundamental' | 'content';
+/**
+ * How a distribution row was formed from its statistics; `X-t0` is the Frobenius-level form X
+ * of a pair (a, b) at t = 0: the objects with b = 0, weighted by q^a.
+ */
+export type Combine = 'single' | 'joint' | 'sum' | SymCombine | `${SymCombine}-t0`;
 /** How a match was formed: a stored combination, or a slice of a joint distribution (k = value of the second statistic). */
 export type MatchCombine = Combine | 'slice';
 
+/** The parameters of a unit: integers (n, k) or partitions (shape, content). */
+export type PlaceParams = Readonly<Record<string, number | readonly number[]>>;
+
 export interface DistributionRow {
   readonly family: string;
-  readonly params: Readonly<Record<string, number>>;
+  readonly params: PlaceParams;
   readonly n: number;
   readonly k?: number;
   readonly statistics: readonly string[];
@@ -58,7 +67,7 @@ interface RawRow {
   hash: string;
 }
 
-export function paramsKey(p: Readonly<Record<string, number>>): string {
+export function paramsKey(p: PlaceParams): string {
   return JSON.stringify(Object.fromEntries(Object.entries(p).sort(([a], [b]) => (a < b ? -1 : 1))));
 }
 
@@ -162,13 +171,13 @@ export class Catalogue {
   }
 
   /** True when the unit is stored, and (given a statistics signature) was built with the same statistics. */
-  isUnitDone(family: string, params: Readonly<Record<string, number>>, statistics?: string): boolean {
+  isUnitDone(family: string, params: PlaceParams, statistics?: string): boolean {
     const r = this.db.prepare('SELECT statistics FROM units WHERE family = ? AND params = ?').get(family, paramsKey(params)) as { statistics: string } | undefined;
     return r !== undefined && (statistics === undefined || r.statistics === statistics);
   }
 
   /** All rows of one unit (family × params) and its completion mark, in one transaction. */
-  writeUnit(family: string, params: Readonly<Record<string, number>>, objects: bigint, seconds: number, rows: readonly DistributionRow[], prov: Provenance, statistics = ''): void {
+  writeUnit(family: string, params: PlaceParams, objects: bigint, seconds: number, rows: readonly DistributionRow[], prov: Provenance, statistics = ''): void {
     this.write('store a unit', () => {
       const ins = this.db.prepare(
         `INSERT OR REPLACE INTO distributions (family, params, n, k, statistics, combine, transform, kind, series, at_one, hash, provenance)
@@ -179,13 +188,15 @@ export class Catalogue {
       const provText = JSON.stringify(prov);
       this.db.transaction(() => {
         stale.run(family, paramsKey(params)); // rows of an earlier build of this unit
+        dropSummaries(this.db);
         for (const r of rows) {
-          // each row names its own inputs; the unit row keeps the full list of statistics
-          const rowProv = JSON.stringify({ ...prov, request: `${r.family} ${paramsKey(r.params)} ${r.statistics.join(',')} ${r.combine}${r.transform ? ` via ${r.transform}` : ''}` });
+          // each row names its own inputs; the unit row keeps the notes and the full list of statistics
+          const rowProv = JSON.stringify({ ...prov, request: `${r.family} ${paramsKey(r.params)} ${r.statistics.join(',')} ${r.combine}${r.transform ? ` via ${r.transform}` : ''}`, notes: [] });
           ins.run(r.family, paramsKey(r.params), r.n, r.k ?? null, r.statistics.join(','), r.combine, r.transform, r.series.kind,
             toJsonText(seriesToJson(r.series)), seriesAtOne(r.series).toString(), seriesHash(r.series), rowProv);
         }
-        unit.run(family, paramsKey(params), params['n'] ?? 0, params['k'] ?? null, objects.toString(), seconds, provText, statistics);
+        const { n, k } = placeOf(params);
+        unit.run(family, paramsKey(params), n, k ?? null, objects.toString(), seconds, provText, statistics);
       })();
     });
   }
@@ -226,6 +237,18 @@ export class Catalogue {
 
   private findStatement: Database.Statement | undefined;
 
+  /**
+   * The joint tables of families indexed by n alone, at size n, as stored text (not decoded:
+   * a slice search reads thousands; the rows it keeps are read again through `find`, which
+   * checks them against their hashes).
+   */
+  jointTextsAt(n: number): { family: string; statistics: string; transform: string; series: string }[] {
+    // family by family, so that SQLite seeks the place index (family, n, k) instead of reading every row
+    const families = this.db.prepare('SELECT DISTINCT family FROM units WHERE n = ? AND k IS NULL').pluck().all(n) as string[];
+    const at = this.db.prepare("SELECT family, statistics, transform, series FROM distributions WHERE family = ? AND n = ? AND k IS NULL AND combine = 'joint' AND params = ?");
+    return this.read(() => families.flatMap((f) => at.all(f, n, paramsKey({ n })) as { family: string; statistics: string; transform: string; series: string }[]));
+  }
+
   /** Joint distributions of families indexed by n alone, at size n (for targets in n and k). */
   jointRowsAt(n: number): StoredRow[] {
     return this.read(() => (this.db.prepare("SELECT * FROM distributions WHERE combine = 'joint' AND n = ? AND k IS NULL").all(n) as RawRow[]).map((r) => decode(r, this.path)));
@@ -238,7 +261,7 @@ export class Catalogue {
   }
 
   /** The row of one candidate at one place, if stored. */
-  find(family: string, params: Readonly<Record<string, number>>, statistics: string, combine: string, transform: string): StoredRow | undefined {
+  find(family: string, params: PlaceParams, statistics: string, combine: string, transform: string): StoredRow | undefined {
     this.findStatement ??= this.db.prepare('SELECT * FROM distributions WHERE family = ? AND params = ? AND statistics = ? AND combine = ? AND transform = ?');
     const r = this.read(() => this.findStatement!.get(family, paramsKey(params), statistics, combine, transform) as RawRow | undefined);
     return r ? decode(r, this.path) : undefined;
@@ -250,13 +273,8 @@ export class Catalogue {
   }
 
   private countCandidates(kinds: readonly SeriesKind[], n: number, atOne: bigint): { groups: number; sameCount: number; families: string[]; statistics: string[] } {
-    const where = `kind IN (${kinds.map(() => '?').join(',')}) AND n = ?`;
-    const args: unknown[] = [...kinds, n];
-    const groups = (this.db.prepare(`SELECT COUNT(*) AS c FROM (SELECT DISTINCT family, statistics, combine, transform FROM distributions WHERE ${where})`).get(...args) as { c: number }).c;
-    const sameCount = (this.db.prepare(`SELECT COUNT(*) AS c FROM (SELECT DISTINCT family, statistics, combine, transform FROM distributions WHERE ${where} AND at_one = ?)`).get(...args, atOne.toString()) as { c: number }).c;
-    const families = (this.db.prepare(`SELECT DISTINCT family FROM distributions WHERE ${where} ORDER BY family`).all(...args) as { family: string }[]).map((r) => r.family);
-    const statistics = (this.db.prepare(`SELECT DISTINCT statistics FROM distributions WHERE ${where} AND combine IN ('single', 'shape') ORDER BY statistics`).all(...args) as { statistics: string }[]).map((r) => r.statistics);
-    return { groups, sameCount, families, statistics };
+    const s = candidateSummary(this.db, kinds, n, this.writable);
+    return { groups: s.groups, sameCount: s.byCount[atOne.toString()] ?? 0, families: [...s.families], statistics: [...s.statistics] };
   }
 
   private maxNCache: number | undefined;
@@ -334,6 +352,14 @@ export interface CatalogueInfo {
   readonly searches: number;
 }
 
+/** The size n (an integer n, else the size of the first partition) and k of a unit's parameters. */
+export function placeOf(params: PlaceParams): { n: number; k?: number } {
+  const n = params['n'];
+  const k = params['k'];
+  const list = Object.values(params).find((v): v is readonly number[] => typeof v !== 'number');
+  return { n: typeof n === 'number' ? n : (list ?? []).reduce((a, b) => a + b, 0), ...(typeof k === 'number' ? { k } : {}) };
+}
+
 function isWritable(path: string): boolean {
   try {
     accessSync(path, constants.W_OK);
@@ -380,7 +406,7 @@ function decode(r: RawRow, path: string): StoredRow {
   return {
     id: r.id,
     family: r.family,
-    params: JSON.parse(r.params) as Record<string, number>,
+    params: JSON.parse(r.params) as PlaceParams,
     n: r.n,
     ...(r.k === null ? {} : { k: r.k }),
     statistics: r.statistics.split(','),

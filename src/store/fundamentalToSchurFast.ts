@@ -34,6 +34,20 @@ export function fundamentalToSchurFast(n: number, byMask: ReadonlyMap<number, Co
     const sortedParts = maskComposition(n, T).sort((x, y) => y - x);
     if (!sameMap(m[T]!, m[compositionMask(sortedParts)]!)) return undefined;
   }
+  return jacobiTrudi(n, (alpha) => m[compositionMask(alpha)]!);
+}
+
+/**
+ * Σ_μ c_μ m_μ → Schur, from the coefficients c_μ of the monomials of the partitions μ ⊢ n
+ * (missing partitions count 0): the symmetric function with these monomial coefficients.
+ */
+export function monomialToSchurFast(n: number, byPartition: ReadonlyMap<string, CountMap>): Map<string, CountMap> {
+  const none: CountMap = new Map();
+  return jacobiTrudi(n, (alpha) => byPartition.get(partitionKey([...alpha].sort((x, y) => y - x))) ?? none);
+}
+
+/** ⟨f, s_λ⟩ = Σ_σ sgn(σ) ⟨f, h_{λ_i − i + σ(i)}⟩ for every λ ⊢ n, given ⟨f, h_α⟩ for compositions α. */
+function jacobiTrudi(n: number, h: (alpha: number[]) => CountMap): Map<string, CountMap> {
   const out = new Map<string, CountMap>();
   for (const lambda of partitionList(n)) {
     const l = lambda.length;
@@ -42,7 +56,7 @@ export function fundamentalToSchurFast(n: number, byMask: ReadonlyMap<number, Co
     const alpha = new Array<number>(l).fill(0);
     const rec = (i: number, sign: number): void => {
       if (i === l) {
-        addInto(acc, m[compositionMask(alpha.filter((a) => a > 0))]!, sign);
+        addInto(acc, h(alpha.filter((a) => a > 0)), sign);
         return;
       }
       for (let s = 1; s <= l; s++) {

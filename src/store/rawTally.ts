@@ -1,129 +1,232 @@
 /**
  * The counts of one unit (or one shard of it) before they become distributions: plain data
- * (typed arrays and maps) that crosses worker threads and adds up across shards.
- * Pairs tallied: own × own and own × transformed; Frobenius-level pairs only own × own.
- * Singles and pairs use dense counters below a value bound V, with a map above it.
+ * that crosses worker threads and adds up across shards. Each object is visited once: each
+ * transform is applied once (and its statistics reused while it gives the same object again,
+ * as signed-absolute does across the 2^n signs of one permutation), every statistic computed
+ * once, then counted — singles, pairs (own × own and own × transformed) and the
+ * Frobenius-level sums of singles and of own pairs — in dense tables sized from a sample.
  */
-import { partitionKey } from '../core/partitions.js';
-import { packExponents } from '../core/poly.js';
-import type { Family, Shard } from '../enumerate/plugin.js';
+import { partitionList } from '../core/partitions.js';
+import type { Family, Params, Shard } from '../enumerate/plugin.js';
+import { countExtra, makeCounters, mergeCounter, VALUE_LIMIT, type Counter, type CounterBlock } from './counter.js';
 import { descentMask, inverseDescentMask } from './descentMasks.js';
+import { groupsOf, ownCount, type TallyStat } from './statPlan.js';
+import { statBounds } from './statBounds.js';
+import { MemoGate } from './transformMemo.js';
 
-export type Tally = Map<number, number>;
+/** Frobenius-level sums: Σ q^stat s_shape, Σ q^stat F_Des(word), Σ q^stat F_iDes(word), Σ q^stat m_content. */
+export type SymKind = 'shape' | 'fundamental' | 'ifundamental' | 'content';
 
-/** Masks of words up to n = 13 fit below 2^12; packed pair keys below 2^33; products stay below 2^53. */
-export const WORD_BASE = 4096;
+/** One parameter set the unit visits; `content` indexes the content of a unit summed over contents. */
+export interface UnitPart {
+  readonly params: Params;
+  readonly content?: number;
+}
 
-export interface StatLike {
-  readonly transform: string;
-  readonly compute: (obj: unknown) => number;
+export interface TallyInput {
+  readonly family: Family<unknown>;
+  readonly n: number;
+  readonly parts: readonly UnitPart[];
+  /** Ordered: own statistics first, then each transform's together (statPlan.orderStats). */
+  readonly stats: readonly TallyStat[];
+  /** Statistics left out as equal to a kept one (index into stats), re-checked on a sample. */
+  readonly checks?: readonly { readonly stat: TallyStat; readonly sameAs: number }[];
+  readonly shard?: Shard;
 }
 
 export interface RawTally {
   objects: number;
-  readonly V: number;
-  readonly singleDense: Float64Array;
-  readonly pairDense: Float64Array;
-  /** "s<i>" or "p<p>" -> counts of values at or above V. */
-  readonly overflow: Map<string, Tally>;
-  /** per statistic: shape key -> (packed value -> count); pairs keyed "i,j". */
-  readonly shapeSingle: Map<string, Tally>[];
-  readonly shapePair: Map<string, Map<string, Tally>>;
-  /** [Des, iDes] -> per statistic: (value * WORD_BASE + mask) -> count; pairs keyed "i,j". */
-  readonly wordSingle: Tally[][];
-  readonly wordPair: Map<string, Tally>[];
+  readonly single: Counter[];
+  readonly pair: Counter[];
+  readonly sym: { readonly kind: SymKind; readonly single: Counter[]; readonly pair: Counter[] }[];
 }
 
-export function pairsOf(stats: readonly StatLike[]): [number, number][] {
-  const own = stats.filter((s) => s.transform === '').length;
+/** Objects counted together (see accumulate). */
+const BATCH = 2048;
+/** Statistic values are below this (a local copy: an imported constant is read through a getter in the hot loop). */
+const LIMIT = VALUE_LIMIT;
+
+/** Masks of words up to n = 13 fit below 2^12. */
+export const MAX_WORD_N = 13;
+
+/** Pairs tallied: own × own (i < j) first (the Frobenius-level pairs), then own × transformed. */
+export function pairsOf(stats: readonly TallyStat[]): [number, number][] {
+  const own = ownCount(stats);
   const out: [number, number][] = [];
-  for (let i = 0; i < own; i++) for (let j = i + 1; j < stats.length; j++) out.push([i, j]);
+  for (let i = 0; i < own; i++) for (let j = i + 1; j < own; j++) out.push([i, j]);
+  for (let i = 0; i < own; i++) for (let j = own; j < stats.length; j++) out.push([i, j]);
   return out;
 }
 
-function bump(m: Tally, key: number, by = 1): void {
-  m.set(key, (m.get(key) ?? 0) + by);
+/** The Frobenius-level sums a unit has, with the size of their index. */
+export function symKindsOf(family: Family<unknown>, n: number, parts: readonly UnitPart[]): { kind: SymKind; M: number }[] {
+  const out: { kind: SymKind; M: number }[] = [];
+  if (typeof family.shape === 'function') out.push({ kind: 'shape', M: partitionList(n).length });
+  if (typeof family.readingWord === 'function' && n >= 1 && n <= MAX_WORD_N) {
+    out.push({ kind: 'fundamental', M: 1 << (n - 1) }, { kind: 'ifundamental', M: 1 << (n - 1) });
+  }
+  if (parts.some((p) => p.content !== undefined)) out.push({ kind: 'content', M: Math.max(...parts.map((p) => (p.content ?? 0) + 1)) });
+  return out;
 }
 
-function sub<K, V>(m: Map<K, V>, k: K, make: () => V): V {
-  let v = m.get(k);
-  if (v === undefined) m.set(k, (v = make()));
-  return v;
+function shapeIndexer(n: number): (l: readonly number[]) => number {
+  const index = new Map(partitionList(n).map((l, i) => [l.join(','), i]));
+  return (l) => {
+    const i = index.get(l.join(','));
+    if (i === undefined) throw new Error(`a shape ${l.join(',')} of the wrong size (expected a partition of ${n})`);
+    return i;
+  };
 }
 
-export function accumulate(family: Family<unknown>, params: Readonly<Record<string, number>>, stats: readonly StatLike[], shard?: Shard): RawTally {
-  const n = params['n'] ?? 0;
+export function accumulate(input: TallyInput): RawTally {
+  const { family, n, parts, stats, shard } = input;
   const S = stats.length;
-  const own = stats.filter((s) => s.transform === '').length;
-  // most statistics stay below C(n+1,2); larger values go to the overflow maps
-  const V = (n * (n + 1)) / 2 + 2;
+  const own = ownCount(stats);
+  const groups = groupsOf(stats).filter((g) => g.map);
   const pairList = pairsOf(stats);
   const P = pairList.length;
+  const pa = Int32Array.from(pairList, ([i]) => i);
+  const pb = Int32Array.from(pairList, ([, j]) => j);
+  const expected = Number(parts.reduce((s, p) => s + family.count(p.params), 0n)) / (shard?.count ?? 1);
+  const bound = statBounds(family, n, parts.map((p) => p.params), stats, expected);
+  const kinds = symKindsOf(family, n, parts);
+  const ownPairs = pairList.filter(([, j]) => j < own).length;
+  const single = makeCounters(stats.map((_, i) => [bound[i]!, 1, 1] as const), expected);
+  const pair = makeCounters(pairList.map(([i, j]) => [bound[i]!, bound[j]!, 1] as const), expected);
+  const symSingle = kinds.map(({ M }) => makeCounters(stats.map((_, i) => [bound[i]!, 1, M] as const), expected));
+  const symPair = kinds.map(({ M }) => makeCounters(pairList.slice(0, ownPairs).map(([i, j]) => [bound[i]!, bound[j]!, M] as const), expected));
   const raw: RawTally = {
-    objects: 0, V, singleDense: new Float64Array(S * V), pairDense: new Float64Array(P * V * V), overflow: new Map(),
-    shapeSingle: stats.map(() => new Map()), shapePair: new Map(), wordSingle: [0, 1].map(() => stats.map(() => new Map())), wordPair: [new Map(), new Map()],
+    objects: 0,
+    single: single.counters,
+    pair: pair.counters,
+    sym: kinds.map(({ kind }, k) => ({ kind, single: symSingle[k]!.counters, pair: symPair[k]!.counters })),
   };
-  const hasShape = typeof family.shape === 'function';
-  const hasWord = typeof family.readingWord === 'function' && n >= 1 && n <= 13;
-  const vals = new Array<number>(S).fill(0);
-  const visit = (obj: unknown): void => {
-    raw.objects++;
-    for (let i = 0; i < S; i++) {
-      const v = stats[i]!.compute(obj);
-      if (!Number.isInteger(v) || v < 0 || v >= 4096) throw new Error(`a statistic gave ${v} (expected an integer from 0 to 4095)`);
-      vals[i] = v;
-      if (v < V) raw.singleDense[i * V + v]!++;
-      else bump(sub(raw.overflow, `s${i}`, () => new Map()), packExponents(v, 0));
+  // values of a batch of objects, [statistic][object]: each table is then walked by one loop
+  // over the batch, which keeps it in cache (counting object by object jumps between tables)
+  const vals = new Int32Array(S);
+  const batch = new Int32Array(S * BATCH);
+  const symIndex = new Int32Array(Math.max(1, kinds.length) * BATCH);
+  const zeros = new Int32Array(BATCH);
+  let t = 0;
+  const shapeOf = kinds.some((k) => k.kind === 'shape') ? shapeIndexer(n) : undefined;
+  const hasWord = kinds.some((k) => k.kind === 'fundamental');
+  const gates = groups.map(() => new MemoGate());
+  const checks = input.checks ?? [];
+  let content = 0;
+  const flush = (): void => {
+    countSingles(single, batch, S, t, zeros, 0);
+    countPlainPairs(pair, batch, pa, pb, P, t);
+    for (let k = 0; k < kinds.length; k++) {
+      countSingles(symSingle[k]!, batch, S, t, symIndex, k * BATCH);
+      countPairs(symPair[k]!, batch, pa, pb, ownPairs, t, symIndex, k * BATCH);
     }
-    for (let p = 0; p < P; p++) {
-      const [i, j] = pairList[p]!;
-      const a = vals[i]!;
-      const b = vals[j]!;
-      if (a < V && b < V) raw.pairDense[(p * V + a) * V + b]!++;
-      else bump(sub(raw.overflow, `p${p}`, () => new Map()), packExponents(a, b));
+    t = 0;
+  };
+  const visit = (x: unknown): void => {
+    const seen = ++raw.objects;
+    for (let i = 0; i < own; i++) vals[i] = valueOf(stats[i]!, x);
+    for (let g = 0; g < groups.length; g++) {
+      const { map, from, to } = groups[g]!;
+      const y = map!.apply(x);
+      if (gates[g]!.same(y)) continue; // same object as last time: vals[from..to) still hold
+      for (let i = from; i < to; i++) vals[i] = valueOf(stats[i]!, y);
     }
-    if (hasShape) {
-      const key = partitionKey(family.shape!(obj));
-      for (let i = 0; i < S; i++) {
-        bump(sub(raw.shapeSingle[i]!, key, () => new Map()), packExponents(vals[i]!, 0));
-        if (i < own) for (let j = i + 1; j < own; j++) bump(sub(sub(raw.shapePair, `${i},${j}`, () => new Map()), key, () => new Map()), packExponents(vals[i]!, vals[j]!));
+    if ((seen & 4095) === 1) for (const c of checks) checkDuplicate(family, c.stat, stats[c.sameAs]!, x, vals[c.sameAs]!);
+    for (let i = 0; i < S; i++) batch[i * BATCH + t] = vals[i]!;
+    if (kinds.length) {
+      const w = hasWord ? family.readingWord!(x) : undefined;
+      for (let k = 0; k < kinds.length; k++) {
+        const kind = kinds[k]!.kind;
+        symIndex[k * BATCH + t] = kind === 'shape' ? shapeOf!(family.shape!(x)) : kind === 'content' ? content : kind === 'fundamental' ? descentMask(w!) : inverseDescentMask(w!);
       }
     }
-    if (hasWord) {
-      const w = family.readingWord!(obj);
-      const masks = [descentMask(w), inverseDescentMask(w)];
-      for (let d = 0; d < 2; d++) {
-        const m = masks[d]!;
-        for (let i = 0; i < S; i++) {
-          bump(raw.wordSingle[d]![i]!, vals[i]! * WORD_BASE + m);
-          if (i < own) for (let j = i + 1; j < own; j++) bump(sub(raw.wordPair[d]!, `${i},${j}`, () => new Map()), packExponents(vals[i]!, vals[j]!) * WORD_BASE + m);
-        }
-      }
-    }
+    if (++t === BATCH) flush();
   };
-  if (family.visit) family.visit(params, visit, shard);
-  else if (!shard || shard.count === 1) for (const o of family.generate(params)) visit(o);
-  else throw new Error(`${family.id} cannot be split into shards`);
+  for (const part of parts) {
+    content = part.content ?? 0;
+    if (family.visit) family.visit(part.params, visit, shard);
+    else if (!shard || shard.count === 1) for (const o of family.generate(part.params)) visit(o);
+    else throw new Error(`${family.id} cannot be split into shards`);
+  }
+  flush();
   return raw;
 }
 
-function mergeTally(into: Tally, from: Tally): void {
-  for (const [k, v] of from) bump(into, k, v);
+/** Counts a batch of T objects: statistic i's values at batch[i·BATCH + t], index m[at + t] (flat offsets, no calls on the dense path). */
+function countSingles(c: CounterBlock, batch: Int32Array, S: number, T: number, m: Int32Array, at: number): void {
+  const { data, off, A, M } = c;
+  for (let i = 0; i < S; i++) {
+    const base = i * BATCH;
+    const o = off[i]!;
+    const ai = A[i]!;
+    const mi = M[i]!;
+    for (let t = 0; t < T; t++) {
+      const v = batch[base + t]!;
+      const x = m[at + t]!;
+      if (v < ai && x < mi) data[o + v * mi + x]!++;
+      else countExtra(c.counters[i]!, v, 0, x);
+    }
+  }
 }
 
-function mergeNested(into: Map<string, Tally>, from: Map<string, Tally>): void {
-  for (const [k, t] of from) mergeTally(sub(into, k, () => new Map()), t);
+/** countPairs without an index (the joint distributions: most of the build's counting). */
+function countPlainPairs(c: CounterBlock, batch: Int32Array, pa: Int32Array, pb: Int32Array, P: number, T: number): void {
+  const { data, off, A, B } = c;
+  for (let p = 0; p < P; p++) {
+    const ba = pa[p]! * BATCH;
+    const bb = pb[p]! * BATCH;
+    const o = off[p]!;
+    const ap = A[p]!;
+    const bp = B[p]!;
+    for (let t = 0; t < T; t++) {
+      const a = batch[ba + t]!;
+      const b = batch[bb + t]!;
+      if (a < ap && b < bp) data[o + a * bp + b]!++;
+      else countExtra(c.counters[p]!, a, b, 0);
+    }
+  }
+}
+
+function countPairs(c: CounterBlock, batch: Int32Array, pa: Int32Array, pb: Int32Array, P: number, T: number, m: Int32Array, at: number): void {
+  const { data, off, A, B, M } = c;
+  for (let p = 0; p < P; p++) {
+    const ba = pa[p]! * BATCH;
+    const bb = pb[p]! * BATCH;
+    const o = off[p]!;
+    const ap = A[p]!;
+    const bp = B[p]!;
+    const mp = M[p]!;
+    for (let t = 0; t < T; t++) {
+      const a = batch[ba + t]!;
+      const b = batch[bb + t]!;
+      const x = m[at + t]!;
+      if (a < ap && b < bp && x < mp) data[o + (a * bp + b) * mp + x]!++;
+      else countExtra(c.counters[p]!, a, b, x);
+    }
+  }
+}
+
+function valueOf(s: TallyStat, y: unknown): number {
+  const v = s.statistic.compute(y);
+  if (!(v >= 0 && v < LIMIT && Number.isInteger(v))) throw new Error(`${s.id} gave ${v} (expected an integer from 0 to ${LIMIT - 1})`);
+  return v;
+}
+
+function checkDuplicate(family: Family<unknown>, dropped: TallyStat, kept: TallyStat, x: unknown, value: number): void {
+  const v = dropped.statistic.compute(dropped.map ? dropped.map.apply(x) : x);
+  if (v !== value) {
+    throw new Error(`${dropped.id} was left out of the catalogue as equal to ${kept.id} on the small sizes, but they differ on ${family.key(x)} (${v} ≠ ${value}); this is a bug of the duplicate check, please report it`);
+  }
 }
 
 /** Adds b into a (shards of one unit). */
 export function mergeRaw(a: RawTally, b: RawTally): RawTally {
   a.objects += b.objects;
-  for (let i = 0; i < a.singleDense.length; i++) a.singleDense[i]! += b.singleDense[i]!;
-  for (let i = 0; i < a.pairDense.length; i++) if (b.pairDense[i]) a.pairDense[i]! += b.pairDense[i]!;
-  mergeNested(a.overflow, b.overflow);
-  a.shapeSingle.forEach((m, i) => mergeNested(m, b.shapeSingle[i]!));
-  for (const [k, m] of b.shapePair) mergeNested(sub(a.shapePair, k, () => new Map()), m);
-  a.wordSingle.forEach((per, d) => per.forEach((t, i) => mergeTally(t, b.wordSingle[d]![i]!)));
-  a.wordPair.forEach((m, d) => mergeNested(m, b.wordPair[d]!));
+  a.single.forEach((c, i) => mergeCounter(c, b.single[i]!));
+  a.pair.forEach((c, i) => mergeCounter(c, b.pair[i]!));
+  a.sym.forEach((s, k) => {
+    s.single.forEach((c, i) => mergeCounter(c, b.sym[k]!.single[i]!));
+    s.pair.forEach((c, i) => mergeCounter(c, b.sym[k]!.pair[i]!));
+  });
   return a;
 }

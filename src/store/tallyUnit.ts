@@ -1,115 +1,127 @@
 /**
- * One unit of the catalogue: every object of one family at one parameter set, streamed
- * once; every statistic computed once per object and tallied as single distributions,
- * joint distributions of pairs (and their sums), and Frobenius-level sums
- * Σ q^stat s_shape, Σ q^stat F_Des(word), Σ q^stat F_iDes(word) (and the same for pairs).
+ * The rows of one unit from its counts: single distributions, joint distributions of pairs
+ * and their sums, and Frobenius-level sums Σ q^stat s_shape, Σ q^stat F_Des(word),
+ * Σ q^stat F_iDes(word), Σ_μ m_μ Σ_{content μ} q^stat (singles and own pairs), with the slices
+ * of the Frobenius-level pairs where one statistic is 0 (their t = 0 and q = 0 specialisations).
  */
+import { partitionKey, partitionList } from '../core/partitions.js';
 import { Poly, packExponents } from '../core/poly.js';
 import type { Family, Statistic, Transform } from '../enumerate/plugin.js';
 import { qtSeries, schurSeries, type Series } from '../series/series.js';
 import type { Combine, DistributionRow } from './catalogue.js';
-import { fundamentalToSchurFast, type CountMap } from './fundamentalToSchurFast.js';
-import { accumulate, pairsOf, WORD_BASE, type RawTally, type Tally } from './rawTally.js';
+import { forEachCell, type Counter } from './counter.js';
+import { fundamentalToSchurFast, monomialToSchurFast, type CountMap } from './fundamentalToSchurFast.js';
+import { accumulate, pairsOf, type RawTally, type SymKind, type UnitPart } from './rawTally.js';
+import { mappedStat, orderStats, ownCount, ownStat, type TallyStat } from './statPlan.js';
 
-/** A statistic as tallied: an own statistic, or one read after a transform. */
-export interface TallyStat {
-  readonly id: string;
-  readonly transform: string;
-  readonly compute: (obj: unknown) => number;
-}
+export type { TallyStat } from './statPlan.js';
 
 export interface UnitResult {
   readonly rows: DistributionRow[];
   readonly objects: bigint;
 }
 
-function polyOf(t: Tally): Poly {
+/** Where a unit's rows are stored and what they are read from. */
+export interface UnitShape {
+  readonly family: Family<unknown>;
+  /** The place of the rows (the family's parameters, or n and k for a unit summed over contents). */
+  readonly params: Readonly<Record<string, number | readonly number[]>>;
+  readonly n: number;
+  readonly k?: number;
+  readonly parts: readonly UnitPart[];
+  /** The partition of each content index of a unit summed over contents. */
+  readonly contents?: readonly (readonly number[])[];
+  /** Transforms mapping the unit onto itself: their statistics' single rows repeat the own ones. */
+  readonly selfMaps?: readonly string[];
+}
+
+/** The statistics of a unit, ordered for tallying (own first, then by transform). */
+export function tallyStats(family: Family<unknown>, statistics: readonly Statistic<unknown>[], transforms: readonly { t: Transform<unknown, unknown>; stats: readonly Statistic<unknown>[] }[]): TallyStat[] {
+  void family;
+  return orderStats([...statistics.map(ownStat), ...transforms.flatMap(({ t, stats }) => stats.map((s) => mappedStat(t, s)))]);
+}
+
+/** A unit of one parameter set, tallied in this thread (tests, small builds). */
+export function tallyUnit(family: Family<unknown>, params: Readonly<Record<string, number>>, stats: readonly TallyStat[]): UnitResult {
+  const n = params['n'] ?? 0;
+  const shape: UnitShape = { family, params, n, ...(params['k'] === undefined ? {} : { k: params['k'] }), parts: [{ params }] };
+  return rowsOfTally(shape, stats, accumulate({ family, n, parts: shape.parts, stats }));
+}
+
+function polyOf(t: CountMap): Poly {
   const m = new Map<number, bigint>();
   for (const [k, c] of t) if (c) m.set(k, BigInt(c));
   return Poly.fromPackedMap(m);
 }
 
-export function tallyStats(family: Family<unknown>, statistics: readonly Statistic<unknown>[], transforms: readonly { t: Transform<unknown, unknown>; stats: readonly Statistic<unknown>[] }[]): TallyStat[] {
-  const own: TallyStat[] = statistics.map((s) => ({ id: s.id, transform: '', compute: (o) => s.compute(o) }));
-  const via: TallyStat[] = transforms.flatMap(({ t, stats }) => stats.map((s) => ({ id: `${t.id}:${s.id}`, transform: t.id, compute: (o: unknown) => s.compute(t.apply(o)) })));
-  void family;
-  return [...own, ...via];
-}
-
-export function tallyUnit(family: Family<unknown>, params: Readonly<Record<string, number>>, stats: readonly TallyStat[]): UnitResult {
-  return rowsOfTally(family, params, stats, accumulate(family, params, stats));
+function bump(m: CountMap, key: number, by: number): void {
+  m.set(key, (m.get(key) ?? 0) + by);
 }
 
 /** The distributions of a finished tally. */
-export function rowsOfTally(family: Family<unknown>, params: Readonly<Record<string, number>>, stats: readonly TallyStat[], raw: RawTally): UnitResult {
-  const n = params['n'] ?? 0;
-  const k = params['k'];
-  const V = raw.V;
+export function rowsOfTally(u: UnitShape, stats: readonly TallyStat[], raw: RawTally): UnitResult {
   const rows: DistributionRow[] = [];
-  const base = { family: family.id, params, n, ...(k === undefined ? {} : { k }) };
-  const transformOf = (...ix: number[]) => [...new Set(ix.map((i) => stats[i]!.transform).filter(Boolean))].join('+');
-  const push = (ids: number[], combine: Combine, series: Series | undefined) => {
-    if (series) rows.push({ ...base, statistics: ids.map((i) => stats[i]!.id), combine, transform: transformOf(...ids), series });
+  const base = { family: u.family.id, params: u.params as Readonly<Record<string, number>>, n: u.n, ...(u.k === undefined ? {} : { k: u.k }) };
+  const transformOf = (ix: readonly number[]) => [...new Set(ix.map((i) => stats[i]!.transform).filter(Boolean))].join('+');
+  const push = (ix: number[], combine: Combine, series: Series | undefined) => {
+    if (series) rows.push({ ...base, statistics: ix.map((i) => stats[i]!.id), combine, transform: transformOf(ix), series });
   };
-  stats.forEach((_, i) => {
-    const t: Tally = new Map(raw.overflow.get(`s${i}`) ?? []);
-    for (let v = 0; v < V; v++) if (raw.singleDense[i * V + v]) t.set(packExponents(v, 0), raw.singleDense[i * V + v]!);
+  const self = new Set(u.selfMaps ?? []);
+  stats.forEach((s, i) => {
+    if (self.has(s.transform)) return;
+    const t: CountMap = new Map();
+    forEachCell(raw.single[i]!, (a, _b, _m, c) => bump(t, packExponents(a, 0), c));
     push([i], 'single', qtSeries(polyOf(t)));
   });
   pairsOf(stats).forEach(([i, j], p) => {
-    const t: Tally = new Map(raw.overflow.get(`p${p}`) ?? []);
-    const at = p * V * V;
-    for (let a = 0; a < V; a++) for (let b = 0; b < V; b++) {
-      const c = raw.pairDense[at + a * V + b]!;
-      if (c) t.set(packExponents(a, b), c);
-    }
-    push([i, j], 'joint', { kind: 'qt', poly: polyOf(t) });
-    push([i, j], 'sum', qtSeries(sumOf(t)));
+    const joint: CountMap = new Map();
+    const sum: CountMap = new Map();
+    forEachCell(raw.pair[p]!, (a, b, _m, c) => {
+      bump(joint, packExponents(a, b), c);
+      bump(sum, packExponents(a + b, 0), c);
+    });
+    push([i, j], 'joint', { kind: 'qt', poly: polyOf(joint) });
+    push([i, j], 'sum', qtSeries(polyOf(sum)));
   });
-  const own = stats.filter((s) => s.transform === '').length;
-  const toSchur = (m: Map<string, Tally> | undefined): Series | undefined =>
-    m && m.size ? schurSeries([...m].map(([l, t]) => [l, polyOf(t)] as const)) : undefined;
-  if (typeof family.shape === 'function') {
-    stats.forEach((_, i) => push([i], 'shape', toSchur(raw.shapeSingle[i])));
-    for (let i = 0; i < own; i++) for (let j = i + 1; j < own; j++) push([i, j], 'shape', toSchur(raw.shapePair.get(`${i},${j}`)));
-  }
-  if (typeof family.readingWord === 'function' && n >= 1 && n <= 13) {
-    const combos: Combine[] = ['fundamental', 'ifundamental'];
-    for (let d = 0; d < 2; d++) {
-      stats.forEach((_, i) => push([i], combos[d]!, fromFundamental(n, raw.wordSingle[d]![i]!, false)));
-      for (let i = 0; i < own; i++) for (let j = i + 1; j < own; j++) {
-        const t = raw.wordPair[d]!.get(`${i},${j}`);
-        if (t) push([i, j], combos[d]!, fromFundamental(n, t, true));
-      }
-    }
+  const ownPairs = pairsOf(stats).filter(([, j]) => j < ownCount(stats));
+  for (const { kind, single, pair } of raw.sym) {
+    const toSchur = symmetric(kind, u);
+    single.forEach((c, i) => push([i], kind, toSchur(c, (a) => packExponents(a, 0))));
+    pair.forEach((c, p) => {
+      const [i, j] = ownPairs[p]!;
+      push([i, j], kind, toSchur(c, (a, b) => packExponents(a, b)));
+      // the slices at 0 of either statistic: Σ over the objects with b = 0 (resp. a = 0) of q^a (resp. q^b)
+      push([i, j], `${kind}-t0`, toSchur(c, (a, b) => (b === 0 ? packExponents(a, 0) : -1)));
+      push([j, i], `${kind}-t0`, toSchur(c, (a, b) => (a === 0 ? packExponents(b, 0) : -1)));
+    });
   }
   return { rows, objects: BigInt(raw.objects) };
 }
 
-/** Σ_{a,b} c q^{a+b} from a joint tally. */
-function sumOf(t: Tally): Poly {
-  const m = new Map<number, bigint>();
-  for (const [key, c] of t) {
-    const b = key % 2 ** 21;
-    const a = (key - b) / 2 ** 21;
-    const e = packExponents(a + b, 0);
-    m.set(e, (m.get(e) ?? 0n) + BigInt(c));
-  }
-  return Poly.fromPackedMap(m);
+/** The Schur series of a Frobenius-level counter (cells keyed by `key`, −1 left out); undefined when not symmetric or empty. */
+function symmetric(kind: SymKind, u: UnitShape): (c: Counter, key: (a: number, b: number) => number) => Series | undefined {
+  return (c, key) => {
+    const byIndex = new Map<number, CountMap>();
+    forEachCell(c, (a, b, m, v) => {
+      const k = key(a, b);
+      if (k < 0) return;
+      let t = byIndex.get(m);
+      if (!t) byIndex.set(m, (t = new Map()));
+      bump(t, k, v);
+    });
+    if (byIndex.size === 0) return undefined;
+    let terms: Map<string, CountMap> | undefined;
+    if (kind === 'shape') {
+      const shapes = partitionsByIndex(u.n);
+      terms = new Map([...byIndex].map(([m, t]) => [shapes[m]!, t]));
+    } else if (kind === 'content') {
+      terms = monomialToSchurFast(u.n, new Map([...byIndex].map(([m, t]) => [partitionKey(u.contents![m]!), t])));
+    } else terms = fundamentalToSchurFast(u.n, byIndex);
+    if (!terms) return undefined;
+    return schurSeries([...terms].map(([l, m]) => [l, polyOf(m)] as const));
+  };
 }
 
-/** Σ q^stat F_mask -> Schur; undefined when the sum is not symmetric. */
-function fromFundamental(n: number, t: Tally, pair: boolean): Series | undefined {
-  const byMask = new Map<number, CountMap>();
-  for (const [key, c] of t) {
-    const mask = key % WORD_BASE;
-    const e = (key - mask) / WORD_BASE;
-    const m = byMask.get(mask) ?? new Map<number, number>();
-    const kk = pair ? e : packExponents(e, 0);
-    m.set(kk, (m.get(kk) ?? 0) + c);
-    byMask.set(mask, m);
-  }
-  const f = fundamentalToSchurFast(n, byMask);
-  if (!f) return undefined;
-  return schurSeries([...f].map(([l, m]) => [l, polyOf(m)] as const));
+function partitionsByIndex(n: number): string[] {
+  return partitionList(n).map((l) => partitionKey(l));
 }
