@@ -1,0 +1,252 @@
+/**
+ * One task of the quotient route: the dimensions of (R/I)^{G,χ} in every multidegree cell, for
+ * one Young subgroup G with a character χ (young-plan) and one prime. The G,χ-part of I is
+ * spanned by the folded products g·m (generator g, m an orbit representative of the
+ * complementary degree); the cell's dimension is #representatives − rank.
+ *
+ * Most of those products are redundant, and an incremental criterion in the manner of
+ * signature-based Gröbner algorithms (Faugère's F5) skips them before they are built: with
+ * generators taken in a fixed order and cells by increasing total degree, the product g_k·m
+ * lies in the span of products of earlier generators and of g_k·m' with m' below m whenever
+ * m is the lead of some element of (g_1, …, g_{k−1}) in its own cell (multiply that element
+ * by g_k: the syzygy gives the dependency). Every stored row remembers the generator that
+ * made it, so each cell records, for every representative, which generator first led there.
+ *
+ * The task is a pure function of structured-clonable data (worker pools can run it).
+ */
+import { InputError } from '../core/errors.js';
+import { CellOrbits, type CellDegree } from './cell-orbits.js';
+import { SparseEchelonModP } from './sparse-echelon.js';
+import { thetaProductSign } from './superspace.js';
+
+export interface QuotientGenerator {
+  /** (x-, y-, θ-degree). */
+  readonly degree: readonly [number, number, number];
+  /** Character of S_n on the generator: 'sym' invariant, 'alt' the sign. */
+  readonly character: 'sym' | 'alt';
+  /** Σ_i x_i^a y_i^b θ_i^c, when the generator is such a power sum (the fast path). */
+  readonly power?: readonly [number, number, number];
+  /** Otherwise its terms (coefficients as integer numerator / positive denominator, decimal). */
+  readonly terms?: readonly { readonly x: readonly number[]; readonly y: readonly number[]; readonly mask: number; readonly num: string; readonly den: string }[];
+}
+
+export interface QuotientFunctional {
+  /** Block sizes of the Young subgroup. */
+  readonly blocks: readonly number[];
+  /** Per block: true for the sign character. */
+  readonly alt: readonly boolean[];
+  readonly label: string;
+}
+
+export interface QuotientTaskInput {
+  readonly n: number;
+  readonly hasY: boolean;
+  readonly hasTheta: boolean;
+  /** Generators in processing order (by total degree). */
+  readonly generators: readonly QuotientGenerator[];
+  /** Letters with x-exponent ≥ xCap lie in the ideal (⟨x_i^xCap⟩ among the generators). */
+  readonly xCap?: number;
+  readonly functionals: readonly QuotientFunctional[];
+}
+
+export interface QuotientTask {
+  readonly functional: number;
+  readonly prime: number;
+  /** Cells of total degree up to this one. */
+  readonly maxDegree: number;
+}
+
+export interface QuotientTaskResult {
+  readonly functional: number;
+  readonly prime: number;
+  /** Every cell computed, with the dimension of its G,χ-part. */
+  readonly degrees: readonly (readonly [number, number, number])[];
+  readonly dims: readonly number[];
+  /** Representatives (columns), rows reduced, rows that reduced to zero, entries merged. */
+  readonly stats: { readonly columns: number; readonly rows: number; readonly zero: number; readonly merged: number };
+}
+
+/** The cells of total degree d, in the order the tasks visit them. */
+export function cellsOfTotal(input: QuotientTaskInput, d: number): CellDegree[] {
+  const out: CellDegree[] = [];
+  const xMax = input.xCap !== undefined ? (input.xCap - 1) * input.n : Infinity;
+  for (let t = input.hasTheta ? Math.min(d, input.n) : 0; t >= 0; t--)
+    for (let y = input.hasY ? d - t : 0; y >= 0; y--) {
+      const x = d - t - y;
+      if (x <= xMax) out.push({ x, y, theta: t });
+    }
+  return out;
+}
+
+/** The radix of y-exponents in universal letters. */
+export function yRadixOf(input: QuotientTaskInput, maxDegree: number): number {
+  return input.hasY ? maxDegree + 1 : 1;
+}
+
+interface CellData {
+  readonly codes: Float64Array;
+  /** Index of the generator whose row leads at each representative, or −1. */
+  readonly creator: Int16Array;
+  readonly orbits: CellOrbits;
+}
+
+type Term = { x: readonly number[]; y: readonly number[]; mask: number; coeff: number };
+
+export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, onCell?: (columns: number) => void, signal?: AbortSignal): QuotientTaskResult {
+  const { n, generators } = input;
+  const fn = input.functionals[task.functional];
+  if (!fn) throw new InputError(`no functional ${task.functional}`, 'functional');
+  const p = task.prime;
+  const yR = yRadixOf(input, task.maxDegree);
+  const terms: (Term[] | undefined)[] = generators.map((g) => g.terms?.map((t) => ({ x: t.x, y: t.y, mask: t.mask, coeff: residue(t.num, t.den, p) })));
+  const maxGenTotal = Math.max(0, ...generators.map((g) => g.degree[0] + g.degree[1] + g.degree[2]));
+  const flipped = fn.alt.map((a) => !a);
+  const cells = new Map<string, CellData>();
+  const degrees: [number, number, number][] = [];
+  const dims: number[] = [];
+  const stats = { columns: 0, rows: 0, zero: 0, merged: 0 };
+  const letters = new Int32Array(n);
+  const product = new Int32Array(n);
+  const work = new Int32Array(n);
+  let rowCodes = new Float64Array(64);
+  let rowVals = new Float64Array(64);
+
+  for (let total = 0; total <= task.maxDegree; total++) {
+    for (const cell of cellsOfTotal(input, total)) {
+      signal?.throwIfAborted();
+      const orbits = new CellOrbits(n, fn.blocks, fn.alt, yR, cell, input.xCap);
+      const codeList: number[] = [];
+      orbits.enumerate((_, code) => codeList.push(code));
+      const codes = Float64Array.from(codeList);
+      const ech = new SparseEchelonModP(p);
+      generators.forEach((g, k) => {
+        const from = { x: cell.x - g.degree[0], y: cell.y - g.degree[1], theta: cell.theta - g.degree[2] };
+        if (from.x < 0 || from.y < 0 || from.theta < 0) return;
+        if (codes.length === 0 || ech.rank === codes.length) return;
+        const addRow = (m: Int32Array): void => {
+          let len = 0;
+          const push = (code: number, v: number): void => {
+            if (len === rowCodes.length) {
+              rowCodes = grow(rowCodes);
+              rowVals = grow(rowVals);
+            }
+            rowCodes[len] = code;
+            rowVals[len++] = v;
+          };
+          if (g.power) {
+            const [a, b, c] = g.power;
+            const shift = (a * yR + b) * 2 + c;
+            let thetaBefore = 0;
+            for (let i = 0; i < n; i++) {
+              const u = m[i]!;
+              if (!(c && u & 1)) {
+                product.set(m);
+                product[i] = u + shift;
+                const code = orbits.fold(product, work);
+                if (code >= 0) push(code, (orbits.parity ^ (c ? thetaBefore & 1 : 0)) === 1 ? p - 1 : 1);
+              }
+              thetaBefore += u & 1;
+            }
+          } else {
+            let mMask = 0;
+            for (let i = 0; i < n; i++) if (m[i]! & 1) mMask |= 1 << i;
+            for (const t of terms[k]!) {
+              if (t.mask & mMask) continue;
+              for (let i = 0; i < n; i++) product[i] = m[i]! + ((t.x[i]! * yR + (t.y[i] ?? 0)) * 2 + ((t.mask >> i) & 1));
+              const code = orbits.fold(product, work);
+              if (code < 0) continue;
+              const neg = (orbits.parity === 1) !== (thetaProductSign(t.mask, mMask) < 0);
+              push(code, neg ? (p - t.coeff) % p : t.coeff);
+            }
+          }
+          len = sortAndMerge(rowCodes, rowVals, len, p);
+          if (len === 0) return;
+          stats.rows++;
+          if (!ech.insert(rowCodes, rowVals, len, k)) stats.zero++;
+        };
+        if (g.character === 'sym') {
+          const src = cells.get(key(from));
+          if (!src) return;
+          for (let r = 0; r < src.codes.length; r++) {
+            const c = src.creator[r]!;
+            if (c >= 0 && c < k) continue; // the criterion: a lead of (g_1, …, g_{k−1})
+            src.orbits.decode(src.codes[r]!, letters);
+            addRow(letters);
+            if (ech.rank === codes.length) return;
+          }
+        } else {
+          // g·π_{χ·sgn}(m): the multipliers are representatives for the twisted character
+          new CellOrbits(n, fn.blocks, flipped, yR, from, input.xCap).enumerate((m) => addRow(m));
+        }
+      });
+      const creator = new Int16Array(codes.length);
+      for (let r = 0; r < codes.length; r++) creator[r] = ech.tagAt(codes[r]!);
+      cells.set(key(cell), { codes, creator, orbits });
+      degrees.push([cell.x, cell.y, cell.theta]);
+      dims.push(codes.length - ech.rank);
+      stats.columns += codes.length;
+      stats.merged += ech.merged;
+      onCell?.(codes.length);
+    }
+    // cells more than one generator degree below are no longer needed as multipliers
+    for (const [k, c] of cells) if (c.orbits.degree.x + c.orbits.degree.y + c.orbits.degree.theta < total - maxGenTotal) cells.delete(k);
+  }
+  return { functional: task.functional, prime: p, degrees, dims, stats };
+}
+
+function key(d: CellDegree): string {
+  return `${d.x},${d.y},${d.theta}`;
+}
+
+/** Sort entries by decreasing code, add up equal codes, drop zeros; values become residues. */
+function sortAndMerge(codes: Float64Array, vals: Float64Array, len: number, p: number): number {
+  for (let i = 1; i < len; i++) {
+    const c = codes[i]!;
+    const v = vals[i]!;
+    let j = i - 1;
+    while (j >= 0 && codes[j]! < c) {
+      codes[j + 1] = codes[j]!;
+      vals[j + 1] = vals[j]!;
+      j--;
+    }
+    codes[j + 1] = c;
+    vals[j + 1] = v;
+  }
+  let o = 0;
+  for (let i = 0; i < len; i++) {
+    if (o > 0 && codes[o - 1] === codes[i]) vals[o - 1] = (vals[o - 1]! + vals[i]!) % p;
+    else {
+      codes[o] = codes[i]!;
+      vals[o++] = vals[i]! % p;
+    }
+  }
+  let w = 0;
+  for (let i = 0; i < o; i++) {
+    if (vals[i] === 0) continue;
+    codes[w] = codes[i]!;
+    vals[w++] = vals[i]!;
+  }
+  return w;
+}
+
+function residue(num: string, den: string, p: number): number {
+  const P = BigInt(p);
+  const a = ((BigInt(num) % P) + P) % P;
+  const b = ((BigInt(den) % P) + P) % P;
+  if (b === 0n) throw new InputError(`a coefficient's denominator ${den} vanishes mod ${p}`, 'prime');
+  let inv = 1n;
+  let base = b;
+  let e = P - 2n;
+  while (e > 0n) {
+    if (e & 1n) inv = (inv * base) % P;
+    base = (base * base) % P;
+    e >>= 1n;
+  }
+  return Number((a * inv) % P);
+}
+
+function grow(a: Float64Array): Float64Array<ArrayBuffer> {
+  const g = new Float64Array(a.length * 2);
+  g.set(a);
+  return g;
+}
