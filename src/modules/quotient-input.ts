@@ -84,16 +84,27 @@ export function quotientRequest(spec: IdealSpec, frobenius: boolean): QuotientRe
   const useSymmetry = stable && frobenius;
   // without S_n acting (or without Frobenius series) one task over the trivial group
   const functionals: QuotientFunctional[] = useSymmetry
-    ? youngPlan(n).map((t) => ({ blocks: t.blocks, alt: t.modes.map((m) => m === 'alt'), label: t.label }))
+    ? youngPlan(n).map((t) => (process.env['QBREV'] === '1' ? { blocks: [...t.blocks].reverse(), alt: t.modes.map((m) => m === 'alt').reverse(), label: t.label } : { blocks: t.blocks, alt: t.modes.map((m) => m === 'alt'), label: t.label }))
     : [{ blocks: new Array<number>(n).fill(1), alt: new Array<boolean>(n).fill(false), label: 'all' }];
   // over the trivial group every generator is invariant
-  const ordered = gens.map((g) => (useSymmetry ? g : { ...g, character: 'sym' as const })).sort((a, b) => total(a) - total(b));
+  const ordered = gens.map((g) => (useSymmetry ? g : { ...g, character: 'sym' as const })).sort((a, b) => total(a) - total(b) || tieBreak(a, b));
   return {
     input: { n, hasY, hasTheta, generators: ordered, ...(xCap !== undefined ? { xCap } : {}), functionals },
     stable,
     maxDegree,
     description,
   };
+}
+
+function tieBreak(a: QuotientGenerator, b: QuotientGenerator): number {
+  const m = process.env['QGEN'] ?? '';
+  if (m === 'tfirst') return b.degree[2] - a.degree[2];
+  if (m === 'tlast') return a.degree[2] - b.degree[2];
+  if (m === 'xfirst') return b.degree[0] - a.degree[0];
+  if (m === 'yfirst') return b.degree[1] - a.degree[1];
+  if (m === 'bal') return Math.abs(a.degree[0]-a.degree[1]) - Math.abs(b.degree[0]-b.degree[1]);
+  if (m === 'unbal') return Math.abs(b.degree[0]-b.degree[1]) - Math.abs(a.degree[0]-a.degree[1]);
+  return 0;
 }
 
 function total(g: QuotientGenerator): number {

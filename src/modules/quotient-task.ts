@@ -17,7 +17,8 @@
 import { InputError } from '../core/errors.js';
 import { CellOrbits, type CellDegree } from './cell-orbits.js';
 import { SparseEchelonModP } from './sparse-echelon.js';
-import { thetaProductSign } from './superspace.js';
+import { KeyTable } from './key-table.js';
+import { RowBuilder, type GeneratorTerm } from './quotient-rows.js';
 
 export interface QuotientGenerator {
   /** (x-, y-, θ-degree). */
@@ -62,8 +63,8 @@ export interface QuotientTaskResult {
   /** Every cell computed, with the dimension of its G,χ-part. */
   readonly degrees: readonly (readonly [number, number, number])[];
   readonly dims: readonly number[];
-  /** Representatives (columns), rows reduced, rows that reduced to zero, entries merged. */
-  readonly stats: { readonly columns: number; readonly rows: number; readonly zero: number; readonly merged: number };
+  /** Representatives (columns), rows reduced, rows that reduced to zero, stored-row entries applied. */
+  readonly stats: { readonly columns: number; readonly rows: number; readonly zero: number; readonly applied: number };
 }
 
 /** The cells of total degree d, in the order the tasks visit them. */
@@ -84,13 +85,12 @@ export function yRadixOf(input: QuotientTaskInput, maxDegree: number): number {
 }
 
 interface CellData {
+  /** Representative codes, increasing (the column order). */
   readonly codes: Float64Array;
   /** Index of the generator whose row leads at each representative, or −1. */
   readonly creator: Int16Array;
   readonly orbits: CellOrbits;
 }
-
-type Term = { x: readonly number[]; y: readonly number[]; mask: number; coeff: number };
 
 export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, onCell?: (columns: number) => void, signal?: AbortSignal): QuotientTaskResult {
   const { n, generators } = input;
@@ -98,18 +98,15 @@ export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, on
   if (!fn) throw new InputError(`no functional ${task.functional}`, 'functional');
   const p = task.prime;
   const yR = yRadixOf(input, task.maxDegree);
-  const terms: (Term[] | undefined)[] = generators.map((g) => g.terms?.map((t) => ({ x: t.x, y: t.y, mask: t.mask, coeff: residue(t.num, t.den, p) })));
+  const terms = generators.map((g) => g.terms?.map((t): GeneratorTerm => ({ x: t.x, y: t.y, mask: t.mask, coeff: residue(t.num, t.den, p) })));
   const maxGenTotal = Math.max(0, ...generators.map((g) => g.degree[0] + g.degree[1] + g.degree[2]));
   const flipped = fn.alt.map((a) => !a);
   const cells = new Map<string, CellData>();
   const degrees: [number, number, number][] = [];
   const dims: number[] = [];
-  const stats = { columns: 0, rows: 0, zero: 0, merged: 0 };
+  const stats = { columns: 0, rows: 0, zero: 0, applied: 0 };
   const letters = new Int32Array(n);
-  const product = new Int32Array(n);
-  const work = new Int32Array(n);
-  let rowCodes = new Float64Array(64);
-  let rowVals = new Float64Array(64);
+  const rows = new RowBuilder(n, p, yR);
 
   for (let total = 0; total <= task.maxDegree; total++) {
     for (const cell of cellsOfTotal(input, total)) {
@@ -117,78 +114,47 @@ export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, on
       const orbits = new CellOrbits(n, fn.blocks, fn.alt, yR, cell, input.xCap);
       const codeList: number[] = [];
       orbits.enumerate((_, code) => codeList.push(code));
-      const codes = Float64Array.from(codeList);
-      const ech = new SparseEchelonModP(p);
-      generators.forEach((g, k) => {
+      // columns by increasing code: rows come with small leads first, and reduce through short chains
+      const codes = Float64Array.from(codeList).sort();
+      const column = new KeyTable(Infinity);
+      codes.forEach((c, i) => column.set(c, i));
+      const ech = new SparseEchelonModP(p, codes.length);
+      const addRow = (g: QuotientGenerator, k: number, m: Int32Array): void => {
+        const len = rows.build(g, terms[k], m, orbits, column);
+        if (len === 0) return;
+        stats.rows++;
+        if (!ech.insert(rows.cols, rows.vals, len, k)) stats.zero++;
+      };
+      for (let k = 0; k < generators.length && ech.rank < codes.length; k++) {
+        const g = generators[k]!;
         const from = { x: cell.x - g.degree[0], y: cell.y - g.degree[1], theta: cell.theta - g.degree[2] };
-        if (from.x < 0 || from.y < 0 || from.theta < 0) return;
-        if (codes.length === 0 || ech.rank === codes.length) return;
-        const addRow = (m: Int32Array): void => {
-          let len = 0;
-          const push = (code: number, v: number): void => {
-            if (len === rowCodes.length) {
-              rowCodes = grow(rowCodes);
-              rowVals = grow(rowVals);
-            }
-            rowCodes[len] = code;
-            rowVals[len++] = v;
-          };
-          if (g.power) {
-            const [a, b, c] = g.power;
-            const shift = (a * yR + b) * 2 + c;
-            let thetaBefore = 0;
-            for (let i = 0; i < n; i++) {
-              const u = m[i]!;
-              if (!(c && u & 1)) {
-                product.set(m);
-                product[i] = u + shift;
-                const code = orbits.fold(product, work);
-                if (code >= 0) push(code, (orbits.parity ^ (c ? thetaBefore & 1 : 0)) === 1 ? p - 1 : 1);
-              }
-              thetaBefore += u & 1;
-            }
-          } else {
-            let mMask = 0;
-            for (let i = 0; i < n; i++) if (m[i]! & 1) mMask |= 1 << i;
-            for (const t of terms[k]!) {
-              if (t.mask & mMask) continue;
-              for (let i = 0; i < n; i++) product[i] = m[i]! + ((t.x[i]! * yR + (t.y[i] ?? 0)) * 2 + ((t.mask >> i) & 1));
-              const code = orbits.fold(product, work);
-              if (code < 0) continue;
-              const neg = (orbits.parity === 1) !== (thetaProductSign(t.mask, mMask) < 0);
-              push(code, neg ? (p - t.coeff) % p : t.coeff);
-            }
-          }
-          len = sortAndMerge(rowCodes, rowVals, len, p);
-          if (len === 0) return;
-          stats.rows++;
-          if (!ech.insert(rowCodes, rowVals, len, k)) stats.zero++;
-        };
-        if (g.character === 'sym') {
-          const src = cells.get(key(from));
-          if (!src) return;
-          for (let r = 0; r < src.codes.length; r++) {
-            const c = src.creator[r]!;
-            if (c >= 0 && c < k) continue; // the criterion: a lead of (g_1, …, g_{k−1})
-            src.orbits.decode(src.codes[r]!, letters);
-            addRow(letters);
-            if (ech.rank === codes.length) return;
-          }
-        } else {
+        if (from.x < 0 || from.y < 0 || from.theta < 0) continue;
+        if (g.character === 'alt') {
           // g·π_{χ·sgn}(m): the multipliers are representatives for the twisted character
-          new CellOrbits(n, fn.blocks, flipped, yR, from, input.xCap).enumerate((m) => addRow(m));
+          new CellOrbits(n, fn.blocks, flipped, yR, from, input.xCap).enumerate((m) => addRow(g, k, m));
+          continue;
         }
-      });
+        const src = cells.get(key(from));
+        if (!src) continue;
+        // an odd generator squares to zero, so g_k·(g_k·a + earlier) lies among earlier rows too
+        const limit = g.degree[2] % 2 === 1 ? k + 1 : k;
+        for (let r = 0; r < src.codes.length && ech.rank < codes.length; r++) {
+          const c = src.creator[r]!;
+          if (c >= 0 && c < limit) continue; // the criterion: m leads an element of (g_1, …, g_{k−1})
+          src.orbits.decode(src.codes[r]!, letters);
+          addRow(g, k, letters);
+        }
+      }
       const creator = new Int16Array(codes.length);
-      for (let r = 0; r < codes.length; r++) creator[r] = ech.tagAt(codes[r]!);
+      for (let r = 0; r < codes.length; r++) creator[r] = ech.tagAt(r);
       cells.set(key(cell), { codes, creator, orbits });
       degrees.push([cell.x, cell.y, cell.theta]);
       dims.push(codes.length - ech.rank);
       stats.columns += codes.length;
-      stats.merged += ech.merged;
+      stats.applied += ech.applied;
       onCell?.(codes.length);
     }
-    // cells more than one generator degree below are no longer needed as multipliers
+    // a cell serves as multiplier cell up to one generator degree above it
     for (const [k, c] of cells) if (c.orbits.degree.x + c.orbits.degree.y + c.orbits.degree.theta < total - maxGenTotal) cells.delete(k);
   }
   return { functional: task.functional, prime: p, degrees, dims, stats };
@@ -196,37 +162,6 @@ export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, on
 
 function key(d: CellDegree): string {
   return `${d.x},${d.y},${d.theta}`;
-}
-
-/** Sort entries by decreasing code, add up equal codes, drop zeros; values become residues. */
-function sortAndMerge(codes: Float64Array, vals: Float64Array, len: number, p: number): number {
-  for (let i = 1; i < len; i++) {
-    const c = codes[i]!;
-    const v = vals[i]!;
-    let j = i - 1;
-    while (j >= 0 && codes[j]! < c) {
-      codes[j + 1] = codes[j]!;
-      vals[j + 1] = vals[j]!;
-      j--;
-    }
-    codes[j + 1] = c;
-    vals[j + 1] = v;
-  }
-  let o = 0;
-  for (let i = 0; i < len; i++) {
-    if (o > 0 && codes[o - 1] === codes[i]) vals[o - 1] = (vals[o - 1]! + vals[i]!) % p;
-    else {
-      codes[o] = codes[i]!;
-      vals[o++] = vals[i]! % p;
-    }
-  }
-  let w = 0;
-  for (let i = 0; i < o; i++) {
-    if (vals[i] === 0) continue;
-    codes[w] = codes[i]!;
-    vals[w++] = vals[i]!;
-  }
-  return w;
 }
 
 function residue(num: string, den: string, p: number): number {
@@ -243,10 +178,4 @@ function residue(num: string, den: string, p: number): number {
     e >>= 1n;
   }
   return Number((a * inv) % P);
-}
-
-function grow(a: Float64Array): Float64Array<ArrayBuffer> {
-  const g = new Float64Array(a.length * 2);
-  g.set(a);
-  return g;
 }

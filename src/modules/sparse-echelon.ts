@@ -1,33 +1,39 @@
 /**
- * Rank mod p of sparse rows whose columns are numbers below 2^53 (orbit codes), by
- * top-reduction: a row's largest column is its lead; while some stored row leads there, the
- * row loses that column (a sparse merge), and a row left with an unclaimed lead is stored,
- * scaled to lead with 1. The stored rows keep the columns their reductions produced, which
- * stays sparse when rows arrive in the order of a Gröbner-type computation (quotient-task.ts).
- * Residues below p < 2^26, so products are exact in doubles.
+ * Rank mod p of sparse rows over a fixed set of columns 0..width−1, by top-reduction: a row's
+ * largest column is its lead; while a stored row leads there, that stored row (scaled) is
+ * subtracted, and a row left with an unclaimed lead is stored, scaled to lead with 1. The row
+ * being reduced lives in a dense accumulator with a max-heap of its columns, so one step
+ * costs the stored row's length (times a logarithm), not the growing row's. Stored rows keep
+ * the tails their reductions produced, which stay short when rows arrive in the order of a
+ * Gröbner-type computation (quotient-task.ts). Residues below p < 2^26: products are exact.
  */
 import { invMod } from './echelon-mod-p.js';
-import { KeyTable } from './key-table.js';
-
-type Buf = { c: Float64Array; v: Float64Array };
 
 export class SparseEchelonModP {
-  private readonly lead = new KeyTable(Infinity);
+  private readonly leadRow: Int32Array;
   private start = new Int32Array(1024);
   private length = new Int32Array(1024);
   private tags = new Int32Array(1024);
-  private codes = new Float64Array(1 << 14);
+  private cols = new Int32Array(1 << 14);
   private vals = new Float64Array(1 << 14);
   private used = 0;
   private count = 0;
-  private bufA: Buf = { c: new Float64Array(64), v: new Float64Array(64) };
-  private bufB: Buf = { c: new Float64Array(64), v: new Float64Array(64) };
+  private readonly acc: Float64Array;
+  private readonly inHeap: Uint8Array;
+  private heap = new Int32Array(256);
+  private heapLen = 0;
   private readonly invP: number;
-  /** Entries merged so far (a measure of the work). */
-  merged = 0;
+  /** Entries of stored rows applied so far (a measure of the work). */
+  applied = 0;
 
-  constructor(readonly p: number) {
+  constructor(
+    readonly p: number,
+    readonly width: number,
+  ) {
     this.invP = 1 / p;
+    this.leadRow = new Int32Array(width).fill(-1);
+    this.acc = new Float64Array(width);
+    this.inHeap = new Uint8Array(width);
   }
 
   get rank(): number {
@@ -39,87 +45,60 @@ export class SparseEchelonModP {
     return this.used;
   }
 
-  /** The tag of the stored row leading at `code`, or −1. */
-  tagAt(code: number): number {
-    const i = this.lead.get(code);
-    return i < 0 ? -1 : this.tags[i]!;
+  /** The tag of the stored row leading at `col`, or −1. */
+  tagAt(col: number): number {
+    const k = this.leadRow[col]!;
+    return k < 0 ? -1 : this.tags[k]!;
   }
 
   /**
-   * Reduce the row (codes strictly decreasing, values residues in [1, p)) and store it when
+   * Reduce the row (columns distinct, any order; values residues in [0, p)) and store it when
    * something is left; `tag` is kept with a stored row. Returns true when the rank grew.
    */
-  insert(codes: ArrayLike<number>, vals: ArrayLike<number>, len: number, tag: number): boolean {
-    if (len === 0) return false;
+  insert(cols: ArrayLike<number>, vals: ArrayLike<number>, len: number, tag: number): boolean {
     const p = this.p;
     const inv = this.invP;
-    let a = this.fit(this.bufA, len + 1);
+    const acc = this.acc;
     for (let i = 0; i < len; i++) {
-      a.c[i] = codes[i]!;
-      a.v[i] = vals[i]!;
+      const c = cols[i]!;
+      const v = vals[i]!;
+      if (v === 0) continue;
+      acc[c] = v;
+      this.push(c);
     }
-    let alen = len;
     for (;;) {
-      const k = this.lead.get(a.c[0]!);
-      if (k < 0) break;
-      // a ← a − a[0]·(stored row k), both past their leads
-      const f = p - a.v[0]!;
+      const lead = this.pop();
+      if (lead < 0) return false;
+      const a = acc[lead]!;
+      if (a === 0) continue;
+      const k = this.leadRow[lead]!;
+      if (k < 0) {
+        this.push(lead);
+        this.store(tag);
+        return true;
+      }
+      // acc ← acc − a·(stored row k); its lead cancels exactly
+      acc[lead] = 0;
+      const f = p - a;
       const s = this.start[k]!;
       const e = s + this.length[k]!;
-      let b = this.fit(this.bufB, alen + e - s);
-      const pc = this.codes;
+      const pc = this.cols;
       const pv = this.vals;
-      let i = 1;
-      let j = s + 1;
-      let o = 0;
-      while (i < alen && j < e) {
-        const ci = a.c[i]!;
-        const cj = pc[j]!;
-        if (ci > cj) {
-          b.c[o] = ci;
-          b.v[o++] = a.v[i++]!;
-        } else if (cj > ci) {
-          const x = f * pv[j++]!;
-          b.c[o] = cj;
-          b.v[o++] = x - Math.floor(x * inv) * p;
-        } else {
-          const x = a.v[i++]! + f * pv[j++]!;
-          let y = x - Math.floor(x * inv) * p;
-          if (y < 0) y += p;
-          else if (y >= p) y -= p;
-          if (y !== 0) {
-            b.c[o] = ci;
-            b.v[o++] = y;
-          }
-        }
+      for (let j = s + 1; j < e; j++) {
+        const c = pc[j]!;
+        const x = acc[c]! + f * pv[j]!;
+        let y = x - Math.floor(x * inv) * p;
+        if (y < 0) y += p;
+        else if (y >= p) y -= p;
+        acc[c] = y;
+        if (this.inHeap[c] === 0 && y !== 0) this.push(c);
       }
-      while (i < alen) {
-        b.c[o] = a.c[i]!;
-        b.v[o++] = a.v[i++]!;
-      }
-      while (j < e) {
-        const x = f * pv[j]!;
-        b.c[o] = pc[j++]!;
-        b.v[o++] = x - Math.floor(x * inv) * p;
-      }
-      this.merged += alen + e - s;
-      // the floor estimate may leave a value at p or below 0 only in the equal-column case, fixed there
-      for (let q = 0; q < o; q++) {
-        const y = b.v[q]!;
-        if (y >= p) b.v[q] = y - p;
-        else if (y < 0) b.v[q] = y + p;
-      }
-      [this.bufA, this.bufB] = [b, a];
-      a = b;
-      b = this.bufB;
-      alen = o;
-      if (alen === 0) return false;
+      this.applied += e - s;
     }
-    this.store(a, alen, tag);
-    return true;
   }
 
-  private store(a: Buf, len: number, tag: number): void {
+  /** Move the accumulator's nonzero entries (the heap holds them) into a stored row. */
+  private store(tag: number): void {
     const p = this.p;
     const k = this.count++;
     if (k === this.start.length) {
@@ -127,31 +106,64 @@ export class SparseEchelonModP {
       this.length = grow32(this.length);
       this.tags = grow32(this.tags);
     }
-    while (this.used + len > this.codes.length) {
-      this.codes = grow64(this.codes);
+    while (this.used + this.heapLen > this.cols.length) {
+      this.cols = grow32(this.cols);
       this.vals = grow64(this.vals);
     }
     const s = this.used;
-    const inv = invMod(a.v[0]!, p);
-    for (let i = 0; i < len; i++) {
-      this.codes[s + i] = a.c[i]!;
-      this.vals[s + i] = (a.v[i]! * inv) % p;
+    let o = s;
+    let inv = 0;
+    for (;;) {
+      const c = this.pop();
+      if (c < 0) break;
+      const v = this.acc[c]!;
+      if (v === 0) continue;
+      this.acc[c] = 0;
+      if (o === s) inv = invMod(v, p);
+      this.cols[o] = c;
+      this.vals[o] = o === s ? 1 : (v * inv) % p;
+      o++;
     }
     this.start[k] = s;
-    this.length[k] = len;
+    this.length[k] = o - s;
     this.tags[k] = tag;
-    this.used += len;
-    this.lead.set(a.c[0]!, k);
+    this.used = o;
+    this.leadRow[this.cols[s]!] = k;
   }
 
-  private fit(buf: Buf, size: number): Buf {
-    if (buf.c.length < size) {
-      let cap = buf.c.length;
-      while (cap < size) cap *= 2;
-      buf.c = new Float64Array(cap);
-      buf.v = new Float64Array(cap);
+  private push(c: number): void {
+    if (this.heapLen === this.heap.length) this.heap = grow32(this.heap);
+    const h = this.heap;
+    this.inHeap[c] = 1;
+    let i = this.heapLen++;
+    while (i > 0) {
+      const up = (i - 1) >> 1;
+      if (h[up]! >= c) break;
+      h[i] = h[up]!;
+      i = up;
     }
-    return buf;
+    h[i] = c;
+  }
+
+  /** The largest column in the heap (removed), or −1. */
+  private pop(): number {
+    if (this.heapLen === 0) return -1;
+    const h = this.heap;
+    const top = h[0]!;
+    this.inHeap[top] = 0;
+    const last = h[--this.heapLen]!;
+    const n = this.heapLen;
+    let i = 0;
+    for (;;) {
+      let child = 2 * i + 1;
+      if (child >= n) break;
+      if (child + 1 < n && h[child + 1]! > h[child]!) child++;
+      if (h[child]! <= last) break;
+      h[i] = h[child]!;
+      i = child;
+    }
+    if (n > 0) h[i] = last;
+    return top;
   }
 }
 
