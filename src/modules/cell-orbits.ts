@@ -35,6 +35,7 @@ export class CellOrbits {
   private readonly alt: Uint8Array;
   private readonly binom: Float64Array;
   private readonly binomWidth: number;
+  private graded = false;
   readonly range: number;
   /** Parity (0 or 1) of the last successful fold. */
   parity = 0;
@@ -56,11 +57,14 @@ export class CellOrbits {
     const uni: number[] = [];
     for (let x = 0; x <= xMax; x++)
       for (let y = 0; y <= degree.y; y++)
-        for (let t = 0; t <= tMax; t++) {
-          const u = (x * yRadix + y) * 2 + t;
-          this.dense[u] = uni.length;
-          uni.push(u);
-        }
+        for (let t = 0; t <= tMax; t++) uni.push((x * yRadix + y) * 2 + t);
+    const ORDER = process.env['QORD'] ?? 'lex';
+    this.graded = ORDER !== 'lex';
+    const tri = (u: number): [number, number, number] => { const t = u & 1; const xy = u >> 1; const y = xy % yRadix; return [(xy - y) / yRadix, y, t]; };
+    if (ORDER === 'graded') uni.sort((a, b) => { const A = tri(a), B = tri(b); return A[0]+A[1]+A[2] - (B[0]+B[1]+B[2]) || a - b; });
+    if (ORDER === 'gradedrev') uni.sort((a, b) => { const A = tri(a), B = tri(b); return A[0]+A[1]+A[2] - (B[0]+B[1]+B[2]) || b - a; });
+    if (ORDER === 'gradedxy') uni.sort((a, b) => { const A = tri(a), B = tri(b); return A[0]+A[1] - (B[0]+B[1]) || a - b; });
+    uni.forEach((u, i) => (this.dense[u] = i));
     this.universal = Int32Array.from(uni);
     const L = uni.length;
     this.letters = L;
@@ -137,7 +141,8 @@ export class CellOrbits {
         const y = xy % yR;
         const x = (xy - y) / yR;
         // x is weakly increasing in a block: the rest of the block needs at least x each
-        if (x * left > rx) break;
+        if (this.graded ? (x + y + t) * left > rx + ry + rt : x * left > rx) break;
+        if (x > rx) continue;
         if (y > ry || t > rt) continue;
         if (!first && d === denseAt[i - 1]! && (t === 1) !== (alt[i] === 1)) continue; // orbit sum vanishes
         denseAt[i] = d;
@@ -165,8 +170,9 @@ export class CellOrbits {
       for (let i = s; i < e; i++) {
         const u = letters[i]!;
         if (u >= dense.length || dense[u]! < 0) return -1;
+        const du = dense[u]!;
         let j = i - 1;
-        while (j >= s && work[j]! > u) {
+        while (j >= s && dense[work[j]!]! > du) {
           if (a) parity ^= 1;
           if (work[j]! & u & 1) parity ^= 1;
           work[j + 1] = work[j]!;

@@ -24,6 +24,15 @@ export interface QuotientRequest {
   /** S_n acts on the ideal: the functionals are the plan's and Frobenius series follow. */
   readonly stable: boolean;
   readonly maxDegree: number;
+  /**
+   * Per θ-degree c, the x+y degree up to which the quotient is expected to live (a guess that
+   * saves work: the run certifies the layer above it, and retries with fullBounds when the
+   * certificate fails). For the built-in ideals the top degree of
+   * [k]_q!·Stir_q(n, k), k = n − c, that is C(k, 2) + (n − k)(k − 1).
+   */
+  readonly expectedBounds: readonly number[];
+  /** Per θ-degree c: maxDegree − 1 − c, the bounds of the stated limit. */
+  readonly fullBounds: readonly number[];
   readonly description: string;
 }
 
@@ -84,14 +93,21 @@ export function quotientRequest(spec: IdealSpec, frobenius: boolean): QuotientRe
   const useSymmetry = stable && frobenius;
   // without S_n acting (or without Frobenius series) one task over the trivial group
   const functionals: QuotientFunctional[] = useSymmetry
-    ? youngPlan(n).map((t) => (process.env['QBREV'] === '1' ? { blocks: [...t.blocks].reverse(), alt: t.modes.map((m) => m === 'alt').reverse(), label: t.label } : { blocks: t.blocks, alt: t.modes.map((m) => m === 'alt'), label: t.label }))
+    ? youngPlan(n).map((t) => (process.env['QPERM'] ? permuted(t, process.env['QPERM']) : process.env['QBREV'] === '1' ? { blocks: [...t.blocks].reverse(), alt: t.modes.map((m) => m === 'alt').reverse(), label: t.label } : { blocks: t.blocks, alt: t.modes.map((m) => m === 'alt'), label: t.label }))
     : [{ blocks: new Array<number>(n).fill(1), alt: new Array<boolean>(n).fill(false), label: 'all' }];
   // over the trivial group every generator is invariant
   const ordered = gens.map((g) => (useSymmetry ? g : { ...g, character: 'sym' as const })).sort((a, b) => total(a) - total(b) || tieBreak(a, b));
+  const cMax = hasTheta ? n : 0;
+  const fullBounds = Array.from({ length: cMax + 1 }, (_, c) => maxDegree - 1 - c);
+  const top = (k: number): number => (k < 1 ? -1 : (k * (k - 1)) / 2 + (n - k) * (k - 1));
+  const expectedBounds =
+    spec.ideal === 'coinvariant' ? fullBounds.map((f, c) => Math.min(f, top(n - c))) : spec.ideal === 'generalized-coinvariant' ? [top(spec.k!)] : fullBounds;
   return {
     input: { n, hasY, hasTheta, generators: ordered, ...(xCap !== undefined ? { xCap } : {}), functionals },
     stable,
     maxDegree,
+    expectedBounds,
+    fullBounds,
     description,
   };
 }
@@ -132,4 +148,9 @@ function popcount(m: number): number {
   let c = 0;
   for (; m; m &= m - 1) c++;
   return c;
+}
+
+function permuted(t: { blocks: readonly number[]; modes: readonly string[]; label: string }, perm: string): QuotientFunctional {
+  const idx = perm.split('').map(Number).filter((i) => i < t.blocks.length);
+  return { blocks: idx.map((i) => t.blocks[i]!), alt: idx.map((i) => t.modes[i] === 'alt'), label: t.label };
 }

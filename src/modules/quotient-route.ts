@@ -10,8 +10,8 @@ import type { QuotientRequest } from './quotient-input.js';
 import { runQuotientTask, type QuotientTask, type QuotientTaskResult } from './quotient-task.js';
 import { solveMultiplicities, youngPlan } from './young-plan.js';
 
-export function quotientTasks(req: QuotientRequest, prime: number, maxDegree: number): QuotientTask[] {
-  return req.input.functionals.map((_, functional) => ({ functional, prime, maxDegree }));
+export function quotientTasks(req: QuotientRequest, prime: number, xyBounds: readonly number[], certify: boolean): QuotientTask[] {
+  return req.input.functionals.map((_, functional) => ({ functional, prime, xyBounds, certify }));
 }
 
 export interface RouteHooks {

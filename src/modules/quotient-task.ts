@@ -53,8 +53,15 @@ export interface QuotientTaskInput {
 export interface QuotientTask {
   readonly functional: number;
   readonly prime: number;
-  /** Cells of total degree up to this one. */
-  readonly maxDegree: number;
+  /** For each θ-degree c: the cells with x-degree + y-degree ≤ xyBounds[c] (−1: none). */
+  readonly xyBounds: readonly number[];
+  /**
+   * Also the certificate cell of each θ-degree, one x+y degree higher: the quotient vanishes
+   * there, and so beyond, when this cell does (with y only its middle cell: the ideal is
+   * stable under Σ x_i∂/∂y_i and Σ y_i∂/∂x_i, so every piece of fixed θ-degree and x+y degree
+   * is an sl_2-module, and a nonzero one has a weight in the middle).
+   */
+  readonly certify: boolean;
 }
 
 export interface QuotientTaskResult {
@@ -67,16 +74,26 @@ export interface QuotientTaskResult {
   readonly stats: { readonly columns: number; readonly rows: number; readonly zero: number; readonly applied: number };
 }
 
-/** The cells of total degree d, in the order the tasks visit them. */
-export function cellsOfTotal(input: QuotientTaskInput, d: number): CellDegree[] {
+/** The cells of total degree d that the task computes, in the order it visits them. */
+export function cellsOfTotal(input: QuotientTaskInput, task: Pick<QuotientTask, 'xyBounds' | 'certify'>, d: number): CellDegree[] {
   const out: CellDegree[] = [];
   const xMax = input.xCap !== undefined ? (input.xCap - 1) * input.n : Infinity;
-  for (let t = input.hasTheta ? Math.min(d, input.n) : 0; t >= 0; t--)
-    for (let y = input.hasY ? d - t : 0; y >= 0; y--) {
-      const x = d - t - y;
-      if (x <= xMax) out.push({ x, y, theta: t });
+  for (let t = input.hasTheta ? Math.min(d, input.n) : 0; t >= 0; t--) {
+    const s = d - t;
+    const bound = task.xyBounds[t] ?? -1;
+    if (s <= bound) {
+      for (let y = input.hasY ? s : 0; y >= 0; y--) if (s - y <= xMax) out.push({ x: s - y, y, theta: t });
+    } else if (task.certify && s === bound + 1) {
+      const y = input.hasY ? Math.floor(s / 2) : 0;
+      out.push({ x: s - y, y, theta: t }); // no representatives beyond the x-cap: zero, as it must
     }
+  }
   return out;
+}
+
+/** Largest total degree the task visits. */
+export function topDegree(task: Pick<QuotientTask, 'xyBounds' | 'certify'>): number {
+  return Math.max(0, ...task.xyBounds.map((b, t) => b + t + (task.certify ? 1 : 0)));
 }
 
 /** The radix of y-exponents in universal letters. */
@@ -97,7 +114,8 @@ export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, on
   const fn = input.functionals[task.functional];
   if (!fn) throw new InputError(`no functional ${task.functional}`, 'functional');
   const p = task.prime;
-  const yR = yRadixOf(input, task.maxDegree);
+  const maxDegree = topDegree(task);
+  const yR = yRadixOf(input, maxDegree);
   const terms = generators.map((g) => g.terms?.map((t): GeneratorTerm => ({ x: t.x, y: t.y, mask: t.mask, coeff: residue(t.num, t.den, p) })));
   const maxGenTotal = Math.max(0, ...generators.map((g) => g.degree[0] + g.degree[1] + g.degree[2]));
   const flipped = fn.alt.map((a) => !a);
@@ -108,8 +126,8 @@ export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, on
   const letters = new Int32Array(n);
   const rows = new RowBuilder(n, p, yR);
 
-  for (let total = 0; total <= task.maxDegree; total++) {
-    for (const cell of cellsOfTotal(input, total)) {
+  for (let total = 0; total <= maxDegree; total++) {
+    for (const cell of cellsOfTotal(input, task, total)) {
       signal?.throwIfAborted();
       const orbits = new CellOrbits(n, fn.blocks, fn.alt, yR, cell, input.xCap);
       const codeList: number[] = [];
@@ -135,7 +153,11 @@ export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, on
           continue;
         }
         const src = cells.get(key(from));
-        if (!src) continue;
+        if (!src) {
+          // a certificate cell's multiplier cell may lie outside the task: all its representatives
+          new CellOrbits(n, fn.blocks, fn.alt, yR, from, input.xCap).enumerate((m) => addRow(g, k, m));
+          continue;
+        }
         // an odd generator squares to zero, so g_k·(g_k·a + earlier) lies among earlier rows too
         const limit = g.degree[2] % 2 === 1 ? k + 1 : k;
         for (let r = 0; r < src.codes.length && ech.rank < codes.length; r++) {

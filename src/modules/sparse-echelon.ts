@@ -11,16 +11,16 @@ import { invMod } from './echelon-mod-p.js';
 
 export class SparseEchelonModP {
   private readonly leadRow: Int32Array;
-  private start = new Int32Array(1024);
-  private length = new Int32Array(1024);
-  private tags = new Int32Array(1024);
-  private cols = new Int32Array(1 << 14);
-  private vals = new Float64Array(1 << 14);
+  private start: Int32Array;
+  private length: Int32Array;
+  private tags: Int32Array;
+  private cols: Int32Array;
+  private vals: Float64Array;
   private used = 0;
   private count = 0;
   private readonly acc: Float64Array;
   private readonly inHeap: Uint8Array;
-  private heap = new Int32Array(256);
+  private heap = new Int32Array(64);
   private heapLen = 0;
   private readonly invP: number;
   /** Entries of stored rows applied so far (a measure of the work). */
@@ -31,6 +31,12 @@ export class SparseEchelonModP {
     readonly width: number,
   ) {
     this.invP = 1 / p;
+    const rows = Math.max(16, width);
+    this.start = new Int32Array(rows);
+    this.length = new Int32Array(rows);
+    this.tags = new Int32Array(rows);
+    this.cols = new Int32Array(4 * rows);
+    this.vals = new Float64Array(4 * rows);
     this.leadRow = new Int32Array(width).fill(-1);
     this.acc = new Float64Array(width);
     this.inHeap = new Uint8Array(width);
