@@ -35,7 +35,6 @@ export class CellOrbits {
   private readonly alt: Uint8Array;
   private readonly binom: Float64Array;
   private readonly binomWidth: number;
-  private graded = false;
   readonly range: number;
   /** Parity (0 or 1) of the last successful fold. */
   parity = 0;
@@ -58,12 +57,6 @@ export class CellOrbits {
     for (let x = 0; x <= xMax; x++)
       for (let y = 0; y <= degree.y; y++)
         for (let t = 0; t <= tMax; t++) uni.push((x * yRadix + y) * 2 + t);
-    const ORDER = process.env['QORD'] ?? 'lex';
-    this.graded = ORDER !== 'lex';
-    const tri = (u: number): [number, number, number] => { const t = u & 1; const xy = u >> 1; const y = xy % yRadix; return [(xy - y) / yRadix, y, t]; };
-    if (ORDER === 'graded') uni.sort((a, b) => { const A = tri(a), B = tri(b); return A[0]+A[1]+A[2] - (B[0]+B[1]+B[2]) || a - b; });
-    if (ORDER === 'gradedrev') uni.sort((a, b) => { const A = tri(a), B = tri(b); return A[0]+A[1]+A[2] - (B[0]+B[1]+B[2]) || b - a; });
-    if (ORDER === 'gradedxy') uni.sort((a, b) => { const A = tri(a), B = tri(b); return A[0]+A[1] - (B[0]+B[1]) || a - b; });
     uni.forEach((u, i) => (this.dense[u] = i));
     this.universal = Int32Array.from(uni);
     const L = uni.length;
@@ -141,8 +134,7 @@ export class CellOrbits {
         const y = xy % yR;
         const x = (xy - y) / yR;
         // x is weakly increasing in a block: the rest of the block needs at least x each
-        if (this.graded ? (x + y + t) * left > rx + ry + rt : x * left > rx) break;
-        if (x > rx) continue;
+        if (x * left > rx) break;
         if (y > ry || t > rt) continue;
         if (!first && d === denseAt[i - 1]! && (t === 1) !== (alt[i] === 1)) continue; // orbit sum vanishes
         denseAt[i] = d;

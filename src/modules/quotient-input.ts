@@ -93,10 +93,11 @@ export function quotientRequest(spec: IdealSpec, frobenius: boolean): QuotientRe
   const useSymmetry = stable && frobenius;
   // without S_n acting (or without Frobenius series) one task over the trivial group
   const functionals: QuotientFunctional[] = useSymmetry
-    ? youngPlan(n).map((t) => (process.env['QPERM'] ? permuted(t, process.env['QPERM']) : process.env['QBREV'] === '1' ? { blocks: [...t.blocks].reverse(), alt: t.modes.map((m) => m === 'alt').reverse(), label: t.label } : { blocks: t.blocks, alt: t.modes.map((m) => m === 'alt'), label: t.label }))
+    ? // the largest block last, where codes are most significant (measured: far shorter reductions)
+      youngPlan(n).map((t) => ({ blocks: [...t.blocks].reverse(), alt: t.modes.map((m) => m === 'alt').reverse(), label: t.label }))
     : [{ blocks: new Array<number>(n).fill(1), alt: new Array<boolean>(n).fill(false), label: 'all' }];
   // over the trivial group every generator is invariant
-  const ordered = gens.map((g) => (useSymmetry ? g : { ...g, character: 'sym' as const })).sort((a, b) => total(a) - total(b) || tieBreak(a, b));
+  const ordered = gens.map((g) => (useSymmetry ? g : { ...g, character: 'sym' as const })).sort((a, b) => total(a) - total(b));
   const cMax = hasTheta ? n : 0;
   const fullBounds = Array.from({ length: cMax + 1 }, (_, c) => maxDegree - 1 - c);
   const top = (k: number): number => (k < 1 ? -1 : (k * (k - 1)) / 2 + (n - k) * (k - 1));
@@ -110,17 +111,6 @@ export function quotientRequest(spec: IdealSpec, frobenius: boolean): QuotientRe
     fullBounds,
     description,
   };
-}
-
-function tieBreak(a: QuotientGenerator, b: QuotientGenerator): number {
-  const m = process.env['QGEN'] ?? '';
-  if (m === 'tfirst') return b.degree[2] - a.degree[2];
-  if (m === 'tlast') return a.degree[2] - b.degree[2];
-  if (m === 'xfirst') return b.degree[0] - a.degree[0];
-  if (m === 'yfirst') return b.degree[1] - a.degree[1];
-  if (m === 'bal') return Math.abs(a.degree[0]-a.degree[1]) - Math.abs(b.degree[0]-b.degree[1]);
-  if (m === 'unbal') return Math.abs(b.degree[0]-b.degree[1]) - Math.abs(a.degree[0]-a.degree[1]);
-  return 0;
 }
 
 function total(g: QuotientGenerator): number {
@@ -150,7 +140,3 @@ function popcount(m: number): number {
   return c;
 }
 
-function permuted(t: { blocks: readonly number[]; modes: readonly string[]; label: string }, perm: string): QuotientFunctional {
-  const idx = perm.split('').map(Number).filter((i) => i < t.blocks.length);
-  return { blocks: idx.map((i) => t.blocks[i]!), alt: idx.map((i) => t.modes[i] === 'alt'), label: t.label };
-}
