@@ -174,6 +174,7 @@ export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, on
       dims.push(codes.length - ech.rank);
       stats.columns += codes.length;
       stats.applied += ech.applied;
+      if (process.env['QCELLS']) console.log('cell', cell.x, cell.y, cell.theta, 'cols', codes.length, 'rank', ech.rank, 'applied', ech.applied, 'entries', ech.entries);
       onCell?.(codes.length);
     }
     // a cell serves as multiplier cell up to one generator degree above it

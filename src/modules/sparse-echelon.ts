@@ -22,6 +22,7 @@ export class SparseEchelonModP {
   private readonly inHeap: Uint8Array;
   private heap = new Int32Array(64);
   private heapLen = 0;
+  private out = { c: new Int32Array(64), v: new Float64Array(64) };
   private readonly invP: number;
   /** Entries of stored rows applied so far (a measure of the work). */
   applied = 0;
@@ -83,24 +84,31 @@ export class SparseEchelonModP {
         this.store(tag);
         return true;
       }
-      // acc ← acc − a·(stored row k); its lead cancels exactly
-      acc[lead] = 0;
-      const f = p - a;
-      const s = this.start[k]!;
-      const e = s + this.length[k]!;
-      const pc = this.cols;
-      const pv = this.vals;
-      for (let j = s + 1; j < e; j++) {
-        const c = pc[j]!;
-        const x = acc[c]! + f * pv[j]!;
-        let y = x - Math.floor(x * inv) * p;
-        if (y < 0) y += p;
-        else if (y >= p) y -= p;
-        acc[c] = y;
-        if (this.inHeap[c] === 0 && y !== 0) this.push(c);
-      }
-      this.applied += e - s;
+      this.subtract(lead, a, k);
     }
+  }
+
+  /** acc ← acc − a·(stored row k), which leads at `lead`; the lead cancels exactly. */
+  private subtract(lead: number, a: number, k: number): void {
+    const p = this.p;
+    const inv = this.invP;
+    const acc = this.acc;
+    acc[lead] = 0;
+    const f = p - a;
+    const s = this.start[k]!;
+    const e = s + this.length[k]!;
+    const pc = this.cols;
+    const pv = this.vals;
+    for (let j = s + 1; j < e; j++) {
+      const c = pc[j]!;
+      const x = acc[c]! + f * pv[j]!;
+      let y = x - Math.floor(x * inv) * p;
+      if (y < 0) y += p;
+      else if (y >= p) y -= p;
+      acc[c] = y;
+      if (this.inHeap[c] === 0 && y !== 0) this.push(c);
+    }
+    this.applied += e - s;
   }
 
   /** Move the accumulator's nonzero entries (the heap holds them) into a stored row. */
@@ -112,12 +120,7 @@ export class SparseEchelonModP {
       this.length = grow32(this.length);
       this.tags = grow32(this.tags);
     }
-    while (this.used + this.heapLen > this.cols.length) {
-      this.cols = grow32(this.cols);
-      this.vals = grow64(this.vals);
-    }
-    const s = this.used;
-    let o = s;
+    let o = 0;
     let inv = 0;
     for (;;) {
       const c = this.pop();
@@ -125,11 +128,20 @@ export class SparseEchelonModP {
       const v = this.acc[c]!;
       if (v === 0) continue;
       this.acc[c] = 0;
-      if (o === s) inv = invMod(v, p);
-      this.cols[o] = c;
-      this.vals[o] = o === s ? 1 : (v * inv) % p;
+      if (o === 0) inv = invMod(v, p);
+      if (o === this.out.c.length) this.out = { c: grow32(this.out.c), v: grow64(this.out.v) };
+      this.out.c[o] = c;
+      this.out.v[o] = o === 0 ? 1 : (v * inv) % p;
       o++;
     }
+    while (this.used + o > this.cols.length) {
+      this.cols = grow32(this.cols);
+      this.vals = grow64(this.vals);
+    }
+    const s = this.used;
+    this.cols.set(this.out.c.subarray(0, o), s);
+    this.vals.set(this.out.v.subarray(0, o), s);
+    o += s;
     this.start[k] = s;
     this.length[k] = o - s;
     this.tags[k] = tag;
