@@ -179,6 +179,46 @@ export class CellOrbits {
     return code;
   }
 
+  /** Code of a representative whose letters (universal, sorted in blocks) all lie in this cell. */
+  codeOf(letters: ArrayLike<number>): number {
+    const { dense, term, letters: L } = this;
+    let code = 0;
+    for (let i = 0; i < this.n; i++) code += term[i * L + dense[letters[i]!]!]!;
+    return code;
+  }
+
+  /**
+   * fold() for a representative `rep` (sorted in blocks, code `repCode` in this cell) whose
+   * letter at position i is raised to u > rep[i] (in the letter order): the letter moves right
+   * inside its block, and only the positions it passes change their code terms.
+   */
+  foldRaised(rep: ArrayLike<number>, repCode: number, i: number, u: number): number {
+    const { dense, term, letters: L, alt, blockOfPos, blockStart } = this;
+    if (u >= dense.length || dense[u]! < 0) return -1;
+    const du = dense[u]!;
+    const end = blockStart[blockOfPos[i]! + 1]!;
+    const a = alt[i] === 1;
+    let code = repCode - term[i * L + dense[rep[i]!]!]!;
+    let parity = 0;
+    let j = i;
+    // positions i+1.. whose letters are below u shift one place left
+    while (j + 1 < end) {
+      const w = rep[j + 1]!;
+      const dw = dense[w]!;
+      if (dw > du) break;
+      if (dw === du) {
+        if ((u & 1) !== (a ? 1 : 0)) return -1; // equal letters kill the orbit sum
+        break;
+      }
+      code += term[j * L + dw]! - term[(j + 1) * L + dw]!;
+      if (a) parity ^= 1;
+      if (w & u & 1) parity ^= 1;
+      j++;
+    }
+    this.parity = parity;
+    return code + term[j * L + du]!;
+  }
+
   /** Universal letters (by position, sorted in blocks) of a representative code. */
   decode(code: number, out: Int32Array): void {
     const { blocks, blockStart, stride, radixOf, universal } = this;

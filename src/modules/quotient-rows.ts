@@ -45,13 +45,12 @@ export class RowBuilder {
     if (g.power) {
       const [a, b, c] = g.power;
       const shift = (a * this.yRadix + b) * 2 + c;
+      const mCode = orbits.codeOf(m);
       let thetaBefore = 0;
       for (let i = 0; i < n; i++) {
         const u = m[i]!;
         if (!(c && u & 1)) {
-          product.set(m);
-          product[i] = u + shift;
-          const code = orbits.fold(product, work);
+          const code = orbits.foldRaised(m, mCode, i, u + shift);
           if (code >= 0) this.push(code, (orbits.parity ^ (c ? thetaBefore & 1 : 0)) === 1 ? p - 1 : 1);
         }
         thetaBefore += u & 1;

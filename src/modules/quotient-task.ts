@@ -134,7 +134,8 @@ export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, on
       orbits.enumerate((_, code) => codeList.push(code));
       // columns by increasing code: rows come with small leads first, and reduce through short chains
       const codes = Float64Array.from(codeList).sort();
-      const column = new KeyTable(Infinity);
+      // a flat table when the code range is small against the columns, hashed otherwise
+      const column = new KeyTable(orbits.range <= Math.max(1 << 16, 8 * codes.length) ? orbits.range : Infinity);
       codes.forEach((c, i) => column.set(c, i));
       const ech = new SparseEchelonModP(p, codes.length);
       const addRow = (g: QuotientGenerator, k: number, m: Int32Array): void => {
@@ -174,7 +175,6 @@ export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, on
       dims.push(codes.length - ech.rank);
       stats.columns += codes.length;
       stats.applied += ech.applied;
-      if (process.env['QCELLS']) console.log('cell', cell.x, cell.y, cell.theta, 'cols', codes.length, 'rank', ech.rank, 'applied', ech.applied, 'entries', ech.entries);
       onCell?.(codes.length);
     }
     // a cell serves as multiplier cell up to one generator degree above it
