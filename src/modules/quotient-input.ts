@@ -12,7 +12,7 @@ import { numerator, denominator } from '../core/rational.js';
 import { rationalCoeffs } from './coefficients.js';
 import { IDEAL_NAMES, type IdealSpec } from './ideals.js';
 import { parseSuperpoly } from './parse-superpoly.js';
-import type { QuotientFunctional, QuotientGenerator, QuotientTaskInput } from './quotient-task.js';
+import type { QuotientFunctional, QuotientGenerator, QuotientTaskInput } from './quotient-spec.js';
 import { rawShape, type RawPoly } from './raw-superpoly.js';
 import { SuperAlgebra } from './super-algebra.js';
 import { SuperSpace } from './superspace.js';
@@ -21,8 +21,10 @@ import { youngPlan } from './young-plan.js';
 
 export interface QuotientRequest {
   readonly input: QuotientTaskInput;
-  /** S_n acts on the ideal: the functionals are the plan's and Frobenius series follow. */
+  /** S_n acts on the ideal (Frobenius series are possible). */
   readonly stable: boolean;
+  /** The functionals are the plan's (young-plan), not the one trivial-group task. */
+  readonly symmetric: boolean;
   readonly maxDegree: number;
   /**
    * Per θ-degree c, the x+y degree up to which the quotient is expected to live (a guess that
@@ -106,6 +108,7 @@ export function quotientRequest(spec: IdealSpec, frobenius: boolean): QuotientRe
   return {
     input: { n, hasY, hasTheta, generators: ordered, ...(xCap !== undefined ? { xCap } : {}), functionals },
     stable,
+    symmetric: useSymmetry,
     maxDegree,
     expectedBounds,
     fullBounds,

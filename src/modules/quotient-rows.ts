@@ -1,20 +1,22 @@
 /**
  * The rows of the quotient route: the folded product g·m of a generator and an orbit
- * representative, as (column, residue) pairs of the target cell. Power sums
+ * representative, as (column, value) pairs of the target cell; values are residues mod p, or
+ * exact integers when the builder's modulus is 0 (integer generators: one build serves every
+ * prime). Power sums
  * Σ_i x_i^a y_i^b θ_i^c (every built-in generator but the elementary ones) add one letter
  * vector at each position in turn; other generators multiply term by term. The θ sign of
  * g·m puts the generator's θ's first (θ_T θ_S re-sorted), then the fold adds the sorting sign.
  */
 import { CellOrbits } from './cell-orbits.js';
 import type { KeyTable } from './key-table.js';
-import type { QuotientGenerator } from './quotient-task.js';
+import type { QuotientGenerator } from './quotient-spec.js';
 import { thetaProductSign } from './superspace.js';
 
 export interface GeneratorTerm {
   readonly x: readonly number[];
   readonly y: readonly number[];
   readonly mask: number;
-  /** Residue mod p. */
+  /** Residue mod p, or the integer itself with modulus 0. */
   readonly coeff: number;
 }
 
@@ -35,6 +37,16 @@ export class RowBuilder {
     this.work = new Int32Array(n);
   }
 
+  /** The row's values as residues mod q (after an exact build). */
+  residues(q: number, out: Float64Array): Float64Array {
+    const o = out.length < this.len ? new Float64Array(this.vals.length) : out;
+    for (let i = 0; i < this.len; i++) {
+      const v = this.vals[i]! % q;
+      o[i] = v < 0 ? v + q : v;
+    }
+    return o;
+  }
+
   /**
    * Build the row of g·m in the cell of `orbits` (columns through `column`: code → index);
    * returns its length (entries in `cols`, `vals`, distinct columns, nonzero residues).
@@ -51,7 +63,7 @@ export class RowBuilder {
         const u = m[i]!;
         if (!(c && u & 1)) {
           const code = orbits.foldRaised(m, mCode, i, u + shift);
-          if (code >= 0) this.push(code, (orbits.parity ^ (c ? thetaBefore & 1 : 0)) === 1 ? p - 1 : 1);
+          if (code >= 0) this.push(code, (orbits.parity ^ (c ? thetaBefore & 1 : 0)) === 1 ? (p ? p - 1 : -1) : 1);
         }
         thetaBefore += u & 1;
       }
@@ -64,7 +76,7 @@ export class RowBuilder {
         const code = orbits.fold(product, work);
         if (code < 0) continue;
         const neg = (orbits.parity === 1) !== (thetaProductSign(t.mask, mMask) < 0);
-        this.push(code, neg ? (p - t.coeff) % p : t.coeff);
+        this.push(code, neg ? (p ? (p - t.coeff) % p : -t.coeff) : t.coeff);
       }
     }
     return this.finish(column);
@@ -87,7 +99,7 @@ export class RowBuilder {
     for (let i = 0; i < this.len; i++) {
       let j = 0;
       while (j < o && codes[j] !== codes[i]) j++;
-      if (j < o) vals[j] = (vals[j]! + vals[i]!) % p;
+      if (j < o) vals[j] = p ? (vals[j]! + vals[i]!) % p : vals[j]! + vals[i]!;
       else {
         codes[o] = codes[i]!;
         vals[o++] = vals[i]!;
