@@ -49,3 +49,14 @@ export function mergeQuotientTasks(req: QuotientRequest, results: readonly Quoti
   });
   return out;
 }
+
+/**
+ * The first prime's certificate cells that are not zero (as "x/y/θ" degrees), or undefined when
+ * every one vanishes: then the quotient vanishes above the computed cells.
+ */
+export function certificateFailure(req: QuotientRequest, results: readonly QuotientTaskResult[]): string | undefined {
+  const first = results[0]!;
+  const cells = mergeQuotientTasks(req, results, 0);
+  const bad = first.degrees.filter((d, c) => first.certificate[c] && (cells.find((x) => x.degree.join() === d.join())?.dim ?? 0) > 0);
+  return bad.length ? `nonzero at ${bad.map((d) => d.join('/')).join(', ')}` : undefined;
+}

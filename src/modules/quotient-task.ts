@@ -31,7 +31,12 @@ interface CellData {
   readonly orbits: CellOrbits;
 }
 
-export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, onCell?: (columns: number) => void, signal?: AbortSignal): QuotientTaskResult {
+export function runQuotientTask(
+  input: QuotientTaskInput,
+  task: QuotientTask,
+  onCell?: (columns: number, cell: CellDegree, certificate: boolean) => void,
+  signal?: AbortSignal,
+): QuotientTaskResult {
   const { n, generators } = input;
   const fn = input.functionals[task.functional];
   if (!fn) throw new InputError(`no functional ${task.functional}`, 'functional');
@@ -118,7 +123,7 @@ export function runQuotientTask(input: QuotientTaskInput, task: QuotientTask, on
       primes.forEach((_, i) => dims[i]!.push(echs[i] ? N - echs[i]!.rank : -1));
       stats.columns += N;
       for (const e of echs) stats.applied += e?.applied ?? 0;
-      onCell?.(N);
+      onCell?.(N, cell, cert);
     }
     // a cell serves as multiplier cell up to one generator degree above it
     for (const [k, c] of cells) if (c.orbits.degree.x + c.orbits.degree.y + c.orbits.degree.theta < total - maxGenTotal) cells.delete(k);
