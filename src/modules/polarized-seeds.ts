@@ -91,8 +91,13 @@ function polarize(space: SuperSpace, g: FlatPoly, j: number, primes: readonly nu
   const R = space.radix;
   const mb = space.maskBase;
   const table = new KeyTable(Infinity);
-  const keys: number[] = [];
-  const acc = primes.map(() => [] as number[]);
+  const cap = g.keys.length * n;
+  const keys = new Float64Array(cap);
+  const acc = primes.map(() => new Float64Array(cap));
+  const [p0, p1] = [primes[0]!, primes[1] ?? 0];
+  const [c0, c1] = [g.coeffs[0]!, g.coeffs[1]];
+  const [a0, a1] = [acc[0]!, acc[1]];
+  let size = 0;
   const x = new Int32Array(n);
   const y = new Int32Array(n);
   for (let t = 0; t < g.keys.length; t++) {
@@ -107,53 +112,46 @@ function polarize(space: SuperSpace, g: FlatPoly, j: number, primes: readonly nu
       const k2 = key + (space.powers[n + i]! - j * space.powers[i]!) * mb;
       let at = table.get(k2);
       if (at < 0) {
-        table.set(k2, (at = keys.length));
-        keys.push(k2);
-        for (const a of acc) a.push(0);
+        table.set(k2, (at = size++));
+        keys[at] = k2;
       }
-      primes.forEach((p, pi) => {
-        const a = acc[pi]!;
-        a[at] = (a[at]! + ((ff % p) * g.coeffs[pi]![t]!) % p) % p;
-      });
+      a0[at] = (a0[at]! + ((ff % p0) * c0[t]!) % p0) % p0;
+      if (a1) a1[at] = (a1[at]! + ((ff % p1) * c1![t]!) % p1) % p1;
     }
   }
-  const live: number[] = [];
-  for (let t = 0; t < keys.length; t++) if (acc.some((a) => a[t] !== 0)) live.push(t);
-  return { keys: Float64Array.from(live, (t) => keys[t]!), coeffs: acc.map((a) => Float64Array.from(live, (t) => a[t]!)) };
+  let live = 0;
+  for (let t = 0; t < size; t++) {
+    if (a0[t] === 0 && (!a1 || a1[t] === 0)) continue;
+    keys[live] = keys[t]!;
+    a0[live] = a0[t]!;
+    if (a1) a1[live] = a1[t]!;
+    live++;
+  }
+  return { keys: keys.slice(0, live), coeffs: acc.map((a) => a.slice(0, live)) };
 }
 
 function toSupport(space: SuperSpace, g: FlatPoly, primes: readonly number[]): SeedSupport {
-  const s = seedSupportWithZeros(space, primes[0]!, g);
-  if (primes.length < 2) return s;
-  const order = sortedOrder(g.keys);
-  return { ...s, coeffs2: Float64Array.from(order, (t) => g.coeffs[1]![t]!) };
-}
-
-function sortedOrder(keys: Float64Array): Int32Array {
-  return Int32Array.from(keys.keys()).sort((a, b) => keys[a]! - keys[b]!);
-}
-
-/** The support of g in key order, zero residues mod the first prime included (the second prime may need them). */
-function seedSupportWithZeros(space: SuperSpace, p: number, g: FlatPoly): SeedSupport {
-  const order = sortedOrder(g.keys);
+  // in key order; zero residues mod the first prime stay (the second prime may need them)
+  const at = new KeyTable(Infinity);
+  g.keys.forEach((k, t) => at.set(k, t));
+  const keys = g.keys.slice().sort();
   const n = space.n;
-  const count = order.length;
+  const count = keys.length;
   const xs = new Int32Array(count * n);
   const ys = new Int32Array(count * n);
   const masks = new Int32Array(count);
-  const keys = new Float64Array(count);
-  const coeffs = new Float64Array(count);
+  const coeffs = primes.map(() => new Float64Array(count));
   const x = new Int32Array(n);
   const y = new Int32Array(n);
-  order.forEach((t, o) => {
-    keys[o] = g.keys[t]!;
-    coeffs[o] = g.coeffs[0]![t]!;
-    masks[o] = space.decode(g.keys[t]!, x, y);
+  for (let o = 0; o < count; o++) {
+    const t = at.get(keys[o]!);
+    coeffs.forEach((c, pi) => (c[o] = g.coeffs[pi]![t]!));
+    masks[o] = space.decode(keys[o]!, x, y);
     xs.set(x, o * n);
     ys.set(y, o * n);
-  });
-  const [dx, dy] = [sumRange(xs, 0, n), sumRange(ys, 0, n)];
-  return { space, p, count, keys, coeffs, xs, ys, masks, degree: [dx, space.hasY ? dy : 0, popcount(masks[0] ?? 0)] };
+  }
+  const degree: [number, number, number] = [sumRange(xs, 0, n), space.hasY ? sumRange(ys, 0, n) : 0, popcount(masks[0] ?? 0)];
+  return { space, p: primes[0]!, count, keys, coeffs: coeffs[0]!, ...(primes.length > 1 ? { coeffs2: coeffs[1]! } : {}), xs, ys, masks, degree };
 }
 
 function sumRange(a: Int32Array, s: number, len: number): number {
