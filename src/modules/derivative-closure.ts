@@ -117,6 +117,12 @@ function incrementalRanks(builder: DerivativeMatrixBuilder, seeds: readonly Seed
       if (m.len === 0) return;
       const lo = firstRow[ci]!;
       const count = m.rows - lo;
+      // every column seen so far is a pivot for every prime: these rows add nothing
+      if (echelons.every((perCell) => perCell[ci]!.rank === m.cols)) {
+        firstRow[ci] = m.rows;
+        m.len = 0;
+        return;
+      }
       // group the entries by row (counting sort), then insert row by row
       const start = new Int32Array(count + 1);
       for (let e = 0; e < m.len; e++) start[m.r[e]! - lo + 1]!++;
@@ -130,8 +136,8 @@ function incrementalRanks(builder: DerivativeMatrixBuilder, seeds: readonly Seed
         vals[0]![at] = m.v[e]!;
         if (m.v2) vals[1]![at] = m.v2[e]!;
       }
-      // short rows first, as in directRank (less fill-in)
-      const order = Array.from({ length: count }, (_, r) => r).sort((a, b) => start[a + 1]! - start[a]! - (start[b + 1]! - start[b]!));
+      // short rows first, as in directRank (less fill-in): a counting sort by length
+      const order = rowsByLength(start, count);
       echelons.forEach((perCell, pi) => {
         const ech = perCell[ci]!;
         const v = vals[pi] ?? vals[0]!;
@@ -152,6 +158,18 @@ function incrementalRanks(builder: DerivativeMatrixBuilder, seeds: readonly Seed
   }
   flush();
   return echelons.map((perCell) => perCell.map((e) => e.rank));
+}
+
+/** Row indices 0..count−1 by increasing length (start[r + 1] − start[r]), stable. */
+function rowsByLength(start: Int32Array, count: number): Int32Array {
+  let maxLen = 0;
+  for (let r = 0; r < count; r++) maxLen = Math.max(maxLen, start[r + 1]! - start[r]!);
+  const bucket = new Int32Array(maxLen + 2);
+  for (let r = 0; r < count; r++) bucket[start[r + 1]! - start[r]! + 1]!++;
+  for (let l = 0; l <= maxLen; l++) bucket[l + 1]! += bucket[l]!;
+  const order = new Int32Array(count);
+  for (let r = 0; r < count; r++) order[bucket[start[r + 1]! - start[r]!]!++] = r;
+  return order;
 }
 
 /**
