@@ -27,8 +27,8 @@ import { seedTerms, type SeedSpec } from './seeds.js';
 import { mergeRuns } from './merge-runs.js';
 import { parallelRanks } from './parallel-ranks.js';
 import type { YoungTask } from './young-plan.js';
-import { independentPolarizedSeeds, polarizationReducible } from './polarized-seeds.js';
-import type { SuperAlgebra, SuperPoly } from './super-algebra.js';
+import { polarizationReducible, polarizedSeeds } from './polarized-seeds.js';
+import type { SuperPoly } from './super-algebra.js';
 
 export interface ModuleSpec extends SeedSpec {
   /** Operator family names: x, y, theta, polar1, polar2, … */
@@ -140,8 +140,13 @@ export function computeModule(spec: ModuleSpec, options: ModuleOptions = {}): Mo
       const chi = chiOf(sp.character);
       if (method === 'young' && !derivOnly) {
         const orders = ops.flatMap((o) => (o.kind === 'polar' ? [o.order] : []));
-        const seeds = independentPolarizedSeeds(sp.alg as SuperAlgebra<number>, sp.f as SuperPoly<number>, orders, p);
-        return cellsFromRanks(spec.n, degreeBox(seeds), chi, derivativeRanks(seeds, dops, chi, [p], p, hooks)[0]!, mirrorHolds(seeds, dops));
+        // both primes from one enumeration of the stacked matrices (seeds carry both residues)
+        const both = !options.onePrime && (p === p1 || p === p2) ? [p1, p2] : [p];
+        const fs = both.map((q) => (q === p ? sp.f : buildSeedPolynomial(spec.n, terms, primeCoeffs(q), needs).f) as SuperPoly<number>);
+        const seeds = polarizedSeeds(sp.alg.space, fs, orders, both);
+        const ranks = derivativeRanks(seeds, dops, chi, both, both[0]!, hooks);
+        both.forEach((q, i) => cache.set(q, cellsFromRanks(spec.n, degreeBox(seeds), chi, ranks[i]!, mirrorHolds(seeds, dops))));
+        return cache.get(p)!;
       }
       if (method === 'young') {
         if (exactSeed && (p === p1 || p === p2)) {

@@ -79,7 +79,10 @@ export function derivativeRanks(
   let done = 0;
   for (const ti of which) {
     hooks.signal?.throwIfAborted();
-    const builder = new DerivativeMatrixBuilder(space, box, plan[ti]!, chi, modulus, seeds.length === 1);
+    // seeds carrying a second prime's coefficients: one enumeration makes both primes' entries
+    const dual = seeds.length > 1 && primes.length === 2 && modulus === primes[0] && seeds.every((s) => s.coeffs2);
+    if (seeds.length > 1 && primes.length > 1 && !dual) throw new RangeError('several seeds with several primes need the seeds’ coefficients for both primes');
+    const builder = new DerivativeMatrixBuilder(space, box, plan[ti]!, chi, modulus, seeds.length === 1, dual ? primes[1] : 0);
     if (seeds.length === 1) {
       builder.addSeed(seeds[0]!, ops);
       primes.forEach((p, pi) => {
@@ -114,26 +117,34 @@ function incrementalRanks(builder: DerivativeMatrixBuilder, seeds: readonly Seed
       if (m.len === 0) return;
       const lo = firstRow[ci]!;
       const count = m.rows - lo;
+      // every column seen so far is a pivot for every prime: these rows add nothing
+      if (echelons.every((perCell) => perCell[ci]!.rank === m.cols)) {
+        firstRow[ci] = m.rows;
+        m.len = 0;
+        return;
+      }
       // group the entries by row (counting sort), then insert row by row
       const start = new Int32Array(count + 1);
       for (let e = 0; e < m.len; e++) start[m.r[e]! - lo + 1]!++;
       for (let r = 0; r < count; r++) start[r + 1]! += start[r]!;
       const fill = start.slice(0, count);
       const cols = new Int32Array(m.len);
-      const vals = new Float64Array(m.len);
+      const vals = primes.map((_, pi) => (pi === 0 || m.v2 ? new Float64Array(m.len) : undefined));
       for (let e = 0; e < m.len; e++) {
         const at = fill[m.r[e]! - lo]!++;
         cols[at] = m.c[e]!;
-        vals[at] = m.v[e]!;
+        vals[0]![at] = m.v[e]!;
+        if (m.v2) vals[1]![at] = m.v2[e]!;
       }
-      // short rows first, as in directRank (less fill-in)
-      const order = Array.from({ length: count }, (_, r) => r).sort((a, b) => start[a + 1]! - start[a]! - (start[b + 1]! - start[b]!));
-      echelons.forEach((perCell) => {
+      // short rows first, as in directRank (less fill-in): a counting sort by length
+      const order = rowsByLength(start, count);
+      echelons.forEach((perCell, pi) => {
         const ech = perCell[ci]!;
+        const v = vals[pi] ?? vals[0]!;
         for (const r of order) {
           // every column seen so far is a pivot: nothing more can be independent
           if (ech.rank === m.cols) break;
-          ech.insert(cols.subarray(start[r]!), vals.subarray(start[r]!), start[r + 1]! - start[r]!);
+          ech.insert(cols.subarray(start[r]!), v.subarray(start[r]!), start[r + 1]! - start[r]!);
         }
       });
       firstRow[ci] = m.rows;
@@ -147,6 +158,18 @@ function incrementalRanks(builder: DerivativeMatrixBuilder, seeds: readonly Seed
   }
   flush();
   return echelons.map((perCell) => perCell.map((e) => e.rank));
+}
+
+/** Row indices 0..count−1 by increasing length (start[r + 1] − start[r]), stable. */
+function rowsByLength(start: Int32Array, count: number): Int32Array {
+  let maxLen = 0;
+  for (let r = 0; r < count; r++) maxLen = Math.max(maxLen, start[r + 1]! - start[r]!);
+  const bucket = new Int32Array(maxLen + 2);
+  for (let r = 0; r < count; r++) bucket[start[r + 1]! - start[r]! + 1]!++;
+  for (let l = 0; l <= maxLen; l++) bucket[l + 1]! += bucket[l]!;
+  const order = new Int32Array(count);
+  for (let r = 0; r < count; r++) order[bucket[start[r + 1]! - start[r]!]!++] = r;
+  return order;
 }
 
 /**

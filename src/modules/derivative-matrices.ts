@@ -34,6 +34,8 @@ export interface CellMatrix {
   r: Int32Array;
   c: Int32Array;
   v: Float64Array;
+  /** The same entries mod the second prime (builders with modulus2, seeds with coeffs2). */
+  v2?: Float64Array;
 }
 
 export interface DegreeBox {
@@ -67,6 +69,7 @@ export class DerivativeMatrixBuilder {
   private readonly blockEnd: Uint8Array;
   private readonly coder: BlockCoder;
   private readonly fall: Float64Array;
+  private readonly fall2: Float64Array;
 
   constructor(
     readonly space: SuperSpace,
@@ -75,9 +78,11 @@ export class DerivativeMatrixBuilder {
     readonly chi: SeedChi,
     readonly modulus: number,
     private readonly singleSeed: boolean,
+    /** A second prime whose entries are made in the same enumeration (0: none). */
+    readonly modulus2 = 0,
   ) {
     const count = box.x * box.y * box.theta;
-    for (let i = 0; i < count; i++) this.cells.push({ rows: 0, cols: 0, len: 0, r: new Int32Array(64), c: new Int32Array(64), v: new Float64Array(64) });
+    for (let i = 0; i < count; i++) this.cells.push({ rows: 0, cols: 0, len: 0, r: new Int32Array(64), c: new Int32Array(64), v: new Float64Array(64), ...(modulus2 ? { v2: new Float64Array(64) } : {}) });
     const n = space.n;
     this.block = blockOf(n, task.blocks);
     // In each block, enumerate the side whose fold kills repeated θ-free letters (strict
@@ -105,15 +110,8 @@ export class DerivativeMatrixBuilder {
     }
     this.coder = new BlockCoder(space, this.block);
     this.targetIndex = this.newIndex();
-    const R = space.radix;
-    this.fall = new Float64Array(R * R);
-    for (let e = 0; e < R; e++) {
-      let v = 1;
-      for (let a = 0; a <= e; a++) {
-        this.fall[e * R + a] = v;
-        v = modulus ? (v * (e - a)) % modulus : v * (e - a);
-      }
-    }
+    this.fall = fallingTable(space.radix, modulus);
+    this.fall2 = fallingTable(space.radix, modulus2);
   }
 
   /** Orbit code → row or column number in its cell. */
@@ -143,30 +141,34 @@ export class DerivativeMatrixBuilder {
     let off = 0;
     let gMask = 0;
     let gCoeff = 0;
+    let gCoeff2 = 0;
+    const { modulus2, fall2 } = this;
+    const coeffs2 = modulus2 ? seed.coeffs2 : undefined;
+    if (modulus2 && !coeffs2) throw new RangeError('a builder with a second prime needs seeds with coeffs2');
 
-    const push = (cell: CellMatrix, r: number, c: number, v: number): void => {
+    const push = (cell: CellMatrix, r: number, c: number, v: number, w: number): void => {
       if (cell.len === cell.r.length) {
         const cap = cell.r.length * 2;
-        const r2 = new Int32Array(cap);
-        r2.set(cell.r);
-        cell.r = r2;
-        const c2 = new Int32Array(cap);
-        c2.set(cell.c);
-        cell.c = c2;
-        const v2 = new Float64Array(cap);
-        v2.set(cell.v);
-        cell.v = v2;
+        cell.r = grow(cell.r, new Int32Array(cap));
+        cell.c = grow(cell.c, new Int32Array(cap));
+        cell.v = grow(cell.v, new Float64Array(cap));
+        if (cell.v2) cell.v2 = grow(cell.v2, new Float64Array(cap));
       }
       cell.r[cell.len] = r;
       cell.c[cell.len] = c;
       cell.v[cell.len] = v;
+      if (cell.v2) cell.v2[cell.len] = w;
       cell.len++;
     };
 
-    const leaf = (aTot: number, bTot: number, cTot: number, tMask: number, val: number, opCode: number, tgCode: number, parity: number): void => {
+    const leaf = (aTot: number, bTot: number, cTot: number, tMask: number, val: number, val2: number, opCode: number, tgCode: number, parity: number): void => {
       let v = modulus ? (val * gCoeff) % modulus : val * gCoeff;
-      if (v === 0) return;
-      if ((thetaDerivativeSign(tMask, gMask) < 0) !== (parity === 1)) v = -v;
+      let w = modulus2 ? (val2 * gCoeff2) % modulus2 : 0;
+      if (v === 0 && w === 0) return;
+      if ((thetaDerivativeSign(tMask, gMask) < 0) !== (parity === 1)) {
+        v = -v;
+        w = -w;
+      }
       const cell = cells[boxIndex(box, Sx - aTot, Sy - bTot, St - cTot)]!;
       let r = opArr ? opArr[opCode]! : opIndex.get(opCode);
       if (r === -2) {
@@ -178,7 +180,7 @@ export class DerivativeMatrixBuilder {
         c = cell.cols++;
         tgIndex.set(tgCode, c);
       }
-      push(cell, r, c, v);
+      push(cell, r, c, v, w);
     };
 
     // letters of the folded side already used in each block (a repetition kills the fold)
@@ -190,9 +192,9 @@ export class DerivativeMatrixBuilder {
 
     // opCode and tgCode: the orbit codes of both sides so far (each block's representative
     // side adds its letters as they come, the folded side when its block is complete)
-    const rec = (i: number, aTot: number, bTot: number, cTot: number, tMask: number, val: number, prev: number, opCode: number, tgCode: number, parity: number): void => {
+    const rec = (i: number, aTot: number, bTot: number, cTot: number, tMask: number, val: number, val2: number, prev: number, opCode: number, tgCode: number, parity: number): void => {
       if (i === n) {
-        leaf(aTot, bTot, cTot, tMask, val, opCode, tgCode, parity);
+        leaf(aTot, bTot, cTot, tMask, val, val2, opCode, tgCode, parity);
         return;
       }
       const ex = xs[off + i]!;
@@ -210,8 +212,10 @@ export class DerivativeMatrixBuilder {
       const fKill = foldKill[i]!;
       for (let a = 0; a <= maxA; a++) {
         const va = a ? (modulus ? (val * fall[ex * R + a]!) % modulus : val * fall[ex * R + a]!) : val;
+        const va2 = a && modulus2 ? (val2 * fall2[ex * R + a]!) % modulus2 : val2;
         for (let b = 0; b <= maxB; b++) {
           const vb = b ? (modulus ? (va * fall[ey * R + b]!) % modulus : va * fall[ey * R + b]!) : va;
+          const vb2 = b && modulus2 ? (va2 * fall2[ey * R + b]!) % modulus2 : va2;
           for (let t = 0; t <= maxT; t++) {
             const opLetter = (a * R + b) * 2 + t;
             const tgLetter = ((ex - a) * R + (ey - b)) * 2 + (si - t);
@@ -250,9 +254,9 @@ export class DerivativeMatrixBuilder {
               const u = block[i]! * letterSpace + foldLetter;
               if (used[u]) continue;
               used[u] = 1;
-              rec(i + 1, aTot + a, bTot + b, cTot + t, mask, vb, repLetter, oc, tc, par);
+              rec(i + 1, aTot + a, bTot + b, cTot + t, mask, vb, vb2, repLetter, oc, tc, par);
               used[u] = 0;
-            } else rec(i + 1, aTot + a, bTot + b, cTot + t, mask, vb, repLetter, oc, tc, par);
+            } else rec(i + 1, aTot + a, bTot + b, cTot + t, mask, vb, vb2, repLetter, oc, tc, par);
           }
         }
       }
@@ -262,7 +266,8 @@ export class DerivativeMatrixBuilder {
       off = t * n;
       gMask = seed.masks[t]!;
       gCoeff = seed.coeffs[t]!;
-      rec(0, 0, 0, 0, 0, 1, -1, 0, 0, 0);
+      gCoeff2 = coeffs2 ? coeffs2[t]! : 0;
+      rec(0, 0, 0, 0, 0, 1, 1, -1, 0, 0, 0);
     }
   }
 
@@ -271,4 +276,22 @@ export class DerivativeMatrixBuilder {
     this.opShared ??= this.newIndex();
     return this.opShared;
   }
+}
+
+/** Π_{0≤a'<a} (e − a') at [e · radix + a], reduced mod the modulus when it is not 0. */
+function fallingTable(radix: number, modulus: number): Float64Array {
+  const fall = new Float64Array(radix * radix);
+  for (let e = 0; e < radix; e++) {
+    let v = 1;
+    for (let a = 0; a <= e; a++) {
+      fall[e * radix + a] = v;
+      v = modulus ? (v * (e - a)) % modulus : v * (e - a);
+    }
+  }
+  return fall;
+}
+
+function grow<T extends Int32Array | Float64Array>(old: T, into: T): T {
+  into.set(old);
+  return into;
 }

@@ -13,7 +13,7 @@ import type { SeedTerms } from './seeds.js';
 import { groupOrder, youngPlan } from './young-plan.js';
 
 // measured on the derivative route (Vandermonde n = 8 and 9, δ_{8,k}; both primes, CPU time)
-const SECONDS_PER_UNIT = 4e-8;
+export const SECONDS_PER_UNIT = 4e-8;
 const SECONDS_PER_ELIMINATION_UNIT = 2e-10;
 // iterated closures: measured on δ_{6,6} with P_1..P_5 (about 400 s of CPU, both primes)
 const SECONDS_PER_UNIT_POLAR = 4e-6;

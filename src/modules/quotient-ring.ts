@@ -1,4 +1,6 @@
 /**
+ * The dense reference route for quotients (kept to cross-check the quotient route of
+ * quotient-task.ts on small cases: every product, dense elimination, no criterion).
  * Quotients Q[vars]/I degree by degree (multigraded by x-, y-, θ-degree): I_d is spanned by
  * generator × monomial, dim (Ω/I)_d = #monomials − rank, all mod p. When the generator set is
  * permuted by S_n (up to sign), Frobenius multiplicities come from Young subgroups:

@@ -12,6 +12,8 @@ export interface SeedSupport {
   readonly count: number;
   readonly keys: Float64Array;
   readonly coeffs: Float64Array;
+  /** The coefficients mod a second prime, for builders that make both primes' entries at once. */
+  readonly coeffs2?: Float64Array;
   /** x exponents, term-major: xs[t * n + i]. */
   readonly xs: Int32Array;
   readonly ys: Int32Array;

@@ -1,17 +1,21 @@
 /** `quotient`: Q[vars]/I degree by degree, for the built-in ideals or typed generators. */
 import { InputError } from '../core/errors.js';
+import { DEFAULT_MAX_WORK } from '../modules/compute-module.js';
 import { computeQuotient } from '../modules/compute-quotient.js';
 import { resultToJson } from '../modules/format-result.js';
 import { checkIdealName, IDEAL_NAMES, type IdealSpec } from '../modules/ideals.js';
 import type { ModuleResult } from '../modules/module-result.js';
 import { flagOpt, intOpt, listOpt, strOpt, type OptionSpec } from './options.js';
 import type { RequestKind } from './request-kind.js';
+import { parseWork } from './work-limit.js';
 
 export interface QuotientRequest {
   readonly kind: 'quotient';
   readonly spec: IdealSpec;
   readonly frobenius: boolean;
   readonly prime?: number;
+  /** Refuse estimated work above this (not part of the request's key: it does not change the result). */
+  readonly maxWork?: number;
 }
 
 const VARS = ['x', 'y', 'theta'] as const;
@@ -24,11 +28,12 @@ export const QUOTIENT_OPTIONS: readonly OptionSpec[] = [
   { name: 'gens', type: 'string', description: 'generators of the ideal `generators`, separated by ";"', placeholder: 'TEXT' },
   { name: 'frobenius', type: 'flag', description: 'also the Schur expansion of every cell' },
   { name: 'prime', type: 'int', description: 'first prime (below 2^26); a second prime always confirms', placeholder: 'P', min: 2, max: 2 ** 26 - 1 },
+  { name: 'max-work', type: 'string', description: `refuse estimated work above W units (default ${DEFAULT_MAX_WORK.toExponential(1).replace('e+', 'e')}, about ten minutes)`, placeholder: 'W' },
 ];
 
 export const quotientKind: RequestKind<QuotientRequest, ModuleResult> = {
   name: 'quotient',
-  usage: 'quotient --ideal NAME --n N [--k K] [--vars x[,y][,theta]] [--gens "p; q; …"] [--frobenius] [--prime P] [--json]',
+  usage: 'quotient --ideal NAME --n N [--k K] [--vars x[,y][,theta]] [--gens "p; q; …"] [--frobenius] [--prime P] [--max-work W] [--json]',
   options: QUOTIENT_OPTIONS,
   fromArgs(args) {
     const name = strOpt(args, 'ideal');
@@ -42,11 +47,13 @@ export const quotientKind: RequestKind<QuotientRequest, ModuleResult> = {
     const k = intOpt(args, 'k');
     const gens = strOpt(args, 'gens')?.split(';').map((s) => s.trim()).filter(Boolean);
     const prime = intOpt(args, 'prime');
+    const maxWork = parseWork(strOpt(args, 'max-work'));
     return {
       kind: 'quotient',
       spec: { ideal, n, y: vars.includes('y'), theta: vars.includes('theta'), ...(k !== undefined ? { k } : {}), ...(gens ? { generators: gens } : {}) },
       frobenius: flagOpt(args, 'frobenius'),
       ...(prime !== undefined ? { prime } : {}),
+      ...(maxWork !== undefined ? { maxWork } : {}),
     };
   },
   canonical(r) {
@@ -69,6 +76,8 @@ export const quotientKind: RequestKind<QuotientRequest, ModuleResult> = {
     return computeQuotient(r.spec, {
       frobenius: r.frobenius,
       ...(r.prime !== undefined ? { prime: r.prime } : {}),
+      ...(r.maxWork !== undefined ? { maxWork: r.maxWork } : {}),
+      ...(context.onEstimate ? { onEstimate: context.onEstimate } : {}),
       ...(context.signal ? { signal: context.signal } : {}),
       onProgress: (done, total, label) => context.progress?.(label || 'quotient', done, total || undefined),
     });
