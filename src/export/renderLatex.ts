@@ -24,15 +24,16 @@ export function matchLatex(m: SearchMatch): string {
   const [qv, tv] = m.variant.includes('q-t-swapped') ? ['t', 'q'] : ['q', 't'];
   const sliced = m.combine.endsWith('-t0'); // Frobenius-level pair at t = 0: the objects with b = 0
   const form = sliced ? m.combine.slice(0, -3) : m.combine;
-  const weight = m.combine === 'sum' ? `${qv}^{${a} + ${b}}` : b === undefined || sliced ? `${qv}^{${a}}` : `${qv}^{${a}} ${tv}^{${b}}`;
+  // statistic names are long words in boxes: the line may break between the sum and the weight and between q and t
+  const weight = m.combine === 'sum' ? `${qv}^{${a} + ${b}}` : b === undefined || sliced ? `${qv}^{${a}}` : `${qv}^{${a}} \\allowbreak ${tv}^{${b}}`;
   const sym = form === 'shape' ? ' s_{\\lambda(x)}' : form === 'fundamental' ? ' F_{\\mathrm{Des}(w(x))}' : form === 'ifundamental' ? ' F_{\\mathrm{iDes}(w(x))}' : '';
   // a shape or content following n by a template ("shape = (n−1,1)") is written out
   const lists = m.mapping.split(', ').filter((x) => / = \(/.test(x)).map((x) => `\\mbox{${latexText(x)}}`);
   const params = lists.length ? lists.join(',') : m.mapping.includes('k') ? 'n,k' : 'n';
   const where = sliced ? `,\\ ${b} = 0` : '';
   let body = form === 'content'
-    ? `\\sum_{\\mu \\vdash n} m_\\mu \\sum_{x \\in ${latexId(m.family)}(\\mu${params.includes('k') ? ',k' : ''})${where}} ${weight}`
-    : `\\sum_{x \\in ${latexId(m.family)}(${params})${where}} ${weight}${sym}`;
+    ? `\\sum_{\\mu \\vdash n} m_\\mu \\sum_{x \\in ${latexId(m.family)}(\\mu${params.includes('k') ? ',k' : ''})${where}} \\allowbreak ${weight}`
+    : `\\sum_{x \\in ${latexId(m.family)}(${params})${where}} \\allowbreak ${weight}${sym}`;
   if (m.variant.includes('q-reversed')) body = `\\mathrm{rev}_q\\left(${body}\\right)`;
   if (m.variant.startsWith('omega')) body = `\\omega\\left(${body}\\right)`;
   return body;

@@ -24,6 +24,8 @@ beforeAll(() => {
   cat = join(dir, 'catalogue.sqlite');
   const r = runCli(['catalogue', 'build', '--n-max', '5', '--families', 'ordered-set-partitions', '--catalogue', cat]);
   expect(r.code, r.stderr).toBe(0);
+  const e = runCli(['expressions', 'build', '--n-max', '5', '--families', 'deltaprime-e', '--catalogue', cat]);
+  expect(e.code, e.stderr).toBe(0);
 });
 
 function sweep(words: string[]): SweepDocument {
@@ -121,6 +123,10 @@ describe('gradus sweep', () => {
     for (const p of row.places) expect(gradedDims(keptDocument(p.key))[0].equals(fact(p.k!).mul(S(p.n, p.k!))), `n=${p.n} k=${p.k}`).toBe(true);
     // the ordered-set-partition statistics of the catalogue (Remmel–Wilson; Haglund–Remmel–Wilson, Trans. Amer. Math. Soc. 370 (2018))
     expect(row.findings.find((f) => f.kind === 'statistic')?.verified).toMatch(/on ordered-set-partitions .* on n = 1\.\.5, all k = 1\.\.n/);
+    // and the expression library names it by the Delta family at t = 0 (Haglund–Rhoades–Shimozono, Adv. Math. 329 (2018); compared on every place)
+    const expression = row.findings.find((f) => f.kind === 'expression');
+    expect(expression?.claim).toMatch(/deltaprime\(e\(\{k\}-1\), e\(\{n\}\)\)/);
+    expect(expression?.verified).toMatch(/on n = 1\.\.5, all k = 1\.\.n; at n=5,k=\d: gradus sym "/);
     expect(doc.rows.find((r) => r.seed === 'δ_{n,k} with height 1')!.findings.some((f) => f.kind === 'q-analog')).toBe(false);
   });
 

@@ -89,7 +89,7 @@ describe('sources in exports', () => {
     }
   });
 
-  it('no export of a search mentions MATH.md, DESIGN.md or any other notes file', () => {
+  it('no export of a search names a Markdown notes file', () => {
     for (const doc of Object.values(docs)) {
       for (const text of [renderMarkdown(exportModel(doc, 10)), renderLatex(exportModel(doc, 10)), renderJson(exportModel(doc, 10))]) {
         expect(text).not.toMatch(/MATH\.md|DESIGN\.md|\w\.md\b/);

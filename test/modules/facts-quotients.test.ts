@@ -43,12 +43,12 @@ describe('generalized coinvariant ring R_{n,k} = x-closure of δ_{n,k} up to ω 
 });
 
 describe('Q[x,y,θ]/⟨invariants⟩', () => {
-  it('n = 4: dimension 288 (a general commutative-algebra system, mod 32003, quoted in the issue and in MATH.md §5); the comparison with Σ_k z^(n−k) Δ′_{e_(k−1)} e_n ("A module for the Delta conjecture", a conjecture) is reported and holds', () => {
+  it('n = 4: dimension 288 (a general commutative-algebra system, mod 32003, as quoted in issue 13); the comparison with Σ_k z^(n−k) Δ′_{e_(k−1)} e_n ("A module for the Delta conjecture", a conjecture) is reported and holds', () => {
     const q = computeQuotient({ ideal: 'coinvariant', n: 4, y: true, theta: true }, { frobenius: true });
     expect(q.cells.reduce((s, c) => s + c.dim, 0)).toBe(288);
     expect(q.checks.find((c) => c.check.startsWith('Frobenius series equals Σ_k'))?.holds).toBe(true);
   });
-  it('n = 3, θ only: Hilbert series Σ_k z^(n−k) [k]_q! Stir_q(n,k) ("The Hilbert series of the superspace coinvariant ring", Rhoades–Wilson — from memory of the title, MATH.md §5): dimension 13 = Σ_k k!·S(3,k), and the Δ′ finding at t = 0 holds', () => {
+  it('n = 3, θ only: Hilbert series Σ_k z^(n−k) [k]_q! Stir_q(n,k) ("The Hilbert series of the superspace coinvariant ring", Rhoades–Wilson — from memory of the title): dimension 13 = Σ_k k!·S(3,k), and the Δ′ finding at t = 0 holds', () => {
     const q = computeQuotient({ ideal: 'coinvariant', n: 3, theta: true }, { frobenius: true });
     expect(q.cells.reduce((s, c) => s + c.dim, 0)).toBe(1 * 1 + 2 * 3 + 6 * 1);
     expect(q.checks.find((c) => c.check.startsWith('Frobenius series equals Σ_k'))?.holds).toBe(true);
