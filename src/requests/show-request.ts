@@ -1,5 +1,6 @@
 /** `show`: objects of a family drawn as text, with chosen statistics beside each. */
 import { familyById } from '../../objects/index.js';
+import { arrayFrom, map, range, take } from 'iter-tools';
 import { InputError } from '../core/errors.js';
 import type { Params } from '../enumerate/plugin.js';
 import { FAMILY_PARAM_OPTIONS, familyParams, paramOptionValues, resolveStatistic } from './family-params.js';
@@ -75,17 +76,11 @@ export const showKind: RequestKind<ShowRequest, ShowResult> = {
     const family = familyById(r.family);
     const stats = r.statistics.map((s) => resolveStatistic(family, s));
     const count = family.count(r.params);
-    const drawn: unknown[] = [];
-    if (r.sample !== undefined && count > 0n) {
-      const random = seeded(r.sample);
-      for (let i = 0; i < r.limit; i++) drawn.push(family.sample(r.params, random));
-    } else if (r.sample === undefined) {
-      for (const x of family.generate(r.params)) {
-        if (drawn.length >= r.limit) break;
-        drawn.push(x);
-      }
-    }
-    const objects = drawn.map((x) => ({ key: family.key(x), text: family.render(x), object: x, stats: Object.fromEntries(stats.map((s) => [s.id, s.compute(x)])) }));
+    const random = seeded(r.sample ?? 1);
+    // objects drawn lazily: a family of billions is read only as far as --limit
+    const source: Iterable<unknown> =
+      r.sample === undefined ? family.generate(r.params) : count > 0n ? map(() => family.sample(r.params, random), range(r.limit)) : [];
+    const objects = arrayFrom(map((x) => ({ key: family.key(x), text: family.render(x), object: x, stats: Object.fromEntries(stats.map((s) => [s.id, s.compute(x)])) }), take(r.limit, source)));
     return { family: r.family, params: r.params, count, statistics: stats.map((s) => s.id), objects, ...(r.sample !== undefined ? { sample: r.sample } : {}) };
   },
   document(r, result) {
