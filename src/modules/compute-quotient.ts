@@ -20,6 +20,11 @@ import { quotientRequest, type QuotientRequest } from './quotient-input.js';
 import { certificateFailure, mergeQuotientTasks, quotientTasks } from './quotient-route.js';
 import type { QuotientTask, QuotientTaskResult } from './quotient-spec.js';
 import { runQuotientTask } from './quotient-task.js';
+import { ModuleCheckpoint } from './module-checkpoint.js';
+import { runTask } from '../pool/pool.js';
+import { VERSION } from '../version.js';
+
+const QUOTIENT_TASK = new URL('./quotient-pool-task.ts', import.meta.url);
 
 export interface QuotientOptions {
   readonly frobenius?: boolean;
@@ -34,6 +39,72 @@ export interface QuotientOptions {
   readonly precomputed?: ReadonlyMap<number, readonly ModuleCell[]>;
   /** Compute the first prime only, without confirmation (a shard; the merge confirms). */
   readonly onePrime?: boolean;
+  /** computeQuotientAsync: finished work is appended to this file and read back on the next start. */
+  readonly checkpoint?: string;
+  /** Internal: results of tasks already computed (worker threads, a checkpoint), by taskKey. */
+  readonly taskResults?: ReadonlyMap<string, QuotientTaskResult>;
+}
+
+/** What a task computes, as a key: its functional, primes, degree bounds and certificate. */
+export function taskKey(task: QuotientTask): string {
+  return `${task.functional}|${task.primes.join(',')}|${task.xyBounds.join(',')}|${task.certify ? 'c' : ''}`;
+}
+
+/** Worker threads of the asynchronous route. */
+const THREADS = 2;
+
+/**
+ * The quotient with its tasks (one per Young functional, both primes in each) on worker threads,
+ * each finished task appended to the checkpoint when there is one; then the in-thread route
+ * assembles the result from them (and computes in-thread only what a failed certificate adds).
+ */
+export async function computeQuotientAsync(spec: IdealSpec, options: QuotientOptions = {}): Promise<ModuleResult> {
+  if (options.precomputed || options.onePrime) return computeQuotient(spec, options);
+  const frob = options.frobenius ?? false;
+  const req = quotientRequest(spec, frob);
+  const p1 = options.prime ?? DEFAULT_PRIME;
+  const p2 = p1 === CONFIRM_PRIME ? DEFAULT_PRIME : CONFIRM_PRIME;
+  // a file that is not our checkpoint for this request is refused before anything else is said
+  const cp = options.checkpoint !== undefined ? new ModuleCheckpoint(options.checkpoint, { gradus: VERSION, kind: 'quotient', spec, frobenius: frob, primes: [p1, p2] }) : undefined;
+  const tasks = quotientTasks(req, [p1, p2], req.expectedBounds, true);
+  const est = estimateQuotientWork(req.input, tasks);
+  options.onEstimate?.(est.units, est.seconds);
+  const limit = options.maxWork ?? DEFAULT_MAX_WORK;
+  if (est.units > limit) {
+    throw new LimitError(`estimated work ${est.units.toExponential(2)} units (about ${Math.round(est.seconds)} s) exceeds the limit ${limit.toExponential(2)}; raise it with --max-work`, 'max-work');
+  }
+  const results = new Map<string, QuotientTaskResult>();
+  const done = new Map<string, number>();
+  const total = Math.max(est.units, 1);
+  let reused = 0;
+  for (const t of tasks) {
+    const saved = cp?.piece(taskKey(t));
+    if (!saved) continue;
+    results.set(taskKey(t), saved);
+    done.set(taskKey(t), estimateQuotientWork(req.input, [t]).units);
+    reused++;
+  }
+  const report = (label: string) => options.onProgress?.(Math.min(total, [...done.values()].reduce((a, b) => a + b, 0)), total, label);
+  // the largest tasks first, so the two threads finish together
+  const todo = tasks.filter((t) => !results.has(taskKey(t))).sort((a, b) => estimateQuotientWork(req.input, [b]).units - estimateQuotientWork(req.input, [a]).units);
+  await Promise.all(
+    todo.map(async (task) => {
+      const key = taskKey(task);
+      const r = await runTask<QuotientTaskResult>(QUOTIENT_TASK, 'quotientTaskJob', { spec, frobenius: frob, task }, {
+        threads: THREADS,
+        ...(options.signal ? { signal: options.signal } : {}),
+        onProgress: (label, d) => {
+          done.set(key, d);
+          report(label);
+        },
+      });
+      results.set(key, r);
+      cp?.recordPiece(key, r);
+    }),
+  );
+  const result = computeQuotient(spec, { ...options, onEstimate: undefined, maxWork: Infinity, taskResults: results });
+  if (cp && reused > 0) return { ...result, provenance: { ...result.provenance, notes: [...result.provenance.notes, cp.note()] } };
+  return result;
 }
 
 export function computeQuotient(spec: IdealSpec, options: QuotientOptions = {}): ModuleResult {
@@ -118,6 +189,8 @@ export function computeQuotient(spec: IdealSpec, options: QuotientOptions = {}):
 
 function runAll(req: QuotientRequest, tasks: readonly QuotientTask[], progress: { done: number; total: number }, options: QuotientOptions): QuotientTaskResult[] {
   return tasks.map((task) => {
+    const known = options.taskResults?.get(taskKey(task));
+    if (known) return known;
     const label = req.input.functionals[task.functional]!.label;
     return runQuotientTask(
       req.input,

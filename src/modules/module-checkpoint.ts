@@ -1,8 +1,9 @@
 /**
- * Resumable module runs: a JSON-lines file whose first line names our format and the request,
- * and whose other lines are finished units of work — a Young-subgroup task (its ranks in every
- * cell, for both primes) or a whole one-prime run (its cells) — each with a check that ties it
- * to the request. A file is only written after it has been read as ours: anything else at the
+ * Resumable module and quotient runs: a JSON-lines file whose first line names our format and
+ * the request, and whose other lines are finished units of work — a Young-subgroup task (its
+ * ranks in every cell, for both primes), a whole one-prime run (its cells) or a quotient task
+ * (the dimensions of its cells for one Young functional) — each with a check that ties it to
+ * the request. A file is only written after it has been read as ours: anything else at the
  * path is refused untouched. A line torn by a kill is dropped; an edited line is refused.
  */
 import { createHash } from 'node:crypto';
@@ -13,6 +14,7 @@ import { InputError } from '../core/errors.js';
 import { parseWith } from '../core/schema.js';
 import { stableJson } from '../core/stable-json.js';
 import type { ModuleCell } from './module-cell.js';
+import type { QuotientTaskResult } from './quotient-spec.js';
 
 const FORMAT = 'gradus-checkpoint';
 const VERSION = 1;
@@ -21,11 +23,24 @@ const COUNT = z.number().int().min(0).max(2 ** 53);
 const TASK_LINE = z.object({ task: z.number().int().min(0).max(100_000), ranks: z.array(z.array(COUNT)), check: z.string() });
 const CELL = z.object({ degree: z.tuple([COUNT, COUNT, COUNT]), dim: COUNT, multiplicities: z.array(z.number().int()).optional() });
 const PRIME_LINE = z.object({ prime: z.number().int().min(2).max(2 ** 26), cells: z.array(CELL), check: z.string() });
-const LINE = z.union([TASK_LINE, PRIME_LINE]);
+const QUOTIENT_LINE = z.object({
+  piece: z.string().max(2000),
+  result: z.object({
+    functional: z.number().int().min(0).max(100_000),
+    primes: z.array(z.number().int().min(2).max(2 ** 26)).max(8),
+    degrees: z.array(z.tuple([COUNT, COUNT, COUNT])),
+    dims: z.array(z.array(z.number().int().min(-1).max(2 ** 53))),
+    certificate: z.array(z.boolean()),
+    stats: z.object({ columns: COUNT, rows: COUNT, zero: COUNT, applied: COUNT }),
+  }),
+  check: z.string(),
+});
+const LINE = z.union([TASK_LINE, PRIME_LINE, QUOTIENT_LINE]);
 
 export class ModuleCheckpoint {
   private readonly tasks = new Map<number, number[][]>();
   private readonly primes = new Map<number, ModuleCell[]>();
+  private readonly pieces = new Map<string, QuotientTaskResult>();
   private readonly header: string;
   /** Units read from the file (not recomputed). */
   readonly reused: number;
@@ -45,7 +60,7 @@ export class ModuleCheckpoint {
     // a torn last line (a kill during an append) is dropped, so appends start on a fresh line;
     // the file is ours (its first line and every line before were checked)
     if (end < text.length) truncateSync(file, Buffer.byteLength(text.slice(0, end)));
-    this.reused = this.tasks.size + this.primes.size;
+    this.reused = this.tasks.size + this.primes.size + this.pieces.size;
   }
 
   /** The file's text, or undefined when it was just created with our first line. */
@@ -111,6 +126,7 @@ export class ModuleCheckpoint {
     const { check, ...payload } = e;
     if (check !== this.check(payload)) throw new InputError(`--resume: line ${lineNo} of ${this.file} was changed after gradus wrote it (its check does not match); use a new file`, 'resume');
     if ('task' in e) this.tasks.set(e.task, e.ranks);
+    else if ('piece' in e) this.pieces.set(e.piece, e.result);
     else this.primes.set(e.prime, e.cells as ModuleCell[]);
   }
 
@@ -141,8 +157,18 @@ export class ModuleCheckpoint {
     this.append({ prime, cells: cells.map((c) => ({ degree: c.degree, dim: c.dim, ...(c.multiplicities ? { multiplicities: c.multiplicities } : {}) })) });
   }
 
+  /** A recorded quotient task, by the key of its work (functional, primes, degree bounds). */
+  piece(key: string): QuotientTaskResult | undefined {
+    return this.pieces.get(key);
+  }
+
+  recordPiece(key: string, result: QuotientTaskResult): void {
+    this.pieces.set(key, result);
+    this.append({ piece: key, result: { functional: result.functional, primes: result.primes, degrees: result.degrees, dims: result.dims, certificate: result.certificate, stats: result.stats } });
+  }
+
   note(): string {
-    return `${this.reused} finished unit${this.reused === 1 ? '' : 's'} (Young-subgroup tasks or one-prime runs) read from the checkpoint ${this.file}`;
+    return `${this.reused} finished unit${this.reused === 1 ? '' : 's'} (Young-subgroup tasks, one-prime runs or quotient tasks) read from the checkpoint ${this.file}`;
   }
 
   /** The given task indices not yet recorded. */

@@ -1,7 +1,8 @@
 /** `quotient`: Q[vars]/I degree by degree, for the built-in ideals or typed generators. */
+import { resolve } from 'node:path';
 import { InputError } from '../core/errors.js';
 import { DEFAULT_MAX_WORK } from '../modules/compute-module.js';
-import { computeQuotient } from '../modules/compute-quotient.js';
+import { computeQuotientAsync } from '../modules/compute-quotient.js';
 import { resultToJson } from '../modules/format-result.js';
 import { checkIdealName, IDEAL_NAMES, type IdealSpec } from '../modules/ideals.js';
 import type { ModuleResult } from '../modules/module-result.js';
@@ -16,6 +17,8 @@ export interface QuotientRequest {
   readonly prime?: number;
   /** Refuse estimated work above this (not part of the request's key: it does not change the result). */
   readonly maxWork?: number;
+  /** --resume FILE (an absolute path): the checkpoint file of a resumable run. */
+  readonly checkpoint?: string;
 }
 
 const VARS = ['x', 'y', 'theta'] as const;
@@ -29,13 +32,14 @@ export const QUOTIENT_OPTIONS: readonly OptionSpec[] = [
   { name: 'frobenius', type: 'flag', description: 'also the Schur expansion of every cell' },
   { name: 'prime', type: 'int', description: 'first prime (below 2^26); a second prime always confirms', placeholder: 'P', min: 2, max: 2 ** 26 - 1 },
   { name: 'max-work', type: 'string', description: `refuse estimated work above W units (default ${DEFAULT_MAX_WORK.toExponential(1).replace('e+', 'e')}, about ten minutes)`, placeholder: 'W' },
+  { name: 'resume', type: 'string', description: 'checkpoint file: each finished task is appended to it, and a rerun of the same request reads it back instead of recomputing', placeholder: 'FILE' },
 ];
 
 export const quotientKind: RequestKind<QuotientRequest, ModuleResult> = {
   name: 'quotient',
-  usage: 'quotient --ideal NAME --n N [--k K] [--vars x[,y][,theta]] [--gens "p; q; …"] [--frobenius] [--prime P] [--max-work W] [--json]',
+  usage: 'quotient --ideal NAME --n N [--k K] [--vars x[,y][,theta]] [--gens "p; q; …"] [--frobenius] [--prime P] [--max-work W] [--resume FILE] [--json]',
   options: QUOTIENT_OPTIONS,
-  fromArgs(args) {
+  fromArgs(args, cwd) {
     const name = strOpt(args, 'ideal');
     if (!name) throw new InputError(`quotient needs --ideal NAME (${IDEAL_NAMES.join(', ')})`, 'ideal');
     const ideal = checkIdealName(name);
@@ -48,12 +52,15 @@ export const quotientKind: RequestKind<QuotientRequest, ModuleResult> = {
     const gens = strOpt(args, 'gens')?.split(';').map((s) => s.trim()).filter(Boolean);
     const prime = intOpt(args, 'prime');
     const maxWork = parseWork(strOpt(args, 'max-work'));
+    const file = strOpt(args, 'resume');
+    if (file !== undefined && file.trim() === '') throw new InputError('--resume needs a file name', 'resume');
     return {
       kind: 'quotient',
       spec: { ideal, n, y: vars.includes('y'), theta: vars.includes('theta'), ...(k !== undefined ? { k } : {}), ...(gens ? { generators: gens } : {}) },
       frobenius: flagOpt(args, 'frobenius'),
       ...(prime !== undefined ? { prime } : {}),
       ...(maxWork !== undefined ? { maxWork } : {}),
+      ...(file !== undefined ? { checkpoint: resolve(cwd, file) } : {}),
     };
   },
   canonical(r) {
@@ -73,10 +80,11 @@ export const quotientKind: RequestKind<QuotientRequest, ModuleResult> = {
     };
   },
   async compute(r, context) {
-    return computeQuotient(r.spec, {
+    return computeQuotientAsync(r.spec, {
       frobenius: r.frobenius,
       ...(r.prime !== undefined ? { prime: r.prime } : {}),
       ...(r.maxWork !== undefined ? { maxWork: r.maxWork } : {}),
+      ...(r.checkpoint !== undefined ? { checkpoint: r.checkpoint } : {}),
       ...(context.onEstimate ? { onEstimate: context.onEstimate } : {}),
       ...(context.signal ? { signal: context.signal } : {}),
       onProgress: (done, total, label) => context.progress?.(label || 'quotient', done, total || undefined),

@@ -1,7 +1,7 @@
 /** Run the real command line as a child process, as users meet it. */
 import { spawnSync } from 'node:child_process';
 
-const BIN = new URL('../../bin/gradus.mjs', import.meta.url).pathname;
+export const BIN = new URL('../../bin/gradus.mjs', import.meta.url).pathname;
 
 export interface CliResult {
   code: number;
