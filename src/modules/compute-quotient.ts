@@ -84,7 +84,8 @@ export async function computeQuotientAsync(spec: IdealSpec, options: QuotientOpt
     done.set(taskKey(t), estimateQuotientWork(req.input, [t]).units);
     reused++;
   }
-  const report = (label: string) => options.onProgress?.(Math.min(total, [...done.values()].reduce((a, b) => a + b, 0)), total, label);
+  // one phase for the whole run (front ends draw one bar per phase)
+  const report = () => options.onProgress?.(Math.min(total, [...done.values()].reduce((a, b) => a + b, 0)), total, `quotient: ${tasks.length} Young-subgroup tasks on ${THREADS} threads`);
   // the largest tasks first, so the two threads finish together
   const todo = tasks.filter((t) => !results.has(taskKey(t))).sort((a, b) => estimateQuotientWork(req.input, [b]).units - estimateQuotientWork(req.input, [a]).units);
   await Promise.all(
@@ -93,9 +94,9 @@ export async function computeQuotientAsync(spec: IdealSpec, options: QuotientOpt
       const r = await runTask<QuotientTaskResult>(QUOTIENT_TASK, 'quotientTaskJob', { spec, frobenius: frob, task }, {
         threads: THREADS,
         ...(options.signal ? { signal: options.signal } : {}),
-        onProgress: (label, d) => {
+        onProgress: (_label, d) => {
           done.set(key, d);
-          report(label);
+          report();
         },
       });
       results.set(key, r);
